@@ -1,0 +1,11 @@
+package kitwright.cli;
+
+/** Entry point of the runnable jar. */
+public final class Main {
+    private Main() {
+    }
+
+    public static void main(String[] args) {
+        System.exit(KitwrightCommand.execute(args));
+    }
+}
