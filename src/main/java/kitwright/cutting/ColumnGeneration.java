@@ -37,6 +37,8 @@ import java.util.Map;
  */
 final class ColumnGeneration implements AutoCloseable {
     private static final double REDUCED_COST_TOLERANCE = 1e-9;
+    /** Weight of the stability centre in Wentges smoothing. */
+    private static final double SMOOTHING = 0.5;
 
     private final IntegerInstance instance;
     private final MPSolver master;
@@ -51,6 +53,7 @@ final class ColumnGeneration implements AutoCloseable {
     private final int iterationLimit;
     private final Deadline deadline;
     private int iterations;
+    private int seed;
 
     /** Outcome of one relaxation: see {@link Kind}. Costs and bounds in integer cost units. */
     record Relaxation(Kind kind, double value, double bound, double[] x, double[] shortage) {
@@ -130,7 +133,7 @@ final class ColumnGeneration implements AutoCloseable {
         if (limitRows[p.stock()] != null) {
             limitRows[p.stock()].setCoefficient(x, 1);
         }
-        master.objective().setCoefficient(x, instance.cost[p.stock()] / costScale);
+        master.objective().setCoefficient(x, coefficient(p.stock(), columns.size()));
         index.put(p, columns.size());
         columns.add(p);
         variables.add(x);
@@ -157,6 +160,8 @@ final class ColumnGeneration implements AutoCloseable {
         boolean phaseOne = false;
         setPhase(false);
         double bestBound = Double.NEGATIVE_INFINITY;
+        double[] centerPi = null;
+        double[] centerMu = null;
         while (true) {
             MPSolver.ResultStatus status = master.solve();
             if (status != MPSolver.ResultStatus.OPTIMAL) {
@@ -176,25 +181,23 @@ final class ColumnGeneration implements AutoCloseable {
                 mu[k] = limitRows[k] == null ? 0 : Math.min(0, limitRows[k].dualValue());
             }
             double objective = master.objective().value();
-            KnapsackPricing.Priced priced = pricing.price(pi, bound);
-            iterations++;
-            List<Pattern> entering = new ArrayList<>();
-            double lagrangian = 0;
-            for (int i = 0; i < pi.length; i++) {
-                lagrangian += pi[i] * residual[i];
-            }
-            for (int k = 0; k < instance.stocks(); k++) {
-                double cost = phaseOne ? 0 : instance.cost[k] / costScale;
-                double reduced = cost - mu[k] - priced.value()[k];
-                if (limitRows[k] != null) {
-                    lagrangian += mu[k] * available[k];
+            // Wentges smoothing: price at a point between the best-bound duals and the master's duals; when that
+            // point yields no column that improves the master (a mis-price), price at the master's duals
+            double alpha = phaseOne || centerPi == null ? 0 : SMOOTHING;
+            Round round;
+            while (true) {
+                double[] pricePi = mix(centerPi, pi, alpha);
+                double[] priceMu = mix(centerMu, mu, alpha);
+                round = price(pricePi, priceMu, pi, mu, residual, available, bound, phaseOne);
+                if (!phaseOne && round.lagrangian() * costScale > bestBound) {
+                    bestBound = round.lagrangian() * costScale;
+                    centerPi = pricePi;
+                    centerMu = priceMu;
                 }
-                lagrangian += instance.usable(k, residual, available) * Math.min(0, reduced);
-                Pattern p = priced.pattern()[k];
-                if (reduced < -REDUCED_COST_TOLERANCE && !p.isEmpty() && !index.containsKey(p)
-                        && !entering.contains(p)) {
-                    entering.add(p);
+                if (!round.entering().isEmpty() || alpha == 0 || exhausted()) {
+                    break;
                 }
+                alpha = 0;
             }
             if (phaseOne) {
                 if (objective <= 1e-7) {
@@ -202,15 +205,14 @@ final class ColumnGeneration implements AutoCloseable {
                     setPhase(false);
                     continue;
                 }
-                if (entering.isEmpty()) {
+                if (round.entering().isEmpty()) {
                     return infeasible();
                 }
                 if (exhausted()) {
                     return stopped(residual, Double.NEGATIVE_INFINITY);
                 }
             } else {
-                bestBound = Math.max(bestBound, lagrangian * costScale);
-                if (entering.isEmpty()) {
+                if (round.entering().isEmpty() && alpha == 0) {
                     return new Relaxation(Kind.OPTIMAL, objective * costScale, Math.min(bestBound,
                             objective * costScale), values(), new double[instance.types()]);
                 }
@@ -218,10 +220,56 @@ final class ColumnGeneration implements AutoCloseable {
                     return stopped(residual, bestBound);
                 }
             }
-            for (Pattern p : entering) {
+            for (Pattern p : round.entering()) {
                 add(p);
             }
         }
+    }
+
+    /** One pricing: the Lagrangian bound at the pricing duals, and the columns that improve the master. */
+    private record Round(double lagrangian, List<Pattern> entering) {
+    }
+
+    private Round price(double[] pi, double[] mu, double[] masterPi, double[] masterMu, int[] residual,
+                        int[] available, int[] bound, boolean phaseOne) {
+        KnapsackPricing.Priced priced = pricing.price(pi, bound);
+        iterations++;
+        List<Pattern> entering = new ArrayList<>();
+        double lagrangian = 0;
+        for (int i = 0; i < pi.length; i++) {
+            lagrangian += pi[i] * residual[i];
+        }
+        for (int k = 0; k < instance.stocks(); k++) {
+            double cost = phaseOne ? 0 : instance.cost[k] / costScale;
+            double reduced = cost - mu[k] - priced.value()[k];
+            if (limitRows[k] != null) {
+                lagrangian += mu[k] * available[k];
+            }
+            lagrangian += instance.usable(k, residual, available) * Math.min(0, reduced);
+            // the column enters when it prices out at the master's own duals
+            Pattern p = priced.pattern()[k];
+            double masterReduced = cost - masterMu[k];
+            for (int i = 0; i < masterPi.length; i++) {
+                masterReduced -= masterPi[i] * p.count(i);
+            }
+            if (masterReduced < -REDUCED_COST_TOLERANCE && !p.isEmpty() && !index.containsKey(p)
+                    && !entering.contains(p)) {
+                entering.add(p);
+            }
+        }
+        return new Round(lagrangian, entering);
+    }
+
+    /** alpha * center + (1 - alpha) * current; the current duals when there is no center. */
+    private static double[] mix(double[] center, double[] current, double alpha) {
+        if (center == null || alpha == 0) {
+            return current;
+        }
+        double[] mixed = new double[current.length];
+        for (int i = 0; i < mixed.length; i++) {
+            mixed[i] = alpha * center[i] + (1 - alpha) * current[i];
+        }
+        return mixed;
     }
 
     private Relaxation stopped(int[] residual, double bound) {
@@ -253,9 +301,33 @@ final class ColumnGeneration implements AutoCloseable {
             master.objective().setCoefficient(shortage[i], one ? instance.size[i] / maxSize : 0);
         }
         for (int j = 0; j < variables.size(); j++) {
-            master.objective().setCoefficient(variables.get(j),
-                    one ? 0 : instance.cost[columns.get(j).stock()] / costScale);
+            master.objective().setCoefficient(variables.get(j), one ? 0 : coefficient(columns.get(j).stock(), j));
         }
+    }
+
+    /**
+     * Perturbs the master's costs by up to 1e-4 of their value, by a fixed pseudo-random rule per seed (0 = none),
+     * so that a degenerate relaxation shows another of its optimal vertices to the next dive. Bounds stay valid:
+     * they are computed with the true costs.
+     */
+    void perturb(int seed) {
+        this.seed = seed;
+        for (int j = 0; j < variables.size(); j++) {
+            master.objective().setCoefficient(variables.get(j), coefficient(columns.get(j).stock(), j));
+        }
+    }
+
+    private double coefficient(int stock, int column) {
+        double cost = instance.cost[stock] / costScale;
+        if (seed == 0) {
+            return cost;
+        }
+        long h = (column + 1) * 0x9E3779B97F4A7C15L ^ seed * 0xC2B2AE3D27D4EB4FL;
+        h ^= h >>> 31;
+        h *= 0xBF58476D1CE4E5B9L;
+        h ^= h >>> 29;
+        double unit = (h >>> 11) / (double) (1L << 53);
+        return cost * (1 + 1e-4 * unit) + 1e-6 * unit;
     }
 
     @Override

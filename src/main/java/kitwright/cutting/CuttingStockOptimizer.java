@@ -32,6 +32,10 @@ import kitwright.model.Status;
  * of the one-dimensional cutting stock problem", EJOR 84.
  */
 public final class CuttingStockOptimizer implements SectionSolver {
+    /** Sections with more bars than this skip the backtracking dive: each of its nodes costs too much. */
+    private static final int BACKTRACKING_PIECES = 5_000;
+    /** Most patterns the waste-bounded model enumerates. */
+    private static final int WASTE_BOUNDED_PATTERNS = 30_000;
 
     /**
      * The plan with what the solve learnt on the way, for tests and benchmarks.
@@ -93,8 +97,8 @@ public final class CuttingStockOptimizer implements SectionSolver {
             }
             FirstFitDecreasing.Result ffd = FirstFitDecreasing.pack(instance, demand, available);
             if (ffd.complete()) {
+                firstFitValue = PlanAssembler.value(problem, ffd.packing());
                 offer(ffd.packing());
-                firstFitValue = PlanAssembler.value(problem, incumbent);
             }
             bound = AchievableValues.materialBound(instance, demand);
             report("first-fit decreasing");
@@ -113,17 +117,35 @@ public final class CuttingStockOptimizer implements SectionSolver {
                             Shortage.reason(instance, missing, "not enough stock for")));
                 }
                 bound = Math.max(bound, safe(root.bound()));
+                if (Boolean.getBoolean("kitwright.debug")) {
+                    System.err.println("root " + root.kind() + " iterations " + generation.iterations() + " columns "
+                            + generation.columns().size() + " unit " + instance.unit + " capacity " + instance.maxCapacity);
+                }
                 if (root.kind() == ColumnGeneration.Kind.OPTIMAL) {
                     linearBound = root.value() / instance.scale;
                 }
                 report("lower bound");
                 if (!proven() && !deadline.passed()) {
-                    offer(DivingHeuristic.dive(instance, generation, root, incumbentCost, limits, deadline));
+                    // one dive for any better plan
+                    new DivingHeuristic(instance, generation, limits, deadline, incumbentCost - 1, 1,
+                            instance.totalPieces(demand) > BACKTRACKING_PIECES, this::offer)
+                            .run(root, limits.divingNodes());
                     report("integer");
+                }
+                if (!proven() && !deadline.passed()) {
+                    decideWithOneStockLength();
                 }
                 if (!proven() && !deadline.passed()) {
                     offer(PatternSelection.solve(instance, generation.columns(), demand, available, incumbent,
                             lowerCost(), incumbentCost, limits.integerDeterministicTime(), deadline));
+                    report("integer");
+                }
+                long target = AchievableValues.nextAchievable(instance, bound, incumbentCost);
+                if (!proven() && !deadline.passed() && incumbentCost - target <= maxStockCost()
+                        && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
+                    // within one stock piece of the bound: search with backtracking for a plan at it
+                    new DivingHeuristic(instance, generation, limits, deadline, target, 3, false, this::offer)
+                            .run(root, limits.divingNodes());
                     report("integer");
                 }
                 if (!proven() && !deadline.passed()) {
@@ -183,12 +205,55 @@ public final class CuttingStockOptimizer implements SectionSolver {
             if (candidate == null || !candidate.covers(instance, demand, available)) {
                 return;
             }
-            Packing exact = candidate.withoutSurplus(instance, demand);
+            Packing exact = StockReassignment.cheapest(instance, RemnantConsolidation.consolidate(instance,
+                    candidate.withoutSurplus(instance, demand)), available);
             long cost = exact.cost(instance);
             if (cost < incumbentCost) {
                 incumbent = exact;
                 incumbentCost = cost;
             }
+        }
+
+        private long maxStockCost() {
+            long max = 0;
+            for (long c : instance.cost) {
+                max = Math.max(max, c);
+            }
+            return max;
+        }
+
+        /**
+         * With one usable stock type, asks the waste-bounded model for a plan of ceil(bound / cost) pieces: found,
+         * it is optimal; impossible, the bound rises by one piece.
+         */
+        private void decideWithOneStockLength() {
+            int stock = -1;
+            for (int k = 0; k < instance.stocks(); k++) {
+                if (available[k] != 0) {
+                    if (stock >= 0) {
+                        return;
+                    }
+                    stock = k;
+                }
+            }
+            if (stock < 0 || instance.cost[stock] == 0) {
+                return;
+            }
+            long cost = instance.cost[stock];
+            long pieces = AchievableValues.nextAchievable(instance, bound, incumbentCost) / cost;
+            if (pieces * cost >= incumbentCost || (available[stock] > 0 && pieces > available[stock])) {
+                return;
+            }
+            WasteBoundedPatterns.Outcome outcome = WasteBoundedPatterns.solve(instance, stock, demand, pieces,
+                    WASTE_BOUNDED_PATTERNS, limits.exactDeterministicTime(), deadline);
+            if (outcome == null) {
+                return;
+            }
+            offer(outcome.found());
+            if (outcome.infeasible()) {
+                bound = Math.max(bound, (pieces + 1) * cost);
+            }
+            report("exact");
         }
 
         private boolean proven() {

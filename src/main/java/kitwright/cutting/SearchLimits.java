@@ -8,19 +8,19 @@ package kitwright.cutting;
  *
  * @param timeLimitSeconds      wall-clock safety net per section
  * @param columnIterations      master/pricing rounds of column generation over the whole solve (all dives)
- * @param divingSteps           residual rounds of the diving heuristic
+ * @param divingNodes           relaxations solved by each dive of the diving heuristic
  * @param integerDeterministicTime CP-SAT deterministic time for each integer model over the generated patterns
  * @param exactDeterministicTime CP-SAT deterministic time for each arc-flow model
  * @param exactMaxArcs          largest arc-flow graph (arcs) worth handing to CP-SAT
  */
-public record SearchLimits(double timeLimitSeconds, int columnIterations, int divingSteps,
+public record SearchLimits(double timeLimitSeconds, int columnIterations, int divingNodes,
                            double integerDeterministicTime, double exactDeterministicTime, int exactMaxArcs) {
 
     public SearchLimits {
         if (!(timeLimitSeconds > 0)) {
             throw new IllegalArgumentException("time limit must be positive: " + timeLimitSeconds);
         }
-        if (columnIterations < 1 || divingSteps < 0 || integerDeterministicTime < 0 || exactDeterministicTime < 0
+        if (columnIterations < 1 || divingNodes < 0 || integerDeterministicTime < 0 || exactDeterministicTime < 0
                 || exactMaxArcs < 0) {
             throw new IllegalArgumentException("work limits must not be negative");
         }
@@ -28,11 +28,11 @@ public record SearchLimits(double timeLimitSeconds, int columnIterations, int di
 
     /** The default work limits with the given safety-net time limit. */
     public static SearchLimits defaults(double timeLimitSeconds) {
-        return new SearchLimits(timeLimitSeconds, 4000, 400, 4.0, 4.0, 40_000);
+        return new SearchLimits(timeLimitSeconds, 4000, 100, 1.0, 2.0, 40_000);
     }
 
     public SearchLimits withTimeLimitSeconds(double seconds) {
-        return new SearchLimits(seconds, columnIterations, divingSteps, integerDeterministicTime,
+        return new SearchLimits(seconds, columnIterations, divingNodes, integerDeterministicTime,
                 exactDeterministicTime, exactMaxArcs);
     }
 }
