@@ -54,6 +54,8 @@ final class ColumnGeneration implements AutoCloseable {
     private final Deadline deadline;
     private int iterations;
     private int seed;
+    /** Whether the master minimises the shortage (phase one) rather than the cost. */
+    private boolean phaseOne;
 
     /** Outcome of one relaxation: see {@link Kind}. Costs and bounds in integer cost units. */
     record Relaxation(Kind kind, double value, double bound, double[] x, double[] shortage) {
@@ -133,7 +135,7 @@ final class ColumnGeneration implements AutoCloseable {
         if (limitRows[p.stock()] != null) {
             limitRows[p.stock()].setCoefficient(x, 1);
         }
-        master.objective().setCoefficient(x, coefficient(p.stock(), columns.size()));
+        master.objective().setCoefficient(x, phaseOne ? 0 : coefficient(p.stock(), columns.size()));
         index.put(p, columns.size());
         columns.add(p);
         variables.add(x);
@@ -157,18 +159,20 @@ final class ColumnGeneration implements AutoCloseable {
         for (int i = 0; i < instance.types(); i++) {
             bound[i] = instance.size[i] == 0 ? 0 : Math.min(residual[i], instance.maxCapacity / instance.size[i]);
         }
-        boolean phaseOne = false;
         setPhase(false);
         double bestBound = Double.NEGATIVE_INFINITY;
         double[] centerPi = null;
         double[] centerMu = null;
         while (true) {
             MPSolver.ResultStatus status = master.solve();
+            if (Boolean.getBoolean("kitwright.debug")) {
+                System.err.println("master " + status + " phase one " + phaseOne + " columns " + columns.size()
+                        + " objective " + (status == MPSolver.ResultStatus.OPTIMAL ? master.objective().value() : 0));
+            }
             if (status != MPSolver.ResultStatus.OPTIMAL) {
                 if (phaseOne) {
                     throw new IllegalStateException("phase one master not solved: " + status);
                 }
-                phaseOne = true;
                 setPhase(true);
                 continue;
             }
@@ -201,8 +205,7 @@ final class ColumnGeneration implements AutoCloseable {
             }
             if (phaseOne) {
                 if (objective <= 1e-7) {
-                    phaseOne = false; // a fractional plan covers the demand: back to the cost
-                    setPhase(false);
+                    setPhase(false); // a fractional plan covers the demand: back to the cost
                     continue;
                 }
                 if (round.entering().isEmpty()) {
@@ -234,6 +237,10 @@ final class ColumnGeneration implements AutoCloseable {
                         int[] available, int[] bound, boolean phaseOne) {
         KnapsackPricing.Priced priced = pricing.price(pi, bound);
         iterations++;
+        if (Boolean.getBoolean("kitwright.debug")) {
+            System.err.println("  pi " + java.util.Arrays.toString(pi) + " mu " + java.util.Arrays.toString(mu)
+                    + " best " + java.util.Arrays.toString(priced.value()) + " " + java.util.Arrays.toString(priced.pattern()));
+        }
         List<Pattern> entering = new ArrayList<>();
         double lagrangian = 0;
         for (int i = 0; i < pi.length; i++) {
@@ -295,6 +302,7 @@ final class ColumnGeneration implements AutoCloseable {
 
     /** Phase one: minimise the size left without stock; phase two: minimise cost, no shortage. */
     private void setPhase(boolean one) {
+        phaseOne = one;
         double maxSize = instance.size.length == 0 ? 1 : instance.size[0];
         for (int i = 0; i < shortage.length; i++) {
             shortage[i].setUb(one ? MPSolver.infinity() : 0);
