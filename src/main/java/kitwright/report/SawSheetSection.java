@@ -117,8 +117,8 @@ final class SawSheetSection {
     }
 
     private static String description(Kit kit, String section) {
-        return kit.catalog().section(section).map(s -> "CHS " + ShopFormat.mm(s.outerDiameterMm()) + " \u00D7 "
-                + ShopFormat.mm(s.wallMm()) + " mm, " + s.material()).orElse("");
+        return kit.catalog().section(section).map(s -> "tube \u00D8\u2009" + ShopFormat.mm(s.outerDiameterMm())
+                + " \u00D7 " + ShopFormat.mm(s.wallMm()) + " mm, " + s.material()).orElse("");
     }
 
     private static PatternCard card(Kit kit, SectionCutPlan plan, CutPattern p, String id, int number,

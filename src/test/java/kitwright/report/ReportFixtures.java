@@ -76,7 +76,10 @@ final class ReportFixtures {
         return new Bar(mark, section.name(), length, quantity, quantity, null, tolerance, "");
     }
 
-    /** Plans for every section of the kit; the second section is reported FEASIBLE with a 1.2 % gap. */
+    /**
+     * Plans for every section of the kit (first-fit decreasing); for the status wording, the first section is
+     * reported OPTIMAL and the second FEASIBLE with a 1.2 % gap and two spares, whatever the plain bound says.
+     */
     static CutPlan samplePlan(Kit kit) {
         List<SectionCutPlan> plans = new ArrayList<>();
         for (String section : kit.usedSections()) {
@@ -86,6 +89,10 @@ final class ReportFixtures {
                 plan = new SectionCutPlan(plan.section(), KERF, TRIM, MIN_REMNANT, "cost", Status.FEASIBLE, null,
                         value, value * (1 - 0.012), 0.012, plan.stockPieces(), plan.patterns(),
                         List.of(new Spare("B5", 2)));
+            } else if (section.equals(CHS_60.name())) {
+                double value = plan.value();
+                plan = new SectionCutPlan(plan.section(), KERF, TRIM, MIN_REMNANT, "cost", Status.OPTIMAL, null,
+                        value, value, 0.0, plan.stockPieces(), plan.patterns(), List.of());
             }
             plans.add(plan);
         }
@@ -93,33 +100,43 @@ final class ReportFixtures {
     }
 
     /**
-     * First-fit decreasing: pieces longest first into the first open stock piece where they fit (rack pieces are
-     * opened first while any are left, then the cheapest mill stock per millimetre); identical pieces grouped.
+     * First-fit decreasing with the kit's saw settings: pieces longest first into the first open stock piece where
+     * they fit; a new piece is taken from the rack rows (in catalog order, while any are left and the piece fits),
+     * else the mill stock with the lowest price per millimetre (or the longest, without prices). Its lower bound is
+     * the continuous one: every piece with its kerf bought at the lowest price per usable millimetre. OPTIMAL only
+     * when the plan meets that bound.
      */
     static SectionCutPlan firstFitDecreasing(Kit kit, String section) {
+        double kerf = kit.settings().kerfMm();
+        double trim = kit.settings().trimMm();
         List<Bar> bars = kit.bars().stream().filter(b -> b.section().equals(section))
                 .sorted(Comparator.comparingDouble(Bar::lengthMm).reversed()).toList();
-        List<StockLength> rack = new ArrayList<>(kit.catalog().stockFor(section).stream()
-                .filter(s -> s.origin() == Origin.RACK).toList());
-        int rackLeft = rack.stream().mapToInt(s -> s.available() == null ? 0 : s.available()).sum();
-        StockLength mill = kit.catalog().stockFor(section).stream().filter(s -> s.origin() == Origin.MILL)
-                .min(Comparator.comparingDouble(s -> s.price() / s.lengthMm())).orElseThrow();
+        List<StockLength> rows = kit.catalog().stockFor(section);
+        boolean priced = rows.stream().allMatch(r -> r.price() != null);
+        Map<StockLength, Integer> rackLeft = new LinkedHashMap<>();
+        rows.stream().filter(r -> r.origin() == Origin.RACK)
+                .forEach(r -> rackLeft.put(r, r.available() == null ? 0 : r.available()));
+        StockLength mill = rows.stream().filter(r -> r.origin() == Origin.MILL)
+                .min(Comparator.comparingDouble(r -> priced ? r.price() / r.lengthMm() : -r.lengthMm()))
+                .orElseThrow();
         List<StockLength> used = new ArrayList<>();
         List<List<Cut>> bins = new ArrayList<>();
+        double demand = 0;
         for (Bar bar : bars) {
             for (int n = 0; n < bar.quantity(); n++) {
+                demand += bar.lengthMm() + kerf;
                 int target = -1;
                 for (int i = 0; i < bins.size() && target < 0; i++) {
-                    if (fits(used.get(i).lengthMm(), bins.get(i), bar.lengthMm())) {
+                    if (fits(used.get(i).lengthMm(), bins.get(i), bar.lengthMm(), kerf, trim)) {
                         target = i;
                     }
                 }
                 if (target < 0) {
-                    StockLength open = rackLeft > 0 && fits(rack.get(0).lengthMm(), List.of(), bar.lengthMm())
-                            ? rack.get(0) : mill;
-                    if (!rack.isEmpty() && open == rack.get(0)) {
-                        rackLeft--;
-                    }
+                    StockLength open = rackLeft.entrySet().stream()
+                            .filter(e -> e.getValue() > 0 && fits(e.getKey().lengthMm(), List.of(), bar.lengthMm(),
+                                    kerf, trim))
+                            .map(Map.Entry::getKey).findFirst().orElse(mill);
+                    rackLeft.computeIfPresent(open, (r, left) -> left - 1);
                     used.add(open);
                     bins.add(new ArrayList<>());
                     target = bins.size() - 1;
@@ -128,27 +145,53 @@ final class ReportFixtures {
             }
         }
         Map<List<Object>, CutPattern> patterns = new LinkedHashMap<>();
-        double cost = 0;
+        double value = 0;
         for (int i = 0; i < bins.size(); i++) {
             StockLength s = used.get(i);
-            cost += s.price();
-            patterns.merge(List.of(s.lengthMm(), s.origin(), bins.get(i)), pattern(s, bins.get(i), 1),
-                    (a, b) -> pattern(s, a.cuts(), a.count() + 1));
+            value += priced ? s.price() : s.lengthMm();
+            List<Cut> cuts = bins.get(i);
+            patterns.merge(List.of(s.lengthMm(), s.origin(), cuts), pattern(kit, s, cuts, 1),
+                    (a, b) -> pattern(kit, s, a.cuts(), a.count() + 1));
         }
-        return new SectionCutPlan(section, KERF, TRIM, MIN_REMNANT, "cost", Status.OPTIMAL, null, cost, cost, 0.0,
-                bins.size(), List.copyOf(patterns.values()), List.of());
+        double bound = Math.min(value, continuousBound(rows, demand, priced, kerf, trim));
+        double gap = value == 0 ? 0 : (value - bound) / value;
+        return new SectionCutPlan(section, kerf, trim, kit.settings().minRemnantMm(), priced ? "cost" : "length",
+                gap < 1e-9 ? Status.OPTIMAL : Status.FEASIBLE, null, value, bound, gap, bins.size(),
+                List.copyOf(patterns.values()), List.of());
+    }
+
+    /**
+     * The continuous bound: the demand (pieces with their kerfs) bought by the usable millimetre, cheapest rows
+     * first, limited rows up to their count. No plan can cost less.
+     */
+    static double continuousBound(List<StockLength> rows, double demandMm, boolean priced, double kerf, double trim) {
+        List<StockLength> byUnitPrice = rows.stream().sorted(Comparator.comparingDouble(
+                r -> (priced ? r.price() : r.lengthMm()) / (r.lengthMm() - 2 * trim + kerf))).toList();
+        double left = demandMm;
+        double bound = 0;
+        for (StockLength r : byUnitPrice) {
+            double usable = r.lengthMm() - 2 * trim + kerf;
+            double take = r.available() == null ? left : Math.min(left, usable * r.available());
+            bound += take / usable * (priced ? r.price() : r.lengthMm());
+            left -= take;
+            if (left <= 0) {
+                break;
+            }
+        }
+        return bound;
     }
 
     /** The saw model: sum(length + kerf) <= stock - 2 trim + kerf. */
-    static boolean fits(double stockMm, List<Cut> cuts, double lengthMm) {
-        double used = cuts.stream().mapToDouble(c -> c.lengthMm() + KERF).sum();
-        return used + lengthMm + KERF <= stockMm - 2 * TRIM + KERF + 1e-9;
+    static boolean fits(double stockMm, List<Cut> cuts, double lengthMm, double kerf, double trim) {
+        double used = cuts.stream().mapToDouble(c -> c.lengthMm() + kerf).sum();
+        return used + lengthMm + kerf <= stockMm - 2 * trim + kerf + 1e-9;
     }
 
-    static CutPattern pattern(StockLength stock, List<Cut> cuts, int count) {
-        double offcut = Math.max(0, stock.lengthMm() - 2 * TRIM - cuts.stream().mapToDouble(Cut::lengthMm).sum()
-                - cuts.size() * KERF);
+    static CutPattern pattern(Kit kit, StockLength stock, List<Cut> cuts, int count) {
+        KitSettings s = kit.settings();
+        double offcut = Math.max(0, stock.lengthMm() - 2 * s.trimMm()
+                - cuts.stream().mapToDouble(Cut::lengthMm).sum() - cuts.size() * s.kerfMm());
         return new CutPattern(stock.lengthMm(), stock.origin(), count, cuts, offcut,
-                offcut >= MIN_REMNANT ? "remnant" : "scrap");
+                offcut >= s.minRemnantMm() ? "remnant" : "scrap");
     }
 }
