@@ -47,6 +47,14 @@ final class HeadlessChromium {
         }
     }
 
+    /** Prints the page to PDF with the page's own print stylesheet (no browser header or footer). */
+    void printToPdf(Path page, Path pdf) throws IOException, InterruptedException {
+        run(page, List.of("--no-pdf-header-footer", "--print-to-pdf=" + pdf.toAbsolutePath()));
+        if (!Files.isRegularFile(pdf)) {
+            throw new IOException("chromium wrote no PDF; see " + workDir.resolve("chromium.log"));
+        }
+    }
+
     /** The DOM after the page has loaded, serialized by the browser. */
     String dumpDom(Path page) throws IOException, InterruptedException {
         return run(page, List.of("--dump-dom"));

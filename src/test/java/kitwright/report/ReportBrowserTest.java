@@ -106,4 +106,29 @@ class ReportBrowserTest {
                 .containsExactlyInAnyOrderElementsOf(kit.bars().stream().map(Bar::mark).toList());
         assertThat(attributes(dom, "<td class=\"mark\">([^<]*)</td>")).contains(ReportFixtures.HOSTILE);
     }
+
+    @Test
+    @DisplayName("printed, report.html gives A4 pages with each section's saw sheets on a page of their own")
+    void printsOnA4WithEverySectionsSawSheetsOnANewPage(@TempDir Path dir) throws Exception {
+        HeadlessChromium chromium = chromiumOrSkip(dir);
+        Kit kit = ReportFixtures.sampleKit();
+        // one short pattern per section: without the page breaks all of it would fit on three pages or so
+        CutPlan plan = new CutPlan(ReportFixtures.samplePlan(kit).sections().stream()
+                .map(s -> new kitwright.cutting.SectionCutPlan(s.section(), s.kerfMm(), s.trimMm(),
+                        s.minRemnantMm(), s.objective(), s.status(), s.reason(), s.value(), s.lowerBound(), s.gap(),
+                        s.patterns().get(0).count(), List.of(s.patterns().get(0)), s.spares()))
+                .toList());
+        Path page = ReportWriter.writeInto(ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14)), dir);
+        Path pdf = dir.resolve("report.pdf");
+        chromium.printToPdf(page, pdf);
+        String raw = new String(java.nio.file.Files.readAllBytes(pdf), java.nio.charset.StandardCharsets.ISO_8859_1);
+        long pages = Pattern.compile("/Type\\s*/Page\\b").matcher(raw).results().count();
+        // summary and purchase order, then at least one page per section's saw sheets, cautions, inputs
+        assertThat(pages).isGreaterThanOrEqualTo(1 + plan.sections().size() + 2);
+        // A4 is 210 x 297 mm = 595.3 x 841.9 pt (ISO 216)
+        Matcher box = Pattern.compile("/MediaBox\\s*\\[\\s*0\\s+0\\s+([0-9.]+)\\s+([0-9.]+)").matcher(raw);
+        assertThat(box.find()).isTrue();
+        assertThat(Double.parseDouble(box.group(1))).isCloseTo(595.3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(Double.parseDouble(box.group(2))).isCloseTo(841.9, org.assertj.core.data.Offset.offset(1.0));
+    }
 }
