@@ -26,9 +26,25 @@ final class HeadlessChromium {
         this.workDir = workDir;
     }
 
-    /** Chromium when it is installed, with {@code workDir} for its profiles and logs. */
+    /**
+     * Chromium when it is installed (Debian's path first, then the PATH; the system property
+     * {@code kitwright.chromium} names another), with {@code workDir} for its files.
+     */
     static Optional<HeadlessChromium> find(Path workDir) {
-        return CANDIDATES.stream().map(Path::of).filter(Files::isExecutable).findFirst()
+        String chosen = System.getProperty("kitwright.chromium");
+        if (chosen != null) {
+            return Optional.of(Path.of(chosen)).filter(Files::isExecutable).map(p -> new HeadlessChromium(p, workDir));
+        }
+        List<Path> candidates = new ArrayList<>(CANDIDATES.stream().map(Path::of).toList());
+        String path = System.getenv("PATH");
+        if (path != null) {
+            for (String dir : path.split(java.io.File.pathSeparator)) {
+                if (!dir.isEmpty()) {
+                    candidates.add(Path.of(dir, "chromium"));
+                }
+            }
+        }
+        return candidates.stream().filter(Files::isExecutable).findFirst()
                 .map(p -> new HeadlessChromium(p, workDir));
     }
 
