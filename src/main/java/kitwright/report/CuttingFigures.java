@@ -14,7 +14,8 @@ import kitwright.model.StockLength;
 /**
  * The figures of one section's cutting plan that the summary and the purchase order show: pieces and length of
  * stock by origin, cost from the catalog's prices, offcut split into remnant and scrap. Prices are looked up in the
- * tube catalog by section, stock length and origin; a missing price makes the cost unknown (null), never zero.
+ * tube catalog by section, stock length and origin; a mill row without a price makes the cost unknown (null), never
+ * zero, while a rack row without a price costs nothing, as the cutting stage counts it.
  *
  * @param plan         the section's plan
  * @param lines        order lines, mill stock first, then rack offcuts, each in catalog order
@@ -109,9 +110,11 @@ public record CuttingFigures(SectionCutPlan plan, List<OrderLine> lines, double 
         return stockMm == 0 ? 0 : offcutMm / stockMm;
     }
 
+    /** The catalog price; rack offcuts without a price cost nothing (as the cutting stage counts them). */
     private static Double price(List<StockLength> rows, double lengthMm, Origin origin) {
         int i = catalogIndex(rows, lengthMm, origin);
-        return i < rows.size() ? rows.get(i).price() : null;
+        Double price = i < rows.size() ? rows.get(i).price() : null;
+        return price == null && origin == Origin.RACK ? Double.valueOf(0.0) : price;
     }
 
     private static int catalogIndex(List<StockLength> rows, double lengthMm, Origin origin) {
