@@ -42,7 +42,7 @@ public final class PlanCommand implements Callable<Integer> {
             description = "Folder to write the plan into; created, or replaced when kitwright wrote it before.")
     Path out;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", converter = IsoDateConverter.class,
             description = "Date printed on the report (default: today). Fix it to get byte-identical output.")
     LocalDate date;
 
