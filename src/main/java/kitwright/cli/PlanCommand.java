@@ -23,11 +23,11 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = {
-            "Validates a kit and writes the plan folder: summary.json (marks, bars, cut length and mass per",
-            "section, joints, members per structure, reuse ratio, spares).",
+            "Validates a kit and writes the plan folder: summary.json (marks, bars, cut length and mass per"
+                    + " section, joints, members per structure, reuse ratio, spares).",
             "",
-            "The folder is written beside DIR and moved into place only when complete. An existing DIR is",
-            "replaced only when kitwright wrote it. On invalid input (exit code 2) nothing is written."
+            "The folder is written beside DIR and moved into place only when complete. An existing DIR is"
+                    + " replaced only when kitwright wrote it. On invalid input (exit code 2) nothing is written."
         })
 public final class PlanCommand implements Callable<Integer> {
     /** The file holding the kit summary in the plan folder. */

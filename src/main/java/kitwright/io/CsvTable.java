@@ -134,15 +134,27 @@ public final class CsvTable {
                 continue;
             }
             dataRows++;
-            if (record.size() != header.get().size()) {
+            if (record.size() > header.get().size()) {
                 problems.add(file, line, "", "the row has " + record.size() + " values but the header has "
                         + header.get().size() + " columns (expected one value per column; quote a value that"
                         + " contains a comma)");
                 continue;
             }
+            // A short row reads its missing trailing values as blank, as hand-written files often leave them out.
             Map<String, String> values = new LinkedHashMap<>();
+            boolean unnamed = false;
             for (int i = 0; i < record.size(); i++) {
-                values.put(header.get().get(i), record.get(i).trim());
+                String name = header.get().get(i);
+                String value = record.get(i).trim();
+                if (name.isEmpty() && !value.isEmpty() && !unnamed) {
+                    unnamed = true;
+                    problems.add(file, line, "", "the value '" + value + "' stands in a column without a name"
+                            + " (expected a header name for every column that holds values)");
+                }
+                values.put(name, value);
+            }
+            if (unnamed) {
+                continue;
             }
             rows.add(new CsvRow(file, line, values, problems));
         }
@@ -168,6 +180,9 @@ public final class CsvTable {
         Set<String> seen = new HashSet<>();
         Set<String> suggested = new HashSet<>();
         for (String name : names) {
+            if (name.isEmpty()) {
+                continue; // spreadsheets add unnamed empty columns; values under them are reported per row
+            }
             if (!seen.add(name)) {
                 problems.add(file, line, name, "the column appears twice (expected each column once)");
             } else if (!columns.knows(name)) {
@@ -175,7 +190,7 @@ public final class CsvTable {
                 Optional<String> near = NearestName.of(name, unused);
                 near.ifPresent(suggested::add);
                 String hint = near.map(n -> "did you mean " + n + "? ").orElse("");
-                problems.add(file, line, name.isEmpty() ? "(blank)" : name, "unknown column (" + hint
+                problems.add(file, line, name, "unknown column (" + hint
                         + "known columns: " + columns.describe() + ")");
             }
         }
