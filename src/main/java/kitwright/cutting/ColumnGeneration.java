@@ -165,10 +165,6 @@ final class ColumnGeneration implements AutoCloseable {
         double[] centerMu = null;
         while (true) {
             MPSolver.ResultStatus status = master.solve();
-            if (Boolean.getBoolean("kitwright.debug")) {
-                System.err.println("master " + status + " phase one " + phaseOne + " columns " + columns.size()
-                        + " objective " + (status == MPSolver.ResultStatus.OPTIMAL ? master.objective().value() : 0));
-            }
             if (status != MPSolver.ResultStatus.OPTIMAL) {
                 if (phaseOne) {
                     throw new IllegalStateException("phase one master not solved: " + status);
@@ -237,10 +233,6 @@ final class ColumnGeneration implements AutoCloseable {
                         int[] available, int[] bound, boolean phaseOne) {
         KnapsackPricing.Priced priced = pricing.price(pi, bound);
         iterations++;
-        if (Boolean.getBoolean("kitwright.debug")) {
-            System.err.println("  pi " + java.util.Arrays.toString(pi) + " mu " + java.util.Arrays.toString(mu)
-                    + " best " + java.util.Arrays.toString(priced.value()) + " " + java.util.Arrays.toString(priced.pattern()));
-        }
         List<Pattern> entering = new ArrayList<>();
         double lagrangian = 0;
         for (int i = 0; i < pi.length; i++) {

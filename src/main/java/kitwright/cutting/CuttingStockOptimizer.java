@@ -117,10 +117,6 @@ public final class CuttingStockOptimizer implements SectionSolver {
                             Shortage.reason(instance, missing, "not enough stock for")));
                 }
                 bound = Math.max(bound, safe(root.bound()));
-                if (Boolean.getBoolean("kitwright.debug")) {
-                    System.err.println("root " + root.kind() + " iterations " + generation.iterations() + " columns "
-                            + generation.columns().size() + " unit " + instance.unit + " capacity " + instance.maxCapacity);
-                }
                 if (root.kind() == ColumnGeneration.Kind.OPTIMAL) {
                     linearBound = root.value() / instance.scale;
                 }

@@ -27,8 +27,8 @@ import java.util.function.Consumer;
  */
 final class DivingHeuristic {
     /** Residuals up to this many pieces are finished directly. */
-    private static final int FINISH_PIECES = Integer.getInteger("fp", 24);
-    private static final int FINISH_ARCS = Integer.getInteger("fa", 4000);
+    private static final int FINISH_PIECES = 24;
+    private static final int FINISH_ARCS = 4_000;
     /** Above this many fractional columns a node rounds all columns of value 1/2 or more up at once. */
     private static final int MANY_FRACTIONAL = 20;
 
@@ -82,10 +82,6 @@ final class DivingHeuristic {
 
     private void node(int[] residual, int[] available, List<Pattern> fixed, long fixedCost,
                       ColumnGeneration.Relaxation relaxation) {
-        if (Boolean.getBoolean("kitwright.debug")) {
-            System.err.printf("node %d pieces %d fixed %d cost %d bound %.1f kind %s goal %d%n", nodes,
-                instance.totalPieces(residual), fixed.size(), fixedCost, relaxation.bound(), relaxation.kind(), goal);
-        }
         if (relaxation.kind() == ColumnGeneration.Kind.INFEASIBLE) {
             return;
         }
@@ -95,9 +91,6 @@ final class DivingHeuristic {
         if (instance.totalPieces(residual) <= FINISH_PIECES || generation.exhausted() || deadline.passed()
                 || nodes >= nodeLimit) {
             Packing rest = finish(residual, available, relaxation.bound());
-            if (Boolean.getBoolean("kitwright.debug")) {
-                System.err.println("finish " + (rest == null ? "none" : rest.cost(instance) + " pieces " + rest.pieces().size()));
-            }
             if (rest != null) {
                 List<Pattern> all = new ArrayList<>(fixed);
                 all.addAll(rest.pieces());
@@ -192,11 +185,6 @@ final class DivingHeuristic {
         ArcFlowModel.Outcome exact = ArcFlowModel.solve(instance, residual, available, best, lower, upper,
                 limits.exactDeterministicTime() / 40, FINISH_ARCS, deadline);
         nodes++; // an exact finish costs about as much as a relaxation
-        if (Boolean.getBoolean("kitwright.debug")) {
-            System.err.printf("  finish pieces %d lower %d ffd %d exact %s%n", instance.totalPieces(residual), lower,
-                    upper, exact == null ? "too big" : exact.packing() == null ? (exact.infeasible() ? "infeasible" : "none")
-                    : exact.packing().cost(instance) + (exact.optimal() ? " optimal" : ""));
-        }
         if (exact != null && exact.packing() != null
                 && (best == null || exact.packing().cost(instance) < best.cost(instance))) {
             best = exact.packing();

@@ -108,10 +108,6 @@ final class PatternSelection {
         }
         CpSolver solver = CpSatRun.solver(deterministicTime, deadline);
         CpSolverStatus status = solver.solve(model);
-        if (Boolean.getBoolean("kitwright.debug")) {
-            System.err.printf("pattern selection %s det %.2f wall %.2f patterns %d%n", status,
-                    solver.response().getDeterministicTime(), solver.wallTime(), patterns.size());
-        }
         if (status != CpSolverStatus.OPTIMAL && status != CpSolverStatus.FEASIBLE) {
             return null;
         }

@@ -88,10 +88,6 @@ final class WasteBoundedPatterns {
         model.addLessOrEqual(wasted, waste);
         CpSolver solver = CpSatRun.solver(deterministicTime, deadline);
         CpSolverStatus status = solver.solve(model);
-        if (Boolean.getBoolean("kitwright.debug")) {
-            System.err.printf("waste-bounded T %d W %d patterns %d %s det %.2f wall %.2f%n", pieces, waste,
-                    patterns.size(), status, solver.response().getDeterministicTime(), solver.wallTime());
-        }
         if (status == CpSolverStatus.INFEASIBLE) {
             return new Outcome(null, true);
         }
