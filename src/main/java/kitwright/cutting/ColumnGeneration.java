@@ -18,7 +18,8 @@ import java.util.Map;
  * <pre>
  *   min  sum_p c_k(p) x_p
  *   s.t. sum_p a_ip x_p &gt;= r_i          for every item type i      (duals pi_i &gt;= 0)
- *        sum_{p of k} x_p &lt;= u_k         for every limited stock k  (duals mu_k &lt;= 0)
+ *        sum_{p of k} x_p &lt;= u_k         for every stock type k     (duals mu_k &lt;= 0; u_k = infinity
+ *                                                                     for unlimited stock)
  *        x_p &gt;= 0
  * </pre>
  * Pricing ({@link KnapsackPricing}) finds, per stock type, the pattern of greatest {@code pi.a}; it enters when its
@@ -67,7 +68,9 @@ final class ColumnGeneration implements AutoCloseable {
         /** Stopped by the work or time limit: {@code bound} is still valid, {@code x} is the last master's. */
         STOPPED,
         /** No fractional plan exists: {@code shortage} holds the bars per type left without stock. */
-        INFEASIBLE
+        INFEASIBLE,
+        /** Stopped by the limits before phase one decided whether a fractional plan exists. */
+        UNDECIDED
     }
 
     ColumnGeneration(IntegerInstance instance, int iterationLimit, Deadline deadline) {
@@ -93,10 +96,9 @@ final class ColumnGeneration implements AutoCloseable {
         }
         limitRows = new MPConstraint[instance.stocks()];
         for (int k = 0; k < instance.stocks(); k++) {
-            if (instance.limited(k)) {
-                // sum_{p of k} x_p <= u_k
-                limitRows[k] = master.makeConstraint(-inf, instance.limit[k], "available_" + k);
-            }
+            // sum_{p of k} x_p <= u_k (infinite for unlimited stock, until a residual or a count test limits it)
+            limitRows[k] = master.makeConstraint(-inf, instance.limited(k) ? instance.limit[k] : inf,
+                    "available_" + k);
         }
         master.objective().setMinimization();
     }
@@ -132,9 +134,7 @@ final class ColumnGeneration implements AutoCloseable {
                 demandRows[i].setCoefficient(x, p.count(i));
             }
         }
-        if (limitRows[p.stock()] != null) {
-            limitRows[p.stock()].setCoefficient(x, 1);
-        }
+        limitRows[p.stock()].setCoefficient(x, 1);
         master.objective().setCoefficient(x, phaseOne ? 0 : coefficient(p.stock(), columns.size()));
         index.put(p, columns.size());
         columns.add(p);
@@ -151,9 +151,7 @@ final class ColumnGeneration implements AutoCloseable {
             demandRows[i].setLb(residual[i]);
         }
         for (int k = 0; k < instance.stocks(); k++) {
-            if (limitRows[k] != null) {
-                limitRows[k].setUb(available[k]);
-            }
+            limitRows[k].setUb(available[k] < 0 ? MPSolver.infinity() : available[k]);
         }
         int[] bound = new int[instance.types()];
         for (int i = 0; i < instance.types(); i++) {
@@ -178,7 +176,7 @@ final class ColumnGeneration implements AutoCloseable {
             }
             double[] mu = new double[instance.stocks()];
             for (int k = 0; k < mu.length; k++) {
-                mu[k] = limitRows[k] == null ? 0 : Math.min(0, limitRows[k].dualValue());
+                mu[k] = available[k] < 0 ? 0 : Math.min(0, limitRows[k].dualValue());
             }
             double objective = master.objective().value();
             // Wentges smoothing: price at a point between the best-bound duals and the master's duals; when that
@@ -208,7 +206,7 @@ final class ColumnGeneration implements AutoCloseable {
                     return infeasible();
                 }
                 if (exhausted()) {
-                    return stopped(residual, Double.NEGATIVE_INFINITY);
+                    return new Relaxation(Kind.UNDECIDED, Double.NaN, Double.NaN, values(), new double[0]);
                 }
             } else {
                 if (round.entering().isEmpty() && alpha == 0) {
@@ -241,7 +239,7 @@ final class ColumnGeneration implements AutoCloseable {
         for (int k = 0; k < instance.stocks(); k++) {
             double cost = phaseOne ? 0 : instance.cost[k] / costScale;
             double reduced = cost - mu[k] - priced.value()[k];
-            if (limitRows[k] != null) {
+            if (available[k] >= 0) {
                 lagrangian += mu[k] * available[k];
             }
             lagrangian += instance.usable(k, residual, available) * Math.min(0, reduced);

@@ -32,8 +32,13 @@ import kitwright.model.Status;
  * of the one-dimensional cutting stock problem", EJOR 84.
  */
 public final class CuttingStockOptimizer implements SectionSolver {
-    /** Sections with more bars than this skip the backtracking dive: each of its nodes costs too much. */
+    /**
+     * Sections with more bars than this skip the stock-count bound and the backtracking dive: each relaxation costs
+     * too much there, and the LP bound is already within a fraction of a percent.
+     */
     private static final int BACKTRACKING_PIECES = 5_000;
+    /** Most relaxations the stock-count bound solves. */
+    private static final int COUNT_TESTS = 40;
     /** Most patterns the waste-bounded model enumerates. */
     private static final int WASTE_BOUNDED_PATTERNS = 30_000;
 
@@ -116,7 +121,9 @@ public final class CuttingStockOptimizer implements SectionSolver {
                     return done(PlanAssembler.infeasible(problem,
                             Shortage.reason(instance, missing, "not enough stock for")));
                 }
-                bound = Math.max(bound, safe(root.bound()));
+                if (root.kind() == ColumnGeneration.Kind.OPTIMAL || root.kind() == ColumnGeneration.Kind.STOPPED) {
+                    bound = Math.max(bound, safe(root.bound()));
+                }
                 if (root.kind() == ColumnGeneration.Kind.OPTIMAL) {
                     linearBound = root.value() / instance.scale;
                 }
@@ -128,20 +135,33 @@ public final class CuttingStockOptimizer implements SectionSolver {
                             .run(root, limits.divingNodes());
                     report("integer");
                 }
+                int[] counts = null;
+                if (!proven() && !deadline.passed() && incumbent != null
+                        && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
+                    StockCountBound.Result whole = StockCountBound.raise(instance, generation, lowerCost(),
+                            incumbentCost, COUNT_TESTS, deadline);
+                    bound = Math.max(bound, whole.bound());
+                    counts = whole.counts();
+                    report("lower bound");
+                }
                 if (!proven() && !deadline.passed()) {
                     decideWithOneStockLength();
+                }
+                if (!proven() && !deadline.passed() && counts != null
+                        && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
+                    // a plan within the cheapest stock counts that can cover the demand would be optimal:
+                    // search for one with backtracking
+                    long goal = 0;
+                    for (int k = 0; k < counts.length; k++) {
+                        goal += instance.cost[k] * counts[k];
+                    }
+                    new DivingHeuristic(instance, generation, limits, deadline, goal, 3, false, this::offer)
+                            .run(generation.solve(demand, counts), counts, limits.divingNodes());
+                    report("integer");
                 }
                 if (!proven() && !deadline.passed()) {
                     offer(PatternSelection.solve(instance, generation.columns(), demand, available, incumbent,
                             lowerCost(), incumbentCost, limits.integerDeterministicTime(), deadline));
-                    report("integer");
-                }
-                long target = AchievableValues.nextAchievable(instance, bound, incumbentCost);
-                if (!proven() && !deadline.passed() && incumbentCost - target <= maxStockCost()
-                        && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
-                    // within one stock piece of the bound: search with backtracking for a plan at it
-                    new DivingHeuristic(instance, generation, limits, deadline, target, 3, false, this::offer)
-                            .run(root, limits.divingNodes());
                     report("integer");
                 }
                 if (!proven() && !deadline.passed()) {

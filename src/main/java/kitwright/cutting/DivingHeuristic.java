@@ -75,14 +75,20 @@ final class DivingHeuristic {
      * @return whether a plan within the goal was found
      */
     boolean run(ColumnGeneration.Relaxation root, int nodeLimit) {
+        return run(root, instance.limits(), nodeLimit);
+    }
+
+    /** Dives with the stock counts limited to {@code available} (-1 = unlimited); root solved with them. */
+    boolean run(ColumnGeneration.Relaxation root, int[] available, int nodeLimit) {
         this.nodeLimit = nodeLimit;
-        node(instance.demands(), instance.limits(), new ArrayList<>(), 0, root);
+        node(instance.demands(), available.clone(), new ArrayList<>(), 0, root);
         return reached;
     }
 
     private void node(int[] residual, int[] available, List<Pattern> fixed, long fixedCost,
                       ColumnGeneration.Relaxation relaxation) {
-        if (relaxation.kind() == ColumnGeneration.Kind.INFEASIBLE) {
+        if (relaxation.kind() == ColumnGeneration.Kind.INFEASIBLE
+                || relaxation.kind() == ColumnGeneration.Kind.UNDECIDED) {
             return;
         }
         if (fixedCost + ceil(relaxation.bound()) > goal) {
