@@ -42,12 +42,6 @@ final class ArcFlowModel {
     record Outcome(Packing packing, boolean optimal, boolean infeasible, double bound) {
     }
 
-    /** The number of arcs of the graph for this residual problem, stopping the count above {@code limit}. */
-    static int arcs(IntegerInstance instance, int[] demand, int limit) {
-        Graph g = Graph.build(instance, demand, limit);
-        return g == null ? limit + 1 : g.arcCount();
-    }
-
     /**
      * Solves the residual problem exactly within [lower, upper] (integer cost units), starting from a hint.
      *

@@ -230,14 +230,6 @@ public final class CuttingStockOptimizer implements SectionSolver {
             }
         }
 
-        private long maxStockCost() {
-            long max = 0;
-            for (long c : instance.cost) {
-                max = Math.max(max, c);
-            }
-            return max;
-        }
-
         /**
          * With one usable stock type, asks the waste-bounded model for a plan of ceil(bound / cost) pieces: found,
          * it is optimal; impossible, the bound rises by one piece.

@@ -5,7 +5,6 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import kitwright.model.Origin;
 
 /**
  * A section problem in the integers the solvers work with.
@@ -97,10 +96,6 @@ final class IntegerInstance {
 
     boolean limited(int k) {
         return limit[k] >= 0;
-    }
-
-    Origin origin(int k) {
-        return problem.stock().get(k).origin();
     }
 
     int totalPieces(int[] counts) {

@@ -39,12 +39,6 @@ record Packing(List<Pattern> pieces) {
         return n;
     }
 
-    Packing plus(Packing other) {
-        List<Pattern> all = new ArrayList<>(pieces);
-        all.addAll(other.pieces);
-        return new Packing(all);
-    }
-
     /** Whether the packing yields every demanded piece and keeps within the stock limits. */
     boolean covers(IntegerInstance instance, int[] demand, int[] available) {
         int[] made = produced(instance.types());

@@ -22,7 +22,7 @@ class ExactReferenceTest {
     void optimumAgreesWithChocoOnFiftySmallSections() {
         int compared = 0;
         for (long seed = 100; compared < 50; seed++) {
-            SectionProblem problem = TestSections.random(seed, 9);
+            SectionProblem problem = TestSections.random(seed, 8);
             SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
             CutPlanValidator.validate(problem, plan);
             Long reference = chocoOptimum(problem);
@@ -38,16 +38,20 @@ class ExactReferenceTest {
     }
 
     /**
-     * Pieces j go to bins b (bin_j &lt;= j breaks the symmetry of bin names); each bin b takes a stock type or
-     * none; load_b &lt;= capacity(type_b); at most available_k bins of a limited type; minimise the sum of the
+     * Pieces j go to bins b (bin_j &lt;= j breaks the symmetry of bin names, bars of one mark fill bins in
+     * order); each bin b takes a stock type or none (an empty bin takes none); load_b &lt;= capacity(type_b); at most available_k bins of a limited type; minimise the sum of the
      * bins' prices (or stock lengths). Lengths are whole millimetres in these tests, so tenths are exact.
      */
     static Long chocoOptimum(SectionProblem problem) {
         boolean cost = problem.objective().equals("cost");
         List<Integer> sizes = new ArrayList<>();
-        for (Demand d : problem.demands()) {
+        List<Boolean> sameAsPrevious = new ArrayList<>();
+        List<Demand> longestFirst = new ArrayList<>(problem.demands());
+        longestFirst.sort((a, b) -> Double.compare(b.lengthMm(), a.lengthMm()));
+        for (Demand d : longestFirst) {
             for (int n = 0; n < d.quantity(); n++) {
                 sizes.add((int) Math.round((d.lengthMm() + problem.kerfMm()) * 10));
+                sameAsPrevious.add(n > 0);
             }
         }
         List<StockOption> stock = problem.stock();
@@ -65,6 +69,11 @@ class ExactReferenceTest {
         for (int j = 0; j < n; j++) {
             bin[j] = model.intVar("bin" + j, 0, j);
         }
+        for (int j = 1; j < n; j++) {
+            if (sameAsPrevious.get(j)) {
+                model.arithm(bin[j - 1], "<=", bin[j]).post(); // bars of one mark are interchangeable
+            }
+        }
         int maxCapacity = java.util.Arrays.stream(capacity).max().orElse(0);
         IntVar[] load = model.intVarArray("load", n, 0, maxCapacity);
         model.binPacking(bin, sizes.stream().mapToInt(Integer::intValue).toArray(), load, 0).post();
@@ -74,6 +83,7 @@ class ExactReferenceTest {
             IntVar binCapacity = model.intVar("capacity" + b, 0, maxCapacity);
             model.element(binCapacity, capacity, type[b], 0).post();
             model.arithm(load[b], "<=", binCapacity).post();
+            model.ifThen(model.arithm(load[b], "=", 0), model.arithm(type[b], "=", types)); // empty: no stock
             binCost[b] = model.intVar("cost" + b, 0, java.util.Arrays.stream(price).max().orElse(0));
             model.element(binCost[b], price, type[b], 0).post();
         }
