@@ -37,17 +37,19 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "cut", mixinStandardHelpOptions = true,
         description = {
-            "Plans the cutting of a kit: which stock lengths to buy (and which rack offcuts to use) and how to saw",
-            "each piece, at the least total price (without prices: the least total stock length), one section at",
-            "a time. Each section is OPTIMAL (proven), FEASIBLE (with its gap to the lower bound) or INFEASIBLE",
-            "(with the reason, e.g. too few rack offcuts).",
+            "Plans the cutting of a kit: which stock lengths to buy (and which rack",
+            "offcuts to use) and how to saw each piece, at the least total price",
+            "(without prices: the least total stock length), one section at a time.",
+            "Each section is OPTIMAL (proven), FEASIBLE (with its gap to the lower",
+            "bound) or INFEASIBLE (with the reason, e.g. too few rack offcuts).",
             "",
-            "Saw model: the trim is taken off each end of a stock piece and includes its own squaring cut; pieces",
-            "are separated by one kerf; the offcut is what is left after the last piece's kerf. An offcut of at",
-            "least the minimum remnant length goes back on the rack (rack-after.csv).",
+            "Saw model: the trim is taken off each end of a stock piece and includes",
+            "its own squaring cut; pieces are separated by one kerf; the offcut is",
+            "what is left after the last piece's kerf. An offcut of at least the",
+            "minimum remnant length goes back on the rack (rack-after.csv).",
             "",
-            "Exit codes: 0 every section planned, 2 invalid input, 3 some section has no feasible plan (the other",
-            "sections are still planned and written)."
+            "Exit codes: 0 every section planned, 2 invalid input, 3 some section has",
+            "no feasible plan (the other sections are still planned and written)."
         })
 public final class CutCommand implements Callable<Integer> {
     @Parameters(index = "0", arity = "0..1", paramLabel = "KIT_DIR",

@@ -198,7 +198,7 @@ final class ColumnGeneration implements AutoCloseable {
                 alpha = 0;
             }
             if (phaseOne) {
-                if (objective <= 1e-7) {
+                if (objective <= 1e-6) {
                     setPhase(false); // a fractional plan covers the demand: back to the cost
                     continue;
                 }
