@@ -20,9 +20,7 @@ import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
 import kitwright.model.Status;
-import kitwright.report.cutting.CutListCsv;
-import kitwright.report.cutting.OrderCsv;
-import kitwright.report.cutting.RackAfterCsv;
+import kitwright.report.cutting.CuttingFiles;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -52,6 +50,9 @@ import picocli.CommandLine.Spec;
             "no feasible plan (the other sections are still planned and written)."
         })
 public final class CutCommand implements Callable<Integer> {
+    /** The plan as JSON in the folder of {@code --out}. */
+    public static final String CUTTING_JSON = "cutting.json";
+
     @Parameters(index = "0", arity = "0..1", paramLabel = "KIT_DIR",
             description = "The kit folder (kit.json, bars.csv). Leave out to use --bars and --stock instead.")
     Path kitDir;
@@ -121,10 +122,8 @@ public final class CutCommand implements Callable<Integer> {
         }
         if (out != null) {
             try (OutputFolder folder = OutputFolder.create(out)) {
-                folder.write("cut-list.csv", CutListCsv.format(kit, plan));
-                folder.write("order.csv", OrderCsv.format(kit, plan));
-                folder.write("rack-after.csv", RackAfterCsv.format(kit, plan));
-                folder.write("cutting.json", planJson);
+                CuttingFiles.write(folder, kit, plan);
+                folder.write(CUTTING_JSON, planJson);
                 folder.commit();
             }
         }
@@ -134,7 +133,8 @@ public final class CutCommand implements Callable<Integer> {
             stdout.println("Wrote " + json);
         }
         if (out != null) {
-            stdout.println("Wrote " + out.resolve("cut-list.csv") + ", order.csv, rack-after.csv, cutting.json");
+            stdout.println("Wrote " + out.resolve(CuttingFiles.CUT_LIST) + ", " + CuttingFiles.ORDER + ", "
+                    + CuttingFiles.RACK_AFTER + ", " + CUTTING_JSON);
         }
         stdout.flush();
         boolean infeasible = plan.sections().stream().map(SectionCutPlan::status).anyMatch(Status.INFEASIBLE::equals);

@@ -11,21 +11,29 @@ import kitwright.model.Status;
  * and how to saw each, so that every mark is cut and the total price (or, without prices, the total stock length)
  * is least.
  *
- * <p>Method, each step on the best plan so far:
+ * <p>Method, each step only while the best plan is not proven optimal:
  * <ol>
  *   <li>first-fit decreasing ({@link FirstFitDecreasing}), the baseline the result is never worse than;</li>
  *   <li>column generation over all stock types ({@link ColumnGeneration}: GLOP master, knapsack pricing) for the
  *       linear-programming lower bound, or a proof that the stock cannot cover the marks;</li>
- *   <li>an integer phase: the diving heuristic ({@link DivingHeuristic}), then CP-SAT over the generated patterns
- *       ({@link PatternSelection}), then, for small instances, the complete arc-flow model
- *       ({@link ArcFlowModel}), each only while the plan is not proven optimal;</li>
- *   <li>waste gathered into fewer, longer remnants at equal cost ({@link RemnantConsolidation}).</li>
+ *   <li>a dive of residual rounding ({@link DivingHeuristic});</li>
+ *   <li>the stock-count bound ({@link StockCountBound}): the cheapest whole stock counts whose relaxation covers
+ *       the demand, which raises the bound for several stock lengths;</li>
+ *   <li>with one stock length, the complete waste-bounded pattern model ({@link WasteBoundedPatterns}) for a plan
+ *       at the rounded-up bound, or a proof that none exists;</li>
+ *   <li>a dive with backtracking within those cheapest stock counts;</li>
+ *   <li>CP-SAT over all generated patterns ({@link PatternSelection});</li>
+ *   <li>for small sections, the complete arc-flow model ({@link ArcFlowModel}).</li>
  * </ol>
- * Guarantee: the status is OPTIMAL only when proven, that is when no achievable cost lies between the lower bound
- * and the plan's cost ({@link AchievableValues}; for one stock length and price, value = ceil(LP bound)) or when
- * the arc-flow model proves it. The reported lower bound is the best proven one (LP bound rounded up to an
- * achievable cost, or the exact model's bound); gap = (value - lowerBound) / value. Deterministic for given
- * limits: one CP-SAT worker, deterministic work limits; the wall-clock limit is only a safety net.
+ * Every plan found loses its surplus pieces, has its waste gathered into fewer, longer remnants
+ * ({@link RemnantConsolidation}) and each stock piece moved to the cheapest stock that holds it
+ * ({@link StockReassignment}) before it is compared with the best so far.
+ *
+ * <p>Guarantee: the status is OPTIMAL only when proven: when no achievable cost lies between the lower bound and
+ * the plan's cost ({@link AchievableValues}; for one stock length and price, value = ceil(LP bound)), or when a
+ * complete model proves it. The reported lower bound is the best proven one; gap = (value - lowerBound) / value,
+ * so OPTIMAL has gap 0. Deterministic for given limits: one CP-SAT worker, deterministic work limits; the
+ * wall-clock limit is only a safety net, and when it strikes the best plan so far is returned with its gap.
  *
  * <p>Sources: Gilmore and Gomory (1961, 1963); Valério de Carvalho (1999); Wäscher and Gau (1996); on how seldom the
  * optimum exceeds the rounded-up LP bound, Scheithauer and Terno (1995), "The modified integer round-up property
