@@ -25,6 +25,19 @@ class SolverBehaviourTest {
     }
 
     @Test
+    void findsAPlanWhereFirstFitDecreasingRunsOutOfLimitedStock() {
+        // two 1000 mm offcuts: 500+300+200 and 400+300+300 fit exactly; first-fit decreasing puts 500 and 400
+        // together and is left with a 200 mm bar and no stock
+        SectionProblem problem = TestSections.section(List.of(demand("A", 500, 1), demand("B", 400, 1),
+                demand("C", 300, 3), demand("D", 200, 1)), List.of(TestSections.rack(1000, 5.0, 2)), 0, 0, 100);
+        assertThat(new FirstFitDecreasing().solve(problem, CutProgress.NONE).status()).isEqualTo(Status.INFEASIBLE);
+        SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
+        CutPlanValidator.validate(problem, plan);
+        assertThat(plan.status()).isEqualTo(Status.OPTIMAL);
+        assertThat(plan.stockPieces()).isEqualTo(2);
+    }
+
+    @Test
     void theSameProblemGivesTheSamePlanTwice() {
         SectionProblem problem = Instances.kitSection("twice", 15, 3, 2, 30, 5, TestSections.LIMITS);
         SectionCutPlan first = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
