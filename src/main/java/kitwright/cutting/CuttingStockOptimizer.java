@@ -95,6 +95,10 @@ public final class CuttingStockOptimizer implements SectionSolver {
         }
 
         Outcome run() {
+            if (problem.stock().stream().allMatch(s -> s.available() != null && s.available() == 0)) {
+                return done(PlanAssembler.infeasible(problem, "no stock for section " + problem.section()
+                        + ": the catalog offers no length of it (or none is available)"));
+            }
             List<String> tooLong = new ArrayList<>();
             for (int i = 0; i < instance.types(); i++) {
                 if (instance.size[i] > instance.maxCapacity) {

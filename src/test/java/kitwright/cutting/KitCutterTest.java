@@ -55,6 +55,15 @@ class KitCutterTest {
     }
 
     @Test
+    void aSectionWithoutStockIsInfeasible() {
+        SectionProblem problem = TestSections.section(List.of(TestSections.demand("A", 1000, 1)),
+                List.of(TestSections.rack(3000, 1.0, 0)), 2, 5, 500);
+        SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
+        CutPlanValidator.validate(problem, plan);
+        assertThat(plan.reason()).contains("no stock for section");
+    }
+
+    @Test
     void sectionsFollowTheCatalogOrderAndUseTheKitSawSettings() {
         Kit kit = KitFixtures.random(7);
         CutPlan plan = KitCutter.cut(kit, OPTIONS, CutProgress.NONE);
