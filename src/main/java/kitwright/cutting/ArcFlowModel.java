@@ -1,5 +1,6 @@
 package kitwright.cutting;
 
+import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -49,6 +50,7 @@ final class ArcFlowModel {
      */
     static Outcome solve(IntegerInstance instance, int[] demand, int[] available, Packing hint, long lower,
                          long upper, double deterministicTime, int maxArcs, Deadline deadline) {
+        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
         Graph graph = Graph.build(instance, demand, maxArcs);
         if (graph == null) {
             return null;

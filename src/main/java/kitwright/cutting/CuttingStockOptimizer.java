@@ -46,7 +46,7 @@ public final class CuttingStockOptimizer implements SectionSolver {
      */
     private static final int BACKTRACKING_PIECES = 5_000;
     /** Most relaxations the stock-count bound solves. */
-    private static final int COUNT_TESTS = 40;
+    private static final int COUNT_TESTS = 150;
     /** Most patterns the waste-bounded model enumerates. */
     private static final int WASTE_BOUNDED_PATTERNS = 30_000;
 

@@ -1,5 +1,6 @@
 package kitwright.cutting;
 
+import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -38,6 +39,7 @@ final class PatternSelection {
      */
     static Packing solve(IntegerInstance instance, List<Pattern> pool, int[] demand, int[] available, Packing hint,
                          long lower, long upper, double deterministicTime, Deadline deadline) {
+        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
         Set<Pattern> unique = new LinkedHashSet<>();
         for (Pattern p : pool) {
             Pattern capped = capped(p, demand);

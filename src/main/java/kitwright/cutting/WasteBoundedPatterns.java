@@ -1,5 +1,6 @@
 package kitwright.cutting;
 
+import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -42,6 +43,7 @@ final class WasteBoundedPatterns {
      */
     static Outcome solve(IntegerInstance instance, int stock, int[] demand, long pieces, int maxPatterns,
                          double deterministicTime, Deadline deadline) {
+        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
         long capacity = instance.capacity[stock];
         long waste = pieces * capacity - instance.load(demand);
         if (waste < 0) {

@@ -60,6 +60,7 @@ public final class CuttingBenchmark {
         if (sets.isEmpty()) {
             sets = List.of("examples", "triplets", "kits", "large");
         }
+        String loadBefore = loadAverage();
         warmUp();
         List<Row> rows = new ArrayList<>();
         for (String set : sets) {
@@ -71,12 +72,22 @@ public final class CuttingBenchmark {
                 default -> throw new IllegalArgumentException("unknown set " + set);
             }
         }
-        String summary = summary(rows);
+        String summary = summary(rows) + "load average (1 min) before " + loadBefore + ", after " + loadAverage()
+                + " (other jobs share the machine)\n";
         System.out.println(summary);
         if (markdown != null) {
             Files.createDirectories(markdown.toAbsolutePath().getParent());
             Files.writeString(markdown, markdown(rows, summary));
             System.out.println("wrote " + markdown);
+        }
+    }
+
+    /** The 1-minute load average from /proc/loadavg, or "unknown". */
+    private static String loadAverage() {
+        try {
+            return Files.readString(Path.of("/proc/loadavg")).split(" ")[0];
+        } catch (IOException | RuntimeException e) {
+            return "unknown";
         }
     }
 

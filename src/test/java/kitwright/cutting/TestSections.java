@@ -8,7 +8,7 @@ import kitwright.model.Origin;
 /** Small section problems for unit tests (invented data, fixed seeds). */
 final class TestSections {
     /** Small deterministic work limits for unit tests; the wall-clock limit is generous and never reached. */
-    static final SearchLimits LIMITS = new SearchLimits(60, 2000, 60, 0.5, 1.0, 20_000);
+    static final SearchLimits LIMITS = new SearchLimits(60, 2000, 60, 0.5, 1.0, 10_000);
 
     private TestSections() {
     }
