@@ -20,7 +20,7 @@ public enum CompareMetric {
     REMNANT("remnantPct", "Remnant back to the rack", "%", 2, Direction.LOWER, s -> s.remnantPct()),
     KIT_MASS("kitMassKg", "Kit mass (bars and joints)", "kg", 1, Direction.LOWER, OptionSummary::kitMassKg),
     BOUGHT_MASS("boughtMassKg", "Stock mass bought", "kg", 1, Direction.LOWER, OptionSummary::boughtMassKg),
-    CO2E("co2eKg", "Embodied carbon of stock bought", "kg CO2e", 1, Direction.LOWER, OptionSummary::co2eKg),
+    CO2E("co2eKg", "Embodied carbon of stock bought", "kg CO\u2082e", 1, Direction.LOWER, OptionSummary::co2eKg),
     BUNDLES("bundles", "Nested bundles", "", 0, Direction.LOWER, OptionSummary::bundles),
     CRATES("crates", "Crates", "", 0, Direction.LOWER, OptionSummary::crates),
     VEHICLES("vehicles", "Vehicles", "", 0, Direction.LOWER, OptionSummary::vehicles),
