@@ -46,8 +46,6 @@ public final class KitMetricsCalculator {
         double offcut = 0;
         double scrap = 0;
         double remnant = 0;
-        double cost = 0;
-        boolean priced = true;
         boolean massKnown = !kit.materials().isEmpty();
         Map<String, double[]> boughtMassByMaterial = new LinkedHashMap<>();
         for (SectionCutPlan section : plan.sections()) {
@@ -60,12 +58,6 @@ public final class KitMetricsCalculator {
                     remnant += p.count() * p.offcutMm();
                 } else {
                     scrap += p.count() * p.offcutMm();
-                }
-                Double price = stockRow(kit, section.section(), p).map(StockLength::price).orElse(null);
-                if (price == null) {
-                    priced = false;
-                } else {
-                    cost += p.count() * price;
                 }
                 if (p.origin() == Origin.MILL) {
                     boughtPieces += p.count();
@@ -91,7 +83,7 @@ public final class KitMetricsCalculator {
         Double boughtMass = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::boughtMassKg).sum() : null;
         Double co2e = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::co2eKg).sum() : null;
         return new KitMetrics(kit.bars().size(), bars, members, bars == 0 ? 0 : (double) members / bars,
-                stockPieces, boughtPieces, stockLength, boughtLength, priced ? cost : null,
+                stockPieces, boughtPieces, stockLength, boughtLength, stockCost(kit, plan),
                 percent(offcut, stockLength), percent(scrap, stockLength), percent(remnant, stockLength),
                 kitMass(kit).orElse(null), boughtMass, co2e, massKnown ? carbon : List.of());
     }
@@ -118,6 +110,21 @@ public final class KitMetricsCalculator {
             mass += joint.quantity() * joint.massKg();
         }
         return Optional.of(mass);
+    }
+
+    /** Price of the stock a plan cuts (mill and rack rows at their catalog price), or null when a row has none. */
+    public static Double stockCost(Kit kit, CutPlan plan) {
+        double cost = 0;
+        for (SectionCutPlan section : plan.sections()) {
+            for (CutPattern p : section.patterns()) {
+                Double price = stockRow(kit, section.section(), p).map(StockLength::price).orElse(null);
+                if (price == null) {
+                    return null;
+                }
+                cost += p.count() * price;
+            }
+        }
+        return cost;
     }
 
     private static Optional<StockLength> stockRow(Kit kit, String section, CutPattern pattern) {
