@@ -10,6 +10,7 @@ import kitwright.compare.OptionPlanner;
 import kitwright.compare.OptionRunner;
 import kitwright.compare.OptionSummary;
 import kitwright.io.InvalidInputException;
+import kitwright.io.OutputFolder;
 import kitwright.model.Status;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -41,8 +42,8 @@ public final class CompareCommand implements Callable<Integer> {
     List<Path> kitDirs;
 
     @Option(names = "--out", required = true, paramLabel = "DIR",
-            description = "Folder to write compare.html, compare.csv and compare.json into (created if missing; "
-                    + "other files in it are kept).")
+            description = "Folder to write compare.html, compare.csv and compare.json into: created, or replaced "
+                    + "when kitwright wrote it before (never a folder of yours).")
     Path out;
 
     @Option(names = "--threads", paramLabel = "N",
@@ -83,8 +84,13 @@ public final class CompareCommand implements Callable<Integer> {
                 err.flush();
             }
         });
-        List<OptionSummary> options = runner.run(kitDirs);
-        CompareFiles.write(out, options);
+        List<OptionSummary> options;
+        // Claim the output folder first: a wrong --out is reported before the planning, not after it.
+        try (OutputFolder folder = OutputFolder.create(out)) {
+            options = runner.run(kitDirs);
+            CompareFiles.write(folder, options);
+            folder.commit();
+        }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.println("compare: wrote " + CompareFiles.HTML + ", " + CompareFiles.CSV + " and " + CompareFiles.JSON
                 + " for " + options.size() + " options into " + out);

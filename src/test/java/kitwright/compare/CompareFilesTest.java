@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.stream.Stream;
+import kitwright.io.InvalidInputException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -15,7 +16,7 @@ class CompareFilesTest {
     Path tmp;
 
     @Test
-    void writesTheThreeFilesIntoANewFolderAndLeavesNoTemporaryFolder() throws IOException {
+    void writesTheThreeFilesIntoANewFolderAndLeavesNoTemporaryFolder() throws Exception {
         Path out = tmp.resolve("options");
         CompareFiles.write(out, CompareFixtures.three());
         assertThat(out.resolve("compare.json")).isRegularFile();
@@ -28,20 +29,21 @@ class CompareFilesTest {
     }
 
     @Test
-    void replacesItsOwnFilesInAnExistingFolderAndKeepsTheOthers() throws IOException {
-        Path out = Files.createDirectories(tmp.resolve("report"));
-        Files.writeString(out.resolve("plan.json"), "{}");
-        Files.writeString(out.resolve("compare.json"), "old");
+    void replacesAnEarlierResultButNeverAFolderOfTheUsers() throws Exception {
+        Path out = tmp.resolve("report");
         CompareFiles.write(out, CompareFixtures.three());
-        assertThat(Files.readString(out.resolve("plan.json"))).isEqualTo("{}");
-        assertThat(Files.readString(out.resolve("compare.json"))).startsWith("{");
-        try (Stream<Path> entries = Files.list(tmp)) {
-            assertThat(entries).containsExactly(out);
-        }
+        CompareFiles.write(out, CompareFixtures.three().subList(0, 2));
+        assertThat(Files.readString(out.resolve("compare.csv")).lines()).hasSize(3);
+        Path mine = Files.createDirectories(tmp.resolve("mine"));
+        Files.writeString(mine.resolve("notes.txt"), "keep");
+        assertThatThrownBy(() -> CompareFiles.write(mine, CompareFixtures.three()))
+                .isInstanceOf(InvalidInputException.class).hasMessageContaining("not written by kitwright");
+        assertThat(Files.readString(mine.resolve("notes.txt"))).isEqualTo("keep");
+        assertThat(mine.resolve("compare.json")).doesNotExist();
     }
 
     @Test
-    void refusesAFileWhereTheFolderShouldBe() throws IOException {
+    void refusesAFileWhereTheFolderShouldBe() throws Exception {
         Path out = Files.writeString(tmp.resolve("taken"), "x");
         assertThatThrownBy(() -> CompareFiles.write(out, CompareFixtures.three())).hasMessageContaining("not a folder");
         assertThat(Files.readString(out)).isEqualTo("x");

@@ -6,11 +6,14 @@ import static kitwright.metrics.MetricsFixtures.pattern;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.io.KitReader;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
 import kitwright.model.Material;
@@ -18,6 +21,7 @@ import kitwright.model.Origin;
 import kitwright.model.Status;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 class KitMetricsCalculatorTest {
     private static final Cut A = new Cut("A", 2900);
@@ -63,12 +67,15 @@ class KitMetricsCalculatorTest {
         // EN 10219-2 table masses (DOMAIN.md section 3): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
         double tableMass = 42 * 3.56 + 12 * 4.51;
         assertThat(m.boughtMassKg()).isCloseTo(tableMass, within(54 * 0.01));
+        // The factor and its source are the ones in stock-catalogs/materials.csv (read by the project's reader).
         Material steel = materials.get("steel");
         assertThat(m.co2eKg()).isCloseTo(m.boughtMassKg() * steel.co2eKgPerKg(), within(1e-9));
+        assertThat(m.co2eKg()).isCloseTo((42 * 3.56 + 12 * 4.51) * steel.co2eKgPerKg(),
+                within(54 * 0.01 * steel.co2eKgPerKg()));
         assertThat(m.carbon()).singleElement().satisfies(c -> {
             assertThat(c.material()).isEqualTo("steel");
-            assertThat(c.co2eKgPerKg()).isEqualTo(1.55);
-            assertThat(c.source()).contains("EN 1993-1-1");
+            assertThat(c.co2eKgPerKg()).isEqualTo(steel.co2eKgPerKg());
+            assertThat(c.source()).isEqualTo(steel.source()).contains("EN 1993-1-1").containsIgnoringCase("CO2e");
             assertThat(c.boughtMassKg()).isEqualTo(m.boughtMassKg());
         });
         assertThat(m.boughtPieces()).isEqualTo(6);
@@ -116,6 +123,24 @@ class KitMetricsCalculatorTest {
         assertThat(m.bars()).isEqualTo(300);
         assertThat(m.members()).isEqualTo(750);
         assertThat(m.reuseRatio()).isEqualTo(2.5);
+    }
+
+    @Test
+    @DisplayName("Reuse ratio from structures.csv read by the kit reader: 300 bars serving 750 members = 2.5")
+    void reuseRatioFromStructuresCsv(@TempDir Path dir) throws Exception {
+        Path catalog = Path.of("stock-catalogs", "steel-chs.csv").toAbsolutePath();
+        Files.writeString(dir.resolve("kit.json"), "{\"name\": \"reuse\", \"stockCatalog\": \""
+                + catalog.toString().replace("\\", "/") + "\"}\n");
+        // Quantities left blank: the reader takes the largest count any one structure needs (A 200, B 100).
+        Files.writeString(dir.resolve("bars.csv"), "mark,section,length_mm,quantity\n"
+                + "A,CHS 48.3x3.2,2000,\nB,CHS 48.3x3.2,1500,\n");
+        Files.writeString(dir.resolve("structures.csv"), "structure,mark,count\n"
+                + "pavilion,A,200\npavilion,B,100\nstage roof,A,150\nstage roof,B,100\ntower,A,200\n");
+        Kit kit = KitReader.read(dir);
+        KitMetrics m = KitMetricsCalculator.of(kit, new CutPlan(List.of()));
+        assertThat(m.bars()).isEqualTo(300);
+        assertThat(m.members()).isEqualTo(750);
+        assertThat(m.reuseRatio()).as("DOMAIN.md section 6 worked figure").isEqualTo(2.5);
     }
 
     @Test

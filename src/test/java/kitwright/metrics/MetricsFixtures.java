@@ -1,15 +1,12 @@
 package kitwright.metrics;
 
-import java.io.IOException;
-import java.io.InputStreamReader;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
+import kitwright.io.InvalidInputException;
+import kitwright.io.MaterialsReader;
 import kitwright.model.Bar;
 import kitwright.model.Joint;
 import kitwright.model.Kit;
@@ -20,8 +17,6 @@ import kitwright.model.Section;
 import kitwright.model.StockLength;
 import kitwright.model.StructureCount;
 import kitwright.model.TubeCatalog;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVRecord;
 
 /** Hand-made kits and cutting patterns for the metrics and compare tests (invented data). */
 public final class MetricsFixtures {
@@ -34,24 +29,19 @@ public final class MetricsFixtures {
     private MetricsFixtures() {
     }
 
-    /** Materials from the test fixture in materials.csv format (columns as issue 2 fixes them). */
+    /** The project's materials catalog, stock-catalogs/materials.csv (factors with their sources), as read by io. */
+    public static final Path MATERIALS_CSV = Path.of("stock-catalogs", "materials.csv");
+
     public static Map<String, Material> materials() {
-        Map<String, Material> materials = new LinkedHashMap<>();
-        try (Reader r = new InputStreamReader(MetricsFixtures.class.getResourceAsStream("materials-fixture.csv"),
-                StandardCharsets.UTF_8)) {
-            for (CSVRecord rec : CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get().parse(r)) {
-                materials.put(rec.get("material"), new Material(rec.get("material"),
-                        Double.parseDouble(rec.get("density_kg_m3")), Double.parseDouble(rec.get("co2e_kg_per_kg")),
-                        rec.get("source")));
-            }
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
+        try {
+            return MaterialsReader.read(MATERIALS_CSV);
+        } catch (InvalidInputException e) {
+            throw new IllegalStateException(e.problems().toString(), e);
         }
-        return materials;
     }
 
     public static TubeCatalog catalog() {
-        Map<String, Section> sections = new LinkedHashMap<>();
+        Map<String, Section> sections = new java.util.LinkedHashMap<>();
         sections.put(CHS_48, new Section(CHS_48, "steel", 48.3, 3.2, null, null, null));
         sections.put(CHS_60, new Section(CHS_60, "steel", 60.3, 3.2, null, null, null));
         return new TubeCatalog(Path.of("tubes.csv"), sections, List.of(
