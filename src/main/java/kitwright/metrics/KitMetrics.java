@@ -14,7 +14,8 @@ import java.util.List;
  * @param boughtPieces     mill pieces bought
  * @param stockLengthMm    length of all stock pieces cut, mill and rack
  * @param boughtLengthMm   length of the mill pieces bought
- * @param cost             price of the stock cut (mill and rack rows at their catalog price), null without prices
+ * @param cost             price of the stock cut (mill and rack rows at their catalog price, an unpriced rack row
+ *                         at 0), null when a mill row has no price
  * @param offcutPct        offcut length / stockLengthMm * 100 (offcut = remnant + scrap; kerf and trim not included)
  * @param scrapPct         scrap offcuts (shorter than minRemnant) / stockLengthMm * 100
  * @param remnantPct       remnant offcuts (back on the rack) / stockLengthMm * 100

@@ -112,14 +112,20 @@ public final class KitMetricsCalculator {
         return Optional.of(mass);
     }
 
-    /** Price of the stock a plan cuts (mill and rack rows at their catalog price), or null when a row has none. */
+    /**
+     * Price of the stock a plan cuts, mill and rack rows at their catalog price; null when a mill row has no price,
+     * while a rack offcut without a price costs nothing (as the cutting stage and the report count it).
+     */
     public static Double stockCost(Kit kit, CutPlan plan) {
         double cost = 0;
         for (SectionCutPlan section : plan.sections()) {
             for (CutPattern p : section.patterns()) {
                 Double price = stockRow(kit, section.section(), p).map(StockLength::price).orElse(null);
-                if (price == null) {
+                if (price == null && p.origin() == Origin.MILL) {
                     return null;
+                }
+                if (price == null) {
+                    continue;
                 }
                 cost += p.count() * price;
             }

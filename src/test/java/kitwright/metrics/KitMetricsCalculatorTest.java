@@ -157,4 +157,18 @@ class KitMetricsCalculatorTest {
         assertThat(m.co2eKg()).isNull();
         assertThat(m.carbon()).isEmpty();
     }
+
+    @Test
+    @DisplayName("An unpriced rack offcut costs nothing; an unpriced mill row makes the cost unknown")
+    void unpricedRows() {
+        Kit kit = MetricsFixtures.kit(Map.of());
+        java.util.function.Function<List<kitwright.model.StockLength>, Kit> with = rows -> new Kit(null,
+                kit.settings(), kit.bars(), List.of(), List.of(), new kitwright.model.TubeCatalog(
+                        kit.catalog().file(), kit.catalog().sections(), rows), Map.of(), List.of(), List.of());
+        List<kitwright.model.StockLength> rows = new java.util.ArrayList<>(kit.catalog().stock());
+        rows.set(2, new kitwright.model.StockLength(CHS_48, 2500, null, 3, Origin.RACK));
+        assertThat(KitMetricsCalculator.stockCost(with.apply(rows), plan())).isEqualTo(550.0);
+        rows.set(0, new kitwright.model.StockLength(CHS_48, 6000, null, null, Origin.MILL));
+        assertThat(KitMetricsCalculator.stockCost(with.apply(rows), plan())).isNull();
+    }
 }
