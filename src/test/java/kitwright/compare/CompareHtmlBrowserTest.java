@@ -78,7 +78,7 @@ class CompareHtmlBrowserTest {
         Path profile = Files.createTempDirectory(tmp, "chromium-profile");
         List<String> command = new ArrayList<>(List.of(CHROMIUM.toString(), "--headless", "--no-sandbox",
                 "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
-                "--disable-component-update", "--disable-sync", "--hide-scrollbars",
+                "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage", "--hide-scrollbars",
                 "--user-data-dir=" + profile));
         command.addAll(List.of(args));
         Path stdout = tmp.resolve("chromium-out-" + System.nanoTime() + ".txt");
