@@ -1,0 +1,34 @@
+package kitwright.nesting;
+
+/**
+ * Work limits of {@link PatternNester}. The deterministic limits decide the answer; the wall-clock limit is only a
+ * safety net.
+ *
+ * @param deterministicSeconds CP-SAT deterministic time per integer phase [2]
+ * @param wallSeconds          CP-SAT wall-clock safety net per integer phase [10, kit.json timeLimitSeconds]
+ * @param maxColumnIterations  column-generation rounds in phase 1 (phase 2 gets a quarter) [100]
+ * @param maxExactPatterns     largest pattern set enumerated for an exact answer [3000]
+ * @param maxExactGuests       most guests per host for the exact enumeration [8]
+ * @param maxPricingWork       knapsack cells per pricing round; lengths are coarsened above it [2e7]
+ */
+public record NestingOptions(double deterministicSeconds, double wallSeconds, int maxColumnIterations,
+                             int maxExactPatterns, int maxExactGuests, double maxPricingWork) {
+    public static final NestingOptions DEFAULT = new NestingOptions(2.0, 10.0, 100, 3000, 8, 2e7);
+
+    public NestingOptions {
+        if (!(deterministicSeconds > 0) || !(wallSeconds > 0) || maxColumnIterations < 1 || maxExactPatterns < 0
+                || maxExactGuests < 0 || !(maxPricingWork > 0)) {
+            throw new IllegalArgumentException("bad nesting options");
+        }
+    }
+
+    public NestingOptions withWallSeconds(double seconds) {
+        return new NestingOptions(deterministicSeconds, seconds, maxColumnIterations, maxExactPatterns,
+                maxExactGuests, maxPricingWork);
+    }
+
+    /** Without the exact enumeration (for comparing methods). */
+    public NestingOptions withoutExactEnumeration() {
+        return new NestingOptions(deterministicSeconds, wallSeconds, maxColumnIterations, 0, 0, maxPricingWork);
+    }
+}
