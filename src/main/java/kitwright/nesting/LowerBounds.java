@@ -5,7 +5,8 @@ package kitwright.nesting;
  *
  * <ul>
  *   <li>Counting: a tube that fits in no other tube (too wide or too long for every bore) is a bundle's host.
- *   <li>Mass: with a bundle mass limit, at least total mass / limit bundles, rounded up.
+ *   <li>Mass: with a bundle mass limit, at least total mass / limit bundles, rounded up (when no single tube is
+ *       above the limit: such a plan is infeasible anyway).
  * </ul>
  * The column-generation bound ({@link PatternColumnGeneration}) is usually stronger; the plan reports the largest.
  *
@@ -16,6 +17,7 @@ record LowerBounds(double bundles) {
     static LowerBounds counting(NestingProblem problem) {
         int lonely = 0;
         double mass = 0;
+        boolean eachWithinLimit = true;
         java.util.List<TubeType> types = TubeType.of(problem);
         for (TubeType guest : types) {
             boolean fitsSomewhere = false;
@@ -29,9 +31,10 @@ record LowerBounds(double bundles) {
                 lonely += guest.count();
             }
             mass += guest.sample().massKg() * guest.count();
+            eachWithinLimit &= problem.massAllowed(guest.sample().massKg());
         }
         double bound = lonely;
-        if (problem.maxBundleMassKg() != null && mass > 0) {
+        if (problem.maxBundleMassKg() != null && mass > 0 && eachWithinLimit) {
             bound = Math.max(bound, Math.ceil(mass / problem.maxBundleMassKg() - 1e-9));
         }
         return new LowerBounds(bound);

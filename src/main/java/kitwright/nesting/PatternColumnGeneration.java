@@ -34,8 +34,13 @@ import java.util.Set;
  */
 final class PatternColumnGeneration {
 
-    /** The columns generated, the LP solution over them, and the bound on tubes nested. */
-    record Result(List<Pattern> columns, double[] lpValues, double nestedUpperBound, int iterations) {
+    /**
+     * The columns generated (as layouts capped at the supply, and as the LP saw them, uncapped), the final LP
+     * solution over them (phase 2 weights), the phase 1 LP value (tubes nested, over the columns known at its last
+     * solve), the bound on tubes nested, and the rounds run.
+     */
+    record Result(List<Pattern> columns, List<List<Integer>> lpCounts, double[] lpValues, double phaseOneValue,
+                  double nestedUpperBound, int iterations) {
     }
 
     private PatternColumnGeneration() {
@@ -65,8 +70,9 @@ final class PatternColumnGeneration {
         MPObjective objective = solver.objective();
         objective.setMaximization();
         List<Pattern> columns = new ArrayList<>();
+        List<List<Integer>> lpCounts = new ArrayList<>();
         List<MPVariable> variables = new ArrayList<>();
-        Set<Pattern> seen = new HashSet<>();
+        Set<List<Integer>> seen = new HashSet<>();
         double[] unit = new double[n];
         java.util.Arrays.fill(unit, 1.0);
         double volumeMax = types.stream().mapToDouble(t -> t.sample().envelopeVolumeMm3()).max().orElse(1);
@@ -76,16 +82,20 @@ final class PatternColumnGeneration {
         }
         double[] pi = new double[n];
         double nestedBound = Double.POSITIVE_INFINITY;
+        double phaseOneValue = 0;
         int iterations = 0;
         for (int phase = 1; phase <= 2; phase++) {
             double[] weight = phase == 1 ? unit : bulky;
             for (int c = 0; c < columns.size(); c++) {
-                objective.setCoefficient(variables.get(c), columns.get(c).value(weight));
+                objective.setCoefficient(variables.get(c), value(lpCounts.get(c), weight));
             }
             int limit = phase == 1 ? maxIterations : Math.max(1, maxIterations / 4);
             for (int round = 0; round < limit; round++) {
                 iterations++;
                 solveOrThrow(solver);
+                if (phase == 1) {
+                    phaseOneValue = objective.value();
+                }
                 double[] mu = new double[n];
                 for (int t = 0; t < n; t++) {
                     pi[t] = Math.max(0, supply[t].dualValue());
@@ -95,23 +105,29 @@ final class PatternColumnGeneration {
                 for (int t = 0; t < n; t++) {
                     reduced[t] = weight[t] - pi[t];
                 }
-                Pattern[] best = new Pattern[n];
+                int[][] best = new int[n][];
                 pricing.price(reduced, false, best);
                 boolean added = false;
                 for (int h : pricing.hostTypes()) {
-                    Pattern p = best[h];
-                    if (p == null || p.value(reduced) - mu[h] <= 1e-7 || !seen.add(p)) {
+                    if (best[h] == null) {
+                        continue;
+                    }
+                    List<Integer> counts = pricing.rowCounts(h, best[h]);
+                    List<Integer> key = new ArrayList<>(counts);
+                    key.add(h);
+                    if (value(counts, reduced) - mu[h] <= 1e-7 || !seen.add(key)) {
                         continue;
                     }
                     MPVariable x = solver.makeNumVar(0, MPSolver.infinity(), "x_" + h + "_" + columns.size());
                     for (int t = 0; t < n; t++) {
-                        if (p.counts().get(t) > 0) {
-                            supply[t].setCoefficient(x, p.counts().get(t));
+                        if (counts.get(t) > 0) {
+                            supply[t].setCoefficient(x, counts.get(t)); // a_tp in sum_{h,p} a_tp x_hp <= n_t
                         }
                     }
-                    hosts[h].setCoefficient(x, 1);
-                    objective.setCoefficient(x, p.value(weight));
-                    columns.add(p);
+                    hosts[h].setCoefficient(x, 1); // in sum_p x_hp <= n_h
+                    objective.setCoefficient(x, value(counts, weight));
+                    columns.add(pricing.rowPattern(h, best[h]));
+                    lpCounts.add(counts);
                     variables.add(x);
                     added = true;
                 }
@@ -125,7 +141,15 @@ final class PatternColumnGeneration {
         }
         solveOrThrow(solver);
         double[] values = variables.stream().mapToDouble(MPVariable::solutionValue).toArray();
-        return new Result(columns, values, nestedBound, iterations);
+        return new Result(columns, lpCounts, values, phaseOneValue, nestedBound, iterations);
+    }
+
+    private static double value(List<Integer> counts, double[] weight) {
+        double sum = 0;
+        for (int t = 0; t < counts.size(); t++) {
+            sum += weight[t] * counts.get(t);
+        }
+        return sum;
     }
 
     /** sum_t pi_t n_t + sum_h n_h max(0, K_h(1 - pi)): an upper bound on the tubes any plan nests. */

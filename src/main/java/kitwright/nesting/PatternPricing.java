@@ -9,7 +9,7 @@ import java.util.Map;
  * The pricing problem of nesting column generation: for every host type, the guests worth most to carry, given a
  * value per guest type. A guest type t that fits at most k_t channels of the host's bore fills a "row" of k_t
  * copies side by side; rows lie end to end, so a host's best pattern is a bounded knapsack over rows with weight
- * length_t, value k_t * value_t and at most ceil(n_t / k_t) rows of type t, within the usable length.
+ * length_t, value k_t * value_t and at most n_t rows of type t, within the usable length.
  *
  * <p>Why rows bound every layout {@link HostLoad} allows. (1) Pick one channel in each segment and repeat it as
  * rows of the largest allowed k: the result is a row pattern with at most n_t rows of type t that fits the usable
@@ -18,11 +18,12 @@ import java.util.Map;
  * segment's k channels offer k times its length, so rows r_t = a_t / k_t (fractional, at most n_t / k_t) fit the
  * usable length: the fractional knapsack bounds it too. The bound is the smaller of the two.
  *
- * <p>Patterns are made with at most ceil(n_t / k_t) rows (no column wastes supply it cannot have). Lengths are
- * counted in whole units of {@code unitMm}: rounded up against the usable length rounded down to make patterns (so
- * they fit exactly), the other way round to bound. The knapsack is solved by dynamic programming over length, once
- * per distinct bore for all host lengths, after splitting row bounds into powers of two
- * (O(items x log n x capacity)).
+ * <p>The knapsack's rows, counted in full ({@link #rowCounts}), are the LP columns: their convex hull holds every
+ * layout, so the LP over them is a relaxation. Capped at the supply n_t they become a layout a host can really carry
+ * ({@link #rowPattern}), the integer phase's column. Lengths are counted in whole units of {@code unitMm}: rounded
+ * up against the usable length rounded down to make columns (so they fit exactly), the other way round to bound. The
+ * knapsack is solved by dynamic programming over length, once per distinct bore for all host lengths, after
+ * splitting row bounds into powers of two (O(items x log n x capacity)).
  */
 final class PatternPricing {
     private final NestingProblem problem;
@@ -77,10 +78,10 @@ final class PatternPricing {
 
     /**
      * Best value per host type for the given guest values (only positive values count). With {@code bound} the
-     * lengths are rounded so the values are upper bounds and no patterns are made; otherwise {@code patterns}
-     * receives the best pattern of each host type (null where nothing is worth carrying).
+     * lengths are rounded so the values are upper bounds and no rows are returned; otherwise {@code rows} receives
+     * the rows of each type in the best knapsack of each host type (null where nothing is worth carrying).
      */
-    double[] price(double[] guestValue, boolean bound, Pattern[] patterns) {
+    double[] price(double[] guestValue, boolean bound, int[][] patterns) {
         double[] best = new double[types.size()];
         for (List<Integer> hosts : hostsByBore.values()) {
             priceBore(hosts, guestValue, bound, best, patterns);
@@ -89,7 +90,7 @@ final class PatternPricing {
     }
 
     private void priceBore(List<Integer> hosts, double[] guestValue, boolean bound, double[] best,
-                           Pattern[] patterns) {
+                           int[][] patterns) {
         HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(hosts.get(0)).sample()));
         List<int[]> items = new ArrayList<>(); // {guest type, rows, weight}
         List<Double> itemValues = new ArrayList<>();
@@ -101,7 +102,7 @@ final class PatternPricing {
             int channels = shape.mostChannels(guest.outerDiameterMm());
             int weight = bound ? (int) Math.floor(guest.lengthMm() / unitMm + 1e-9)
                     : (int) Math.ceil(guest.lengthMm() / unitMm - 1e-9);
-            int rowsLeft = bound ? types.get(g).count() : (types.get(g).count() + channels - 1) / channels;
+            int rowsLeft = types.get(g).count();
             for (int chunk = 1; rowsLeft > 0; chunk *= 2) {
                 int rows = Math.min(chunk, rowsLeft);
                 rowsLeft -= rows;
@@ -148,7 +149,7 @@ final class PatternPricing {
                         c -= items.get(item)[2];
                     }
                 }
-                patterns[h] = rowPattern(h, rows, shape);
+                patterns[h] = rows;
             }
         }
     }
@@ -178,8 +179,19 @@ final class PatternPricing {
         return total;
     }
 
-    /** The layout of a row pattern: one segment per channel count, rows stacked; copies capped at the supply. */
-    private Pattern rowPattern(int host, int[] rows, HostLoad shape) {
+    /** Guests of each type in the rows, k_t per row, not capped: the LP column. */
+    List<Integer> rowCounts(int host, int[] rows) {
+        HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(host).sample()));
+        List<Integer> counts = new ArrayList<>();
+        for (int t = 0; t < types.size(); t++) {
+            counts.add(rows[t] == 0 ? 0 : rows[t] * shape.mostChannels(types.get(t).sample().outerDiameterMm()));
+        }
+        return counts;
+    }
+
+    /** The layout of rows: one segment per channel count, rows stacked; copies capped at the supply. */
+    Pattern rowPattern(int host, int[] rows) {
+        HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(host).sample()));
         Map<Integer, List<List<Integer>>> lanesByChannels = new java.util.TreeMap<>();
         List<Integer> counts = new ArrayList<>();
         for (int t = 0; t < types.size(); t++) {
