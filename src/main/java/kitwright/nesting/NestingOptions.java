@@ -4,7 +4,7 @@ package kitwright.nesting;
  * Work limits of {@link PatternNester}. The deterministic limits decide the answer; the wall-clock limit is only a
  * safety net.
  *
- * @param deterministicSeconds CP-SAT deterministic time per integer phase [2]
+ * @param deterministicSeconds CP-SAT deterministic time per integer phase [0.5]
  * @param wallSeconds          CP-SAT wall-clock safety net per integer phase [10, kit.json timeLimitSeconds]
  * @param maxColumnIterations  column-generation rounds in phase 1 (phase 2 gets a quarter) [100]
  * @param maxExactPatterns     largest pattern set enumerated for an exact answer [3000]
@@ -13,7 +13,7 @@ package kitwright.nesting;
  */
 public record NestingOptions(double deterministicSeconds, double wallSeconds, int maxColumnIterations,
                              int maxExactPatterns, int maxExactGuests, double maxPricingWork) {
-    public static final NestingOptions DEFAULT = new NestingOptions(2.0, 10.0, 100, 3000, 8, 2e7);
+    public static final NestingOptions DEFAULT = new NestingOptions(0.5, 10.0, 100, 3000, 8, 2e7);
 
     public NestingOptions {
         if (!(deterministicSeconds > 0) || !(wallSeconds > 0) || maxColumnIterations < 1 || maxExactPatterns < 0
