@@ -67,8 +67,9 @@ public final class BundleDrawing {
         List<String> marks = tubes.stream().map(p -> p.tube().mark()).distinct().toList();
         int height = sideTop + (int) (hostDiameter * diameterScale) + 40 + 16 * marks.size() + 20;
         StringBuilder svg = new StringBuilder();
-        svg.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"%d\" height=\"%d\""
-                + " viewBox=\"0 0 %d %d\" font-family=\"sans-serif\" font-size=\"11\" role=\"img\">%n",
+        svg.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"saw-drawing\""
+                + " width=\"%d\" height=\"%d\" viewBox=\"0 0 %d %d\" font-family=\"sans-serif\" font-size=\"11\""
+                + " role=\"img\">%n",
                 WIDTH, height, WIDTH, height));
         svg.append("<title>").append(escape("Bundle " + bundle.id() + " layout")).append("</title>\n");
         String count = ids.size() > 1 ? "  (" + ids.size() + " alike: " + ids.get(0) + " to " + ids.get(ids.size() - 1)

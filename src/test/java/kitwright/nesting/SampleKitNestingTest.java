@@ -22,13 +22,13 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
-class SampleKitNestingTest {
+public class SampleKitNestingTest {
 
     /**
      * A stand-in for the cutting stage: every bar of the kit sawn from its own piece of the longest stock length.
      * Nesting only reads the cuts, so this is enough to nest every piece of a kit.
      */
-    static CutPlan oneBarPerStockPiece(Kit kit) {
+    public static CutPlan oneBarPerStockPiece(Kit kit) {
         List<SectionCutPlan> sections = new ArrayList<>();
         for (String section : kit.usedSections()) {
             List<CutPattern> patterns = new ArrayList<>();
