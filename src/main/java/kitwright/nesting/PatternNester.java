@@ -85,7 +85,8 @@ public final class PatternNester implements NestingAlgorithm {
         return a.envelopeVolumeMm3() < b.envelopeVolumeMm3() * (1 - 1e-12);
     }
 
-    private static NestingSolution finish(NestingProblem problem, NestForest forest, double bound) {
+    private static NestingSolution finish(NestingProblem problem, NestForest forest, double rawBound) {
+        double bound = Math.round(rawBound * 1e6) / 1e6; // LP round-off, e.g. 3.0000000000000036
         Double limit = problem.maxBundleMassKg();
         if (limit != null) {
             List<String> heavy = new ArrayList<>();

@@ -108,4 +108,14 @@ class PatternNesterTest {
         assertThat(result.plan().status()).isEqualTo(Status.INFEASIBLE);
         assertThat(result.reason()).contains("A").contains("25.0 kg");
     }
+
+    @Test
+    @DisplayName("No pieces (every section infeasible in cutting): no bundles, bound 0, OPTIMAL")
+    void nothingToNest() {
+        NestingProblem problem = new NestingProblem(List.of(), 2.0, 10, 25.0);
+        NestResult result = Nester.run(problem, NestingFixtures.worstCase(), NestingFixtures.quick());
+        NestPlanValidator.validate(problem, result.plan());
+        assertThat(result.plan().bundles()).isEmpty();
+        assertThat(result.plan().status()).isEqualTo(Status.OPTIMAL);
+    }
 }
