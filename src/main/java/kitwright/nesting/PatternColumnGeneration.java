@@ -21,18 +21,21 @@ import java.util.Set;
  * forest, and the number of bundles is N - sum_t g_t with g_t the tubes of type t placed as guests:
  * <pre>
  *   max  sum_{h,p} (sum_t w_t a_tp) x_hp
- *   s.t. sum_{h,p} a_tp x_hp &lt;= n_t   for every type t   (supply of guests, dual pi_t)
- *        sum_p x_hp         &lt;= n_h   for every host type h (one pattern per host, dual mu_h)
+ *   s.t. sum_{h,p} a_tp x_hp &lt;= s_t   for every type t   (guests still to place, dual pi_t)
+ *        sum_p x_hp         &lt;= m_h   for every host type h (hosts still without a pattern, dual mu_h)
  *        x_hp &gt;= 0
  * </pre>
- * Phase 1 uses w_t = 1 (tubes nested); phase 2 adds a little of each type's envelope volume to w_t to bring in
- * patterns that nest the bulky tubes, for the integer phase's second objective.
+ * with s_t = m_t = n_t for the whole kit; {@link PatternDiving} lowers them as it fixes patterns. Weights w_t = 1
+ * count the tubes nested; {@link #bulkyWeights} add a little of each type's envelope volume, to favour nesting the
+ * bulky tubes among plans that nest as many.
  *
  * <p>Bound: for any pi &gt;= 0, the Lagrangian relaxation gives nested &lt;= sum_t pi_t n_t + sum_h n_h
  * max(0, K_h(1 - pi)), with K_h the pricing bound; it holds whether or not column generation converged. Bundles
  * &gt;= N - that value.
+ *
+ * <p>One object per nesting run (it owns a native solver: close it).
  */
-final class PatternColumnGeneration {
+final class PatternColumnGeneration implements AutoCloseable {
 
     /**
      * The columns generated (as layouts capped at the supply, and as the LP saw them, uncapped), the final LP
@@ -43,117 +46,158 @@ final class PatternColumnGeneration {
                   double nestedUpperBound, int iterations) {
     }
 
-    private PatternColumnGeneration() {
-    }
+    private final List<TubeType> types;
+    private final PatternPricing pricing;
+    private final MPSolver solver;
+    private final MPConstraint[] supply;
+    private final MPConstraint[] hosts;
+    private final MPObjective objective;
+    private final List<int[]> rows = new ArrayList<>();
+    private final List<Integer> hostOf = new ArrayList<>();
+    private final List<List<Integer>> lpCounts = new ArrayList<>();
+    private final List<MPVariable> variables = new ArrayList<>();
+    private final Set<List<Integer>> seen = new HashSet<>();
+    private final int[] guestsLeft;
+    private double[] weight;
+    private double[] pi;
+    private int iterations;
 
-    static Result run(NestingProblem problem, List<TubeType> types, PatternPricing pricing, int maxIterations) {
+    PatternColumnGeneration(List<TubeType> types, PatternPricing pricing) {
         Loader.loadNativeLibraries();
-        MPSolver solver = MPSolver.createSolver("GLOP");
-        try {
-            return run(solver, problem, types, pricing, maxIterations);
-        } finally {
-            solver.delete();
-        }
-    }
-
-    private static Result run(MPSolver solver, NestingProblem problem, List<TubeType> types, PatternPricing pricing,
-                              int maxIterations) {
+        this.types = types;
+        this.pricing = pricing;
         int n = types.size();
-        MPConstraint[] supply = new MPConstraint[n];
-        MPConstraint[] hosts = new MPConstraint[n];
+        solver = MPSolver.createSolver("GLOP");
+        supply = new MPConstraint[n];
+        hosts = new MPConstraint[n];
         for (int t = 0; t < n; t++) {
-            // sum_{h,p} a_tp x_hp <= n_t
             supply[t] = solver.makeConstraint(-MPSolver.infinity(), types.get(t).count(), "supply_" + t);
-            // sum_p x_hp <= n_h
             hosts[t] = solver.makeConstraint(-MPSolver.infinity(), types.get(t).count(), "hosts_" + t);
         }
-        MPObjective objective = solver.objective();
+        objective = solver.objective();
         objective.setMaximization();
-        List<Pattern> columns = new ArrayList<>();
-        List<List<Integer>> lpCounts = new ArrayList<>();
-        List<MPVariable> variables = new ArrayList<>();
-        Set<List<Integer>> seen = new HashSet<>();
-        double[] unit = new double[n];
-        java.util.Arrays.fill(unit, 1.0);
-        double volumeMax = types.stream().mapToDouble(t -> t.sample().envelopeVolumeMm3()).max().orElse(1);
-        double[] bulky = new double[n];
-        for (int t = 0; t < n; t++) {
-            bulky[t] = 1.0 + 1e-3 * types.get(t).sample().envelopeVolumeMm3() / volumeMax;
-        }
-        double[] pi = new double[n];
-        double nestedBound = Double.POSITIVE_INFINITY;
-        double phaseOneValue = 0;
-        int iterations = 0;
-        for (int phase = 1; phase <= 2; phase++) {
-            double[] weight = phase == 1 ? unit : bulky;
-            for (int c = 0; c < columns.size(); c++) {
-                objective.setCoefficient(variables.get(c), value(lpCounts.get(c), weight));
+        guestsLeft = pricing.supplyOfAll();
+        weight = unitWeights(n);
+        pi = new double[n];
+    }
+
+    /** Phase 1 to convergence (or the round limit), the bound, then phase 2 with bulky weights. */
+    static Result run(NestingProblem problem, List<TubeType> types, PatternPricing pricing, int maxIterations) {
+        try (PatternColumnGeneration cg = new PatternColumnGeneration(types, pricing)) {
+            double phaseOne = cg.generate(unitWeights(types.size()), maxIterations);
+            double bound = cg.lagrangianBound();
+            cg.generate(bulkyWeights(types), Math.max(1, maxIterations / 4));
+            List<Pattern> columns = new ArrayList<>();
+            for (int c = 0; c < cg.size(); c++) {
+                columns.add(cg.realisable(c, pricing.supplyOfAll()));
             }
-            int limit = phase == 1 ? maxIterations : Math.max(1, maxIterations / 4);
-            for (int round = 0; round < limit; round++) {
-                iterations++;
-                solveOrThrow(solver);
-                if (phase == 1) {
-                    phaseOneValue = objective.value();
+            return new Result(columns, List.copyOf(cg.lpCounts), cg.values(), phaseOne, bound, cg.iterations);
+        }
+    }
+
+    static double[] unitWeights(int n) {
+        double[] w = new double[n];
+        java.util.Arrays.fill(w, 1.0);
+        return w;
+    }
+
+    /** 1 + 0.001 v_t / max v: as many tubes nested first, the bulkiest among them. */
+    static double[] bulkyWeights(List<TubeType> types) {
+        double volumeMax = types.stream().mapToDouble(t -> t.sample().envelopeVolumeMm3()).max().orElse(1);
+        double[] w = new double[types.size()];
+        for (int t = 0; t < w.length; t++) {
+            w[t] = 1.0 + 1e-3 * types.get(t).sample().envelopeVolumeMm3() / volumeMax;
+        }
+        return w;
+    }
+
+    /** Sets the right-hand sides: guests still to place (s_t) and hosts still free (m_h). */
+    void setSupply(int[] guests, int[] freeHosts) {
+        for (int t = 0; t < types.size(); t++) {
+            supply[t].setBounds(-MPSolver.infinity(), guests[t]);
+            hosts[t].setBounds(-MPSolver.infinity(), freeHosts[t]);
+            guestsLeft[t] = guests[t];
+        }
+    }
+
+    /** Column generation with these weights for at most {@code maxRounds} LP solves; returns the LP value. */
+    double generate(double[] weights, int maxRounds) {
+        weight = weights;
+        for (int c = 0; c < variables.size(); c++) {
+            objective.setCoefficient(variables.get(c), value(lpCounts.get(c), weight));
+        }
+        double value = 0;
+        int n = types.size();
+        for (int round = 0; round < maxRounds; round++) {
+            iterations++;
+            solveOrThrow();
+            value = objective.value();
+            double[] mu = new double[n];
+            for (int t = 0; t < n; t++) {
+                pi[t] = Math.max(0, supply[t].dualValue());
+                mu[t] = Math.max(0, hosts[t].dualValue());
+            }
+            double[] reduced = new double[n];
+            for (int t = 0; t < n; t++) {
+                reduced[t] = weight[t] - pi[t];
+            }
+            int[][] best = new int[n][];
+            pricing.price(reduced, false, best, guestsLeft);
+            boolean added = false;
+            for (int h : pricing.hostTypes()) {
+                if (best[h] == null) {
+                    continue;
                 }
-                double[] mu = new double[n];
-                for (int t = 0; t < n; t++) {
-                    pi[t] = Math.max(0, supply[t].dualValue());
-                    mu[t] = Math.max(0, hosts[t].dualValue());
-                }
-                double[] reduced = new double[n];
-                for (int t = 0; t < n; t++) {
-                    reduced[t] = weight[t] - pi[t];
-                }
-                int[][] best = new int[n][];
-                pricing.price(reduced, false, best);
-                boolean added = false;
-                for (int h : pricing.hostTypes()) {
-                    if (best[h] == null) {
-                        continue;
-                    }
-                    List<Integer> counts = pricing.rowCounts(h, best[h]);
-                    List<Integer> key = new ArrayList<>(counts);
-                    key.add(h);
-                    if (value(counts, reduced) - mu[h] <= 1e-7 || !seen.add(key)) {
-                        continue;
-                    }
-                    MPVariable x = solver.makeNumVar(0, MPSolver.infinity(), "x_" + h + "_" + columns.size());
-                    for (int t = 0; t < n; t++) {
-                        if (counts.get(t) > 0) {
-                            supply[t].setCoefficient(x, counts.get(t)); // a_tp in sum_{h,p} a_tp x_hp <= n_t
-                        }
-                    }
-                    hosts[h].setCoefficient(x, 1); // in sum_p x_hp <= n_h
-                    objective.setCoefficient(x, value(counts, weight));
-                    columns.add(pricing.rowPattern(h, best[h]));
-                    lpCounts.add(counts);
-                    variables.add(x);
+                List<Integer> counts = pricing.rowCounts(h, best[h]);
+                List<Integer> key = new ArrayList<>(counts);
+                key.add(h);
+                if (value(counts, reduced) - mu[h] > 1e-7 && seen.add(key)) {
+                    add(h, best[h], counts);
                     added = true;
                 }
-                if (!added) {
-                    break;
-                }
             }
-            if (phase == 1) {
-                nestedBound = lagrangianBound(types, pricing, pi);
+            if (!added) {
+                break;
             }
         }
-        solveOrThrow(solver);
-        double[] values = variables.stream().mapToDouble(MPVariable::solutionValue).toArray();
-        return new Result(columns, lpCounts, values, phaseOneValue, nestedBound, iterations);
+        return value;
     }
 
-    private static double value(List<Integer> counts, double[] weight) {
-        double sum = 0;
-        for (int t = 0; t < counts.size(); t++) {
-            sum += weight[t] * counts.get(t);
+    private void add(int host, int[] columnRows, List<Integer> counts) {
+        MPVariable x = solver.makeNumVar(0, MPSolver.infinity(), "x_" + host + "_" + variables.size());
+        for (int t = 0; t < types.size(); t++) {
+            if (counts.get(t) > 0) {
+                supply[t].setCoefficient(x, counts.get(t)); // a_tp in sum_{h,p} a_tp x_hp <= s_t
+            }
         }
-        return sum;
+        hosts[host].setCoefficient(x, 1); // in sum_p x_hp <= m_h
+        objective.setCoefficient(x, value(counts, weight));
+        rows.add(columnRows);
+        hostOf.add(host);
+        lpCounts.add(counts);
+        variables.add(x);
     }
 
-    /** sum_t pi_t n_t + sum_h n_h max(0, K_h(1 - pi)): an upper bound on the tubes any plan nests. */
-    static double lagrangianBound(List<TubeType> types, PatternPricing pricing, double[] pi) {
+    int size() {
+        return variables.size();
+    }
+
+    int hostOf(int column) {
+        return hostOf.get(column);
+    }
+
+    /** The LP solution of the last solve. */
+    double[] values() {
+        return variables.stream().mapToDouble(MPVariable::solutionValue).toArray();
+    }
+
+    /** Column c as a layout a host can carry with the given guests left (rows capped at the supply). */
+    Pattern realisable(int column, int[] guests) {
+        return pricing.rowPattern(hostOf.get(column), rows.get(column), guests);
+    }
+
+    /** sum_t pi_t n_t + sum_h n_h max(0, K_h(1 - pi)) with the last duals: an upper bound on tubes nested. */
+    double lagrangianBound() {
         int n = types.size();
         double[] reduced = new double[n];
         double bound = 0;
@@ -168,10 +212,23 @@ final class PatternColumnGeneration {
         return bound;
     }
 
-    private static void solveOrThrow(MPSolver solver) {
+    private static double value(List<Integer> counts, double[] weight) {
+        double sum = 0;
+        for (int t = 0; t < counts.size(); t++) {
+            sum += weight[t] * counts.get(t);
+        }
+        return sum;
+    }
+
+    private void solveOrThrow() {
         MPSolver.ResultStatus status = solver.solve();
         if (status != MPSolver.ResultStatus.OPTIMAL) {
             throw new IllegalStateException("nesting master LP: GLOP returned " + status);
         }
+    }
+
+    @Override
+    public void close() {
+        solver.delete();
     }
 }

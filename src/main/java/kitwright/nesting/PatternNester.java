@@ -12,7 +12,8 @@ import kitwright.model.Status;
  *   <li>Small kits: every pattern is enumerated ({@link PatternEnumeration}) and CP-SAT solves the exact pattern
  *       model ({@link PatternIntegerPhase}); OPTIMAL there is a proof.
  *   <li>Otherwise column generation ({@link PatternColumnGeneration}) solves the LP relaxation and proves a lower
- *       bound; the rounded-down LP solution and CP-SAT over the generated columns give two more plans.
+ *       bound; diving ({@link PatternDiving}) rounds it into whole patterns and, while a gap to the bound is left,
+ *       CP-SAT picks from every column generated ({@link PatternIntegerPhase}).
  *   <li>Each pattern plan is built ({@link PatternRealisation}), brought within the mass limit ({@link MassRepair})
  *       and completed by best-fit decreasing over what is left. The best plan wins (fewer bundles, then less volume;
  *       earlier on a tie).
@@ -53,18 +54,24 @@ public final class PatternNester implements NestingAlgorithm {
                 }
             }
             if (!proven) {
-                PatternColumnGeneration.Result lp = PatternColumnGeneration.run(problem, types, pricing,
-                        options.maxColumnIterations());
-                bound = Math.max(bound, tubes - lp.nestedUpperBound());
-                long[] floors = new long[lp.columns().size()];
-                for (int p = 0; p < floors.length; p++) {
-                    floors[p] = (long) Math.floor(lp.lpValues()[p] + 1e-9);
-                }
-                candidates.add(PatternRealisation.realise(problem, types, lp.columns(), floors));
-                PatternIntegerPhase.Result integer = PatternIntegerPhase.solve(types, lp.columns(), lp.lpValues(),
-                        options.deterministicSeconds(), options.wallSeconds());
-                if (integer != null) {
-                    candidates.add(PatternRealisation.realise(problem, types, lp.columns(), integer.counts()));
+                try (PatternColumnGeneration cg = new PatternColumnGeneration(types, pricing)) {
+                    cg.generate(PatternColumnGeneration.unitWeights(types.size()), options.maxColumnIterations());
+                    bound = Math.max(bound, tubes - cg.lagrangianBound());
+                    PatternDiving.Dive dive = PatternDiving.dive(cg, types, options.maxColumnIterations(),
+                            options.maxDives());
+                    candidates.add(PatternRealisation.realise(problem, types, dive.patterns(), dive.counts()));
+                    if (Math.ceil(bound - 1e-6) < candidates.get(candidates.size() - 1).bundles()) {
+                        List<Pattern> columns = new ArrayList<>();
+                        int[] everyTube = pricing.supplyOfAll();
+                        for (int c = 0; c < cg.size(); c++) {
+                            columns.add(cg.realisable(c, everyTube));
+                        }
+                        PatternIntegerPhase.Result integer = PatternIntegerPhase.solve(types, columns, null,
+                                options.deterministicSeconds(), options.wallSeconds());
+                        if (integer != null) {
+                            candidates.add(PatternRealisation.realise(problem, types, columns, integer.counts()));
+                        }
+                    }
                 }
             }
             for (NestForest candidate : candidates) {

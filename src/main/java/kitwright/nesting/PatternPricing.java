@@ -82,27 +82,37 @@ final class PatternPricing {
      * the rows of each type in the best knapsack of each host type (null where nothing is worth carrying).
      */
     double[] price(double[] guestValue, boolean bound, int[][] patterns) {
+        return price(guestValue, bound, patterns, supplyOfAll());
+    }
+
+    /** As {@link #price(double[], boolean, int[][])} with the guests still to be placed, per type. */
+    double[] price(double[] guestValue, boolean bound, int[][] patterns, int[] supply) {
         double[] best = new double[types.size()];
         for (List<Integer> hosts : hostsByBore.values()) {
-            priceBore(hosts, guestValue, bound, best, patterns);
+            priceBore(hosts, guestValue, bound, best, patterns, supply);
         }
         return best;
     }
 
+    /** Every tube of each type. */
+    int[] supplyOfAll() {
+        return types.stream().mapToInt(TubeType::count).toArray();
+    }
+
     private void priceBore(List<Integer> hosts, double[] guestValue, boolean bound, double[] best,
-                           int[][] patterns) {
+                           int[][] patterns, int[] supply) {
         HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(hosts.get(0)).sample()));
         List<int[]> items = new ArrayList<>(); // {guest type, rows, weight}
         List<Double> itemValues = new ArrayList<>();
         for (int g : guestsOf(hosts.get(0))) {
-            if (guestValue[g] <= 1e-12) {
+            if (guestValue[g] <= 1e-12 || supply[g] <= 0) {
                 continue;
             }
             Tube guest = types.get(g).sample();
             int channels = shape.mostChannels(guest.outerDiameterMm());
             int weight = bound ? (int) Math.floor(guest.lengthMm() / unitMm + 1e-9)
                     : (int) Math.ceil(guest.lengthMm() / unitMm - 1e-9);
-            int rowsLeft = types.get(g).count();
+            int rowsLeft = supply[g];
             for (int chunk = 1; rowsLeft > 0; chunk *= 2) {
                 int rows = Math.min(chunk, rowsLeft);
                 rowsLeft -= rows;
@@ -138,7 +148,7 @@ final class PatternPricing {
             int h = hosts.get(i);
             best[h] = value[hostCapacity[i]];
             if (bound) {
-                best[h] = Math.min(best[h], fractionalBound(h, guestValue, shape));
+                best[h] = Math.min(best[h], fractionalBound(h, guestValue, shape, supply));
             }
             if (!bound && best[h] > 1e-12) {
                 int[] rows = new int[types.size()];
@@ -155,13 +165,13 @@ final class PatternPricing {
     }
 
     /** Fractional knapsack: rows r_t <= n_t / k_t of length_t, value k_t * value_t, within the usable length. */
-    private double fractionalBound(int host, double[] guestValue, HostLoad shape) {
+    private double fractionalBound(int host, double[] guestValue, HostLoad shape, int[] supply) {
         List<double[]> rows = new ArrayList<>(); // {value per mm, length available, value of all}
         for (int g : guestsOf(host)) {
             if (guestValue[g] > 1e-12) {
                 Tube guest = types.get(g).sample();
                 int k = shape.mostChannels(guest.outerDiameterMm());
-                double length = guest.lengthMm() * types.get(g).count() / k;
+                double length = guest.lengthMm() * supply[g] / k;
                 rows.add(new double[] {k * guestValue[g] / guest.lengthMm(), length});
             }
         }
@@ -191,6 +201,11 @@ final class PatternPricing {
 
     /** The layout of rows: one segment per channel count, rows stacked; copies capped at the supply. */
     Pattern rowPattern(int host, int[] rows) {
+        return rowPattern(host, rows, supplyOfAll());
+    }
+
+    /** As {@link #rowPattern(int, int[])}, capped at the given supply per type. */
+    Pattern rowPattern(int host, int[] rows, int[] supply) {
         HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(host).sample()));
         Map<Integer, List<List<Integer>>> lanesByChannels = new java.util.TreeMap<>();
         List<Integer> counts = new ArrayList<>();
@@ -198,10 +213,11 @@ final class PatternPricing {
             counts.add(0);
         }
         for (int t = 0; t < types.size(); t++) {
-            if (rows[t] == 0) {
+            int channels = shape.mostChannels(types.get(t).sample().outerDiameterMm());
+            int copies = Math.min(rows[t] * channels, supply[t]);
+            if (copies <= 0) {
                 continue;
             }
-            int channels = shape.mostChannels(types.get(t).sample().outerDiameterMm());
             List<List<Integer>> lanes = lanesByChannels.computeIfAbsent(channels, k -> {
                 List<List<Integer>> l = new ArrayList<>();
                 for (int j = 0; j < k; j++) {
@@ -209,7 +225,6 @@ final class PatternPricing {
                 }
                 return l;
             });
-            int copies = Math.min(rows[t] * channels, types.get(t).count());
             counts.set(t, copies);
             for (int copy = 0; copy < copies; copy++) {
                 lanes.get(copy % channels).add(t);
