@@ -11,27 +11,30 @@ package kitwright.nesting;
  * @param maxExactPatterns     largest pattern set enumerated for an exact answer [3000]
  * @param maxExactGuests       most guests per host for the exact enumeration [8]
  * @param maxPricingWork       knapsack cells per pricing round; lengths are coarsened above it [2e7]
+ * @param maxPricingCells      knapsack cells in all, column generation and diving together; past it they stop and
+ *                             best-fit decreasing places what is left (the bound stays valid) [1e9]
  */
 public record NestingOptions(double deterministicSeconds, double wallSeconds, int maxColumnIterations,
-                             int maxDives, int maxExactPatterns, int maxExactGuests, double maxPricingWork) {
-    public static final NestingOptions DEFAULT = new NestingOptions(0.5, 10.0, 100, 200, 3000, 8, 2e7);
+                             int maxDives, int maxExactPatterns, int maxExactGuests, double maxPricingWork,
+                             double maxPricingCells) {
+    public static final NestingOptions DEFAULT = new NestingOptions(0.5, 10.0, 100, 200, 3000, 8, 2e7, 1e9);
 
     public NestingOptions {
         if (!(deterministicSeconds > 0) || !(wallSeconds > 0) || maxColumnIterations < 1 || maxDives < 1
                 || maxExactPatterns < 0
-                || maxExactGuests < 0 || !(maxPricingWork > 0)) {
+                || maxExactGuests < 0 || !(maxPricingWork > 0) || !(maxPricingCells > 0)) {
             throw new IllegalArgumentException("bad nesting options");
         }
     }
 
     public NestingOptions withWallSeconds(double seconds) {
         return new NestingOptions(deterministicSeconds, seconds, maxColumnIterations, maxDives, maxExactPatterns,
-                maxExactGuests, maxPricingWork);
+                maxExactGuests, maxPricingWork, maxPricingCells);
     }
 
     /** Without the exact enumeration (for comparing methods). */
     public NestingOptions withoutExactEnumeration() {
         return new NestingOptions(deterministicSeconds, wallSeconds, maxColumnIterations, maxDives, 0, 0,
-                maxPricingWork);
+                maxPricingWork, maxPricingCells);
     }
 }

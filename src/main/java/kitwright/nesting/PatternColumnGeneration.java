@@ -156,7 +156,7 @@ final class PatternColumnGeneration implements AutoCloseable {
                     added = true;
                 }
             }
-            if (!added) {
+            if (!added || pricing.exhausted()) {
                 break;
             }
         }
@@ -180,6 +180,11 @@ final class PatternColumnGeneration implements AutoCloseable {
 
     int size() {
         return variables.size();
+    }
+
+    /** True when the pricing work budget is spent. */
+    boolean exhausted() {
+        return pricing.exhausted();
     }
 
     int hostOf(int column) {

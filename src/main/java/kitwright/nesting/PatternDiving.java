@@ -10,7 +10,8 @@ import java.util.List;
  * problem and repeat until the LP has nothing left to nest. A fixed pattern is capped at the guests still left, so
  * the counts always respect the supply. The same scheme is the usual primal heuristic of column generation for
  * cutting stock (residual rounding; see Wascher and Gau 1996, "Heuristics for the integer one-dimensional cutting
- * stock problem: a computational study", OR Spektrum 18).
+ * stock problem: a computational study", OR Spektrum 18). Stops early when the pricing work budget is spent; what
+ * is not fixed by then is left to best-fit decreasing.
  */
 final class PatternDiving {
     /** Fixed pattern counts: the layouts and how many hosts use each. */
@@ -27,7 +28,7 @@ final class PatternDiving {
         List<Pattern> patterns = new ArrayList<>();
         List<Long> counts = new ArrayList<>();
         double[] weights = PatternColumnGeneration.bulkyWeights(types);
-        for (int dive = 0; dive < maxDives; dive++) {
+        for (int dive = 0; dive < maxDives && !cg.exhausted(); dive++) {
             cg.setSupply(guests, freeHosts);
             if (cg.generate(weights, roundsPerDive) < 1e-6) {
                 break;

@@ -38,7 +38,7 @@ public final class PatternNester implements NestingAlgorithm {
         int tubes = problem.tubes().size();
         double unit = Math.max(1.0, Math.ceil(PatternPricing.workWithMillimetres(problem, types)
                 / options.maxPricingWork()));
-        PatternPricing pricing = new PatternPricing(problem, types, unit);
+        PatternPricing pricing = new PatternPricing(problem, types, unit, options.maxPricingCells());
         if (!pricing.hostTypes().isEmpty()) {
             List<Pattern> all = unit == 1.0 ? PatternEnumeration.all(problem, types, pricing,
                     options.maxExactPatterns(), options.maxExactGuests()) : null;

@@ -29,13 +29,23 @@ final class PatternPricing {
     private final NestingProblem problem;
     private final List<TubeType> types;
     private final double unitMm;
+    /** Knapsack cells filled so far: the deterministic measure of the work done. */
+    private long cells;
     /** Host types grouped by bore: one dynamic programme serves every length of a bore. */
     private final Map<Double, List<Integer>> hostsByBore = new LinkedHashMap<>();
 
+    private final double cellBudget;
+
     PatternPricing(NestingProblem problem, List<TubeType> types, double unitMm) {
+        this(problem, types, unitMm, Double.POSITIVE_INFINITY);
+    }
+
+    /** With a budget of knapsack cells for the whole run, after which {@link #exhausted()} says so. */
+    PatternPricing(NestingProblem problem, List<TubeType> types, double unitMm, double cellBudget) {
         this.problem = problem;
         this.types = types;
         this.unitMm = unitMm;
+        this.cellBudget = cellBudget;
         for (TubeType h : types) {
             if (problem.usableLengthMm(h.sample()) > 0 && !guestsOf(h.index()).isEmpty()) {
                 hostsByBore.computeIfAbsent(h.sample().boreMm(), b -> new ArrayList<>()).add(h.index());
@@ -94,6 +104,16 @@ final class PatternPricing {
         return best;
     }
 
+    /** Knapsack cells filled so far by this object. */
+    long cells() {
+        return cells;
+    }
+
+    /** True when the cell budget is spent: column generation and diving stop. */
+    boolean exhausted() {
+        return cells > cellBudget;
+    }
+
     /** Every tube of each type. */
     int[] supplyOfAll() {
         return types.stream().mapToInt(TubeType::count).toArray();
@@ -128,6 +148,7 @@ final class PatternPricing {
             capacity = Math.max(capacity, hostCapacity[i]);
         }
         double[] value = new double[capacity + 1];
+        cells += (long) items.size() * (capacity + 1);
         boolean[][] keep = bound ? null : new boolean[items.size()][];
         for (int i = 0; i < items.size(); i++) {
             int w = items.get(i)[2];

@@ -41,6 +41,6 @@ final class NestingFixtures {
     }
 
     static NestingOptions quick() {
-        return new NestingOptions(0.5, 10, 50, 100, 3000, 8, 2e7);
+        return new NestingOptions(0.5, 10, 50, 100, 3000, 8, 2e7, 1e9);
     }
 }

@@ -118,4 +118,18 @@ class PatternNesterTest {
         assertThat(result.plan().bundles()).isEmpty();
         assertThat(result.plan().status()).isEqualTo(Status.OPTIMAL);
     }
+
+    @Test
+    @DisplayName("With the pricing work budget spent at once, the plan is still complete and valid, the bound too")
+    void workBudgetSpent() {
+        Random random = new Random(17);
+        NestingOptions starved = new NestingOptions(0.5, 10, 50, 100, 0, 0, 2e7, 1);
+        for (int round = 0; round < 10; round++) {
+            NestingProblem problem = random(random, 20 + random.nextInt(20), null);
+            NestResult result = Nester.run(problem, NestingFixtures.nominal(), starved);
+            NestPlanValidator.validate(problem, result.plan());
+            NestResult full = Nester.run(problem, NestingFixtures.nominal(), NestingFixtures.quick());
+            assertThat(result.plan().lowerBound()).isLessThanOrEqualTo(full.plan().bundles().size() + 1e-6);
+        }
+    }
 }
