@@ -14,13 +14,13 @@ import com.google.ortools.linearsolver.MPVariable;
  * </pre>
  * The duals price the item types: a new pattern of cost c is worth adding when c - sum_i pi_i a_i &lt; 0.
  */
-final class CoverRelaxation {
+public final class CoverRelaxation {
 
     /** LP value and the dual price of each item type (null when GLOP did not reach an optimum). */
-    record Solution(double value, double[] duals) {
+    public record Solution(double value, double[] duals) {
     }
 
-    Solution solve(int[][] counts, double[] cost, int[] demand) {
+    public Solution solve(int[][] counts, double[] cost, int[] demand) {
         Loader.loadNativeLibraries();
         MPSolver solver = MPSolver.createSolver("GLOP");
         try {
