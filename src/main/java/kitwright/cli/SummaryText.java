@@ -1,0 +1,76 @@
+package kitwright.cli;
+
+import java.util.Locale;
+import java.util.stream.Collectors;
+import kitwright.plan.KitSummary;
+import kitwright.plan.KitSummary.MarkLine;
+import kitwright.plan.KitSummary.SectionTotal;
+import kitwright.plan.KitSummary.StructureMembers;
+
+/** The kit summary as the console shows it after {@code check}. */
+final class SummaryText {
+    private SummaryText() {
+    }
+
+    static String format(KitSummary s) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Kit ").append(s.kit());
+        if (!s.description().isEmpty()) {
+            sb.append(": ").append(s.description());
+        }
+        sb.append("\n\n").append(s.marks()).append(" marks, ").append(s.bars()).append(" bars in the kit\n");
+        if (s.members() != null) {
+            sb.append(s.structures().size()).append(" structures with ").append(s.members())
+                    .append(" members in all; reuse ratio ").append(fixed(s.reuseRatio(), 2))
+                    .append(" (members in all structures / bars in the kit)\n");
+        } else {
+            sb.append("No structures.csv: quantities as given, no reuse ratio\n");
+        }
+        TextTable sections = new TextTable("Section", "Material", ">Marks", ">Bars", ">Cut length (m)",
+                ">Mass (kg)");
+        double totalLength = 0;
+        for (SectionTotal t : s.sections()) {
+            sections.row(t.section(), t.material(), t.marks(), t.bars(), fixed(t.cutLengthMm() / 1000, 3),
+                    fixed(t.massKg(), 1));
+            totalLength += t.cutLengthMm();
+        }
+        sections.row("All sections", "", s.marks(), s.bars(), fixed(totalLength / 1000, 3), fixed(s.barsMassKg(), 1));
+        sb.append('\n').append(sections.render(""));
+        TextTable marks = new TextTable("Mark", "Section", ">Cut length (mm)", ">Quantity", ">Needed", ">Spares",
+                ">Mass (kg)");
+        for (MarkLine m : s.markList()) {
+            marks.row(m.mark(), m.section(), fixed(m.lengthMm(), 1), m.quantity(), m.required(), m.surplus(),
+                    fixed(m.massKg(), 1));
+        }
+        sb.append('\n').append(marks.render(""));
+        if (!s.structures().isEmpty()) {
+            TextTable structures = new TextTable("Structure", ">Members");
+            for (StructureMembers m : s.structures()) {
+                structures.row(m.structure(), m.members());
+            }
+            sb.append('\n').append(structures.render(""));
+        }
+        sb.append('\n');
+        if (s.joints().types() == 0) {
+            sb.append("Joints: none (no joints.csv)\n");
+        } else {
+            sb.append("Joints: ").append(s.joints().types()).append(" types, ").append(s.joints().count())
+                    .append(" pieces, ").append(fixed(s.joints().massKg(), 1)).append(" kg\n");
+        }
+        if (s.kitMassKg() == null) {
+            sb.append("Kit mass: unknown (no materials file found, so no densities)\n");
+        } else {
+            sb.append("Kit mass: ").append(fixed(s.kitMassKg(), 1)).append(" kg (bars ")
+                    .append(fixed(s.barsMassKg(), 1)).append(" kg, joints ").append(fixed(s.jointsMassKg(), 1))
+                    .append(" kg)\n");
+        }
+        sb.append("Spares (bars beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
+                : s.spares().stream().map(c -> c.mark() + " " + c.count()).collect(Collectors.joining(", ")))
+                .append('\n');
+        return sb.toString();
+    }
+
+    private static String fixed(Double value, int decimals) {
+        return value == null ? "-" : String.format(Locale.ROOT, "%." + decimals + "f", value);
+    }
+}

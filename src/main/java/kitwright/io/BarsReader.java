@@ -1,0 +1,67 @@
+package kitwright.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads {@code bars.csv}: {@code mark,section,length_mm,quantity} and optional
+ * {@code node_to_node_mm,tolerance_mm,note}. Checks each row on its own (numbers, blanks, duplicate marks); the
+ * checks against the tube catalog and structures.csv are made when the kit is assembled.
+ */
+public final class BarsReader {
+    public static final CsvColumns COLUMNS = new CsvColumns(
+            List.of("mark", "section", "length_mm", "quantity"),
+            List.of("node_to_node_mm", "tolerance_mm", "note"));
+
+    private BarsReader() {
+    }
+
+    /** Reads a bars file on its own; throws with every problem found. */
+    public static List<Sourced<BarLine>> read(Path file) throws InvalidInputException {
+        Problems problems = new Problems();
+        List<Sourced<BarLine>> bars = read(file, problems);
+        problems.throwIfAny();
+        return bars;
+    }
+
+    /** Reads a bars file, adding problems; returns every row that names a mark. */
+    public static List<Sourced<BarLine>> read(Path file, Problems problems) {
+        List<Sourced<BarLine>> bars = new ArrayList<>();
+        CsvTable table = CsvTable.read(file, COLUMNS, "the kit's bars", problems).orElse(null);
+        if (table == null) {
+            return bars;
+        }
+        if (table.rows().isEmpty()) {
+            problems.add(file, 2, "", "no bars under the header (expected one row per mark)");
+        }
+        Map<String, Integer> firstLine = new HashMap<>();
+        for (CsvRow row : table.rows()) {
+            String mark = row.required("mark", "the mark, the name of the bar type");
+            String section = row.required("section", "a section of the tube catalog, e.g. CHS 48.3x3.2");
+            Double length = row.length("length_mm", "a cut length in millimetres above 0");
+            Integer quantity = row.whole("quantity", 1,
+                    "a whole number of bars, at least 1; delete the row if the mark is not in the kit");
+            Double nodeToNode = row.length("node_to_node_mm", "a node-to-node length in millimetres above 0");
+            Double tolerance = row.number("tolerance_mm", 0, true, "a cut tolerance in millimetres, 0 or more");
+            if (row.blank("length_mm") && row.blank("node_to_node_mm")) {
+                row.problem("length_mm", "the value is blank (expected a cut length in millimetres, or"
+                        + " node_to_node_mm to derive it from)");
+            }
+            if (mark == null) {
+                continue;
+            }
+            Integer earlier = firstLine.putIfAbsent(mark, row.line());
+            if (earlier != null) {
+                row.problem("mark", "mark " + mark + " is already on line " + earlier
+                        + " (expected each mark on one row only)");
+                continue;
+            }
+            bars.add(row.sourced(new BarLine(mark, section, length, quantity, nodeToNode, tolerance,
+                    row.text("note"), row.clean())));
+        }
+        return bars;
+    }
+}

@@ -1,0 +1,159 @@
+package kitwright.io;
+
+import java.math.BigDecimal;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
+
+/**
+ * One data row of a {@link CsvTable}, with typed access to its values. A value that is wrong adds a problem naming
+ * the file, line and column, and reads as null; a blank value reads as null without a problem (the reader decides
+ * whether blank is allowed, see {@link #required}).
+ */
+public final class CsvRow {
+    private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)");
+    private static final Pattern DECIMAL_COMMA = Pattern.compile("[+-]?\\d+,\\d+");
+
+    private final Path file;
+    private final int line;
+    private final Map<String, String> values;
+    private final Problems problems;
+    private int problemCount;
+
+    CsvRow(Path file, int line, Map<String, String> values, Problems problems) {
+        this.file = file;
+        this.line = line;
+        this.values = Map.copyOf(values);
+        this.problems = problems;
+    }
+
+    public Path file() {
+        return file;
+    }
+
+    /** The line the row starts on; the header is line 1. */
+    public int line() {
+        return line;
+    }
+
+    /** True when no value of this row has been found wrong so far. */
+    public boolean clean() {
+        return problemCount == 0;
+    }
+
+    /** Reports a problem on this row. */
+    public void problem(String column, String message) {
+        problemCount++;
+        problems.add(file, line, column, message);
+    }
+
+    /** A row-located value, for checks that run after reading. */
+    public <T> Sourced<T> sourced(T value) {
+        return new Sourced<>(value, file, line);
+    }
+
+    /** The trimmed text of a column, empty when blank or when the file has no such column. */
+    public String text(String column) {
+        return values.getOrDefault(column, "");
+    }
+
+    public boolean blank(String column) {
+        return text(column).isEmpty();
+    }
+
+    /** The text of a column that must not be blank, or null after reporting it. */
+    public String required(String column, String expected) {
+        String text = text(column);
+        if (text.isEmpty()) {
+            problem(column, "the value is blank (expected " + expected + ")");
+            return null;
+        }
+        return text;
+    }
+
+    /**
+     * A number at least {@code minimum} (above it when {@code minimumAllowed} is false), or null when blank or
+     * wrong.
+     */
+    public Double number(String column, double minimum, boolean minimumAllowed, String expected) {
+        String text = text(column);
+        if (text.isEmpty()) {
+            return null;
+        }
+        if (!NUMBER.matcher(text).matches()) {
+            String hint = DECIMAL_COMMA.matcher(text).matches() ? "; use a point for decimals" : "";
+            problem(column, "'" + text + "' is not a number (expected " + expected + hint + ")");
+            return null;
+        }
+        double value = Double.parseDouble(text);
+        if (value < minimum || (!minimumAllowed && value == minimum)) {
+            String wrong = value < 0 && minimum >= 0 ? "is negative" : value == 0 ? "is zero" : "is too small";
+            problem(column, text + " " + wrong + " (expected " + expected + ")");
+            return null;
+        }
+        return value;
+    }
+
+    /** A length in millimetres above zero, or null when blank or wrong. */
+    public Double length(String column, String expected) {
+        return number(column, 0, false, expected);
+    }
+
+    /** A whole number at least {@code minimum}, or null when blank or wrong. */
+    public Integer whole(String column, int minimum, String expected) {
+        String text = text(column);
+        if (text.isEmpty()) {
+            return null;
+        }
+        if (!NUMBER.matcher(text).matches()) {
+            problem(column, "'" + text + "' is not a number (expected " + expected + ")");
+            return null;
+        }
+        BigDecimal value = new BigDecimal(text);
+        if (value.stripTrailingZeros().scale() > 0) {
+            problem(column, text + " is not a whole number (expected " + expected + ")");
+            return null;
+        }
+        if (value.compareTo(BigDecimal.valueOf(Integer.MAX_VALUE)) > 0) {
+            problem(column, text + " is too large (expected " + expected + ")");
+            return null;
+        }
+        int whole = value.intValueExact();
+        if (whole < minimum) {
+            String wrong = whole < 0 ? "is negative" : whole == 0 ? "is zero" : "is too small";
+            problem(column, text + " " + wrong + " (expected " + expected + ")");
+            return null;
+        }
+        return whole;
+    }
+
+    /** A yes/no flag ({@code yes}, {@code no}, {@code true}, {@code false}), or null when blank or wrong. */
+    public Boolean flag(String column) {
+        String text = text(column).toLowerCase(Locale.ROOT);
+        switch (text) {
+            case "" -> {
+                return null;
+            }
+            case "yes", "true" -> {
+                return true;
+            }
+            case "no", "false" -> {
+                return false;
+            }
+            default -> {
+                problem(column, "'" + text(column) + "' is not yes or no (expected yes or no)");
+                return null;
+            }
+        }
+    }
+
+    /** Reports each of the given columns that is blank. */
+    public void requireValues(String... columns) {
+        for (String column : columns) {
+            if (blank(column)) {
+                problem(column, "the value is blank (expected a number)");
+            }
+        }
+    }
+}

@@ -1,0 +1,207 @@
+package kitwright.io;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
+import java.nio.charset.CharsetDecoder;
+import java.nio.charset.CoderResult;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+
+/**
+ * One CSV file read whole and checked against its known columns: UTF-8 (a byte-order mark is accepted),
+ * comma-separated, header on line 1 with names matched exactly after trimming. Rows come with the line they start
+ * on (the header is line 1); blank rows are skipped. Every problem goes to a {@link Problems}; a file whose header
+ * cannot be used yields no table.
+ */
+public final class CsvTable {
+    private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder()
+            .setIgnoreSurroundingSpaces(true).setTrim(true).setIgnoreEmptyLines(true).get();
+
+    private final Path file;
+    private final List<CsvRow> rows;
+
+    private CsvTable(Path file, List<CsvRow> rows) {
+        this.file = file;
+        this.rows = List.copyOf(rows);
+    }
+
+    public Path file() {
+        return file;
+    }
+
+    public List<CsvRow> rows() {
+        return rows;
+    }
+
+    /**
+     * Reads a CSV file, or reports why it cannot be read.
+     *
+     * @param what what the file holds, for messages ("the kit's bars")
+     */
+    public static Optional<CsvTable> read(Path file, CsvColumns columns, String what, Problems problems) {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            problems.add(Problem.ofFile(file, "file not found (expected " + what + ", columns "
+                    + columns.header() + ")"));
+            return Optional.empty();
+        } catch (IOException e) {
+            problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()
+                    + " (expected a readable CSV file)"));
+            return Optional.empty();
+        }
+        Optional<String> text = decode(file, bytes, problems);
+        if (text.isEmpty()) {
+            return Optional.empty();
+        }
+        if (text.get().isBlank()) {
+            problems.add(file, 1, "", "the file is empty (expected a header line: " + columns.header() + ")");
+            return Optional.empty();
+        }
+        return parse(file, text.get(), columns, problems);
+    }
+
+    private static Optional<String> decode(Path file, byte[] bytes, Problems problems) {
+        CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
+                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+        ByteBuffer in = ByteBuffer.wrap(bytes);
+        CharBuffer out = CharBuffer.allocate(bytes.length + 1);
+        CoderResult result = decoder.decode(in, out, true);
+        if (result.isError()) {
+            int line = 1;
+            for (int i = 0; i < in.position(); i++) {
+                line += bytes[i] == '\n' ? 1 : 0;
+            }
+            problems.add(file, line, "", "the file is not UTF-8 text (expected UTF-8; save it as 'CSV UTF-8')");
+            return Optional.empty();
+        }
+        decoder.flush(out);
+        String text = out.flip().toString();
+        return Optional.of(text.startsWith("\uFEFF") ? text.substring(1) : text);
+    }
+
+    private static Optional<CsvTable> parse(Path file, String text, CsvColumns columns, Problems problems) {
+        int[] lineStarts = lineStarts(text);
+        List<CSVRecord> records = new ArrayList<>();
+        try (CSVParser parser = CSVParser.parse(text, FORMAT)) {
+            for (CSVRecord record : parser) {
+                records.add(record);
+            }
+        } catch (IOException | UncheckedIOException e) {
+            // The broken record starts after the last good one (exact for one-line records).
+            int line = records.isEmpty() ? 1
+                    : lineOf(lineStarts, records.get(records.size() - 1).getCharacterPosition()) + 1;
+            problems.add(file, line, "", "the file is not valid CSV: " + firstLine(e.getMessage())
+                    + " (expected comma-separated values; close every opening quote)");
+            return Optional.empty();
+        }
+        CSVRecord headerRecord = records.get(0);
+        int headerLine = lineOf(lineStarts, headerRecord.getCharacterPosition());
+        Optional<List<String>> header = header(file, headerLine, headerRecord, columns, problems);
+        if (header.isEmpty()) {
+            return Optional.empty();
+        }
+        List<CsvRow> rows = new ArrayList<>();
+        for (CSVRecord record : records.subList(1, records.size())) {
+            int line = lineOf(lineStarts, record.getCharacterPosition());
+            if (record.stream().allMatch(String::isBlank)) {
+                continue;
+            }
+            if (record.size() != header.get().size()) {
+                problems.add(file, line, "", "the row has " + record.size() + " values but the header has "
+                        + header.get().size() + " columns (expected one value per column; quote a value that"
+                        + " contains a comma)");
+                continue;
+            }
+            Map<String, String> values = new LinkedHashMap<>();
+            for (int i = 0; i < record.size(); i++) {
+                values.put(header.get().get(i), record.get(i).trim());
+            }
+            rows.add(new CsvRow(file, line, values, problems));
+        }
+        return Optional.of(new CsvTable(file, rows));
+    }
+
+    /** Checks the header: separator, duplicates, unknown (with the nearest known name) and missing columns. */
+    private static Optional<List<String>> header(Path file, int line, CSVRecord record, CsvColumns columns,
+                                                 Problems problems) {
+        List<String> names = record.stream().map(String::trim).toList();
+        if (names.size() == 1) {
+            String only = names.get(0);
+            for (String separator : List.of(";", "\t")) {
+                if (only.contains(separator)) {
+                    String shown = separator.equals("\t") ? "tabs" : "';'";
+                    problems.add(file, line, "", "the file uses " + shown + " to separate columns (expected commas: "
+                            + columns.header() + ")");
+                    return Optional.empty();
+                }
+            }
+        }
+        int before = problems.count();
+        Set<String> seen = new HashSet<>();
+        Set<String> suggested = new HashSet<>();
+        for (String name : names) {
+            if (!seen.add(name)) {
+                problems.add(file, line, name, "the column appears twice (expected each column once)");
+            } else if (!columns.knows(name)) {
+                List<String> unused = columns.all().stream().filter(c -> !names.contains(c)).toList();
+                Optional<String> near = NearestName.of(name, unused);
+                near.ifPresent(suggested::add);
+                String hint = near.map(n -> "did you mean " + n + "? ").orElse("");
+                problems.add(file, line, name.isEmpty() ? "(blank)" : name, "unknown column (" + hint
+                        + "known columns: " + columns.describe() + ")");
+            }
+        }
+        for (String required : columns.required()) {
+            if (!names.contains(required) && !suggested.contains(required)) {
+                problems.add(file, line, required, "the column is missing (expected the header "
+                        + columns.header() + ")");
+            }
+        }
+        return problems.count() == before ? Optional.of(names) : Optional.empty();
+    }
+
+    private static int[] lineStarts(String text) {
+        List<Integer> starts = new ArrayList<>(List.of(0));
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) == '\n') {
+                starts.add(i + 1);
+            }
+        }
+        return starts.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    private static int lineOf(int[] lineStarts, long position) {
+        int low = 0;
+        int high = lineStarts.length - 1;
+        while (low < high) {
+            int middle = (low + high + 1) / 2;
+            if (lineStarts[middle] <= position) {
+                low = middle;
+            } else {
+                high = middle - 1;
+            }
+        }
+        return low + 1;
+    }
+
+    private static String firstLine(String message) {
+        return message == null ? "unreadable" : message.lines().findFirst().orElse(message);
+    }
+}

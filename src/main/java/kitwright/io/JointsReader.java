@@ -1,0 +1,56 @@
+package kitwright.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import kitwright.model.Joint;
+
+/** Reads {@code joints.csv}: {@code mark,diameter_mm,mass_kg,quantity}, the kit's joint types. */
+public final class JointsReader {
+    public static final CsvColumns COLUMNS = new CsvColumns(
+            List.of("mark", "diameter_mm", "mass_kg", "quantity"), List.of());
+
+    private JointsReader() {
+    }
+
+    /** Reads a joints file on its own; throws with every problem found. */
+    public static List<Joint> read(Path file) throws InvalidInputException {
+        Problems problems = new Problems();
+        List<Joint> joints = read(file, problems);
+        problems.throwIfAny();
+        return joints;
+    }
+
+    /** Reads a joints file, adding problems; returns the rows that could be read. */
+    public static List<Joint> read(Path file, Problems problems) {
+        List<Joint> joints = new ArrayList<>();
+        CsvTable table = CsvTable.read(file, COLUMNS, "the kit's joints", problems).orElse(null);
+        if (table == null) {
+            return joints;
+        }
+        if (table.rows().isEmpty()) {
+            problems.add(file, 2, "", "no joints under the header (expected one row per joint type)");
+        }
+        Map<String, Integer> firstLine = new HashMap<>();
+        for (CsvRow row : table.rows()) {
+            String mark = row.required("mark", "the joint's mark");
+            Double diameter = row.length("diameter_mm", "the joint's outside diameter in millimetres above 0");
+            Double mass = row.number("mass_kg", 0, false, "the mass of one joint in kilograms above 0");
+            Integer quantity = row.whole("quantity", 1, "a whole number of joints, at least 1");
+            row.requireValues("diameter_mm", "mass_kg", "quantity");
+            if (mark != null) {
+                Integer earlier = firstLine.putIfAbsent(mark, row.line());
+                if (earlier != null) {
+                    row.problem("mark", "joint mark " + mark + " is already on line " + earlier
+                            + " (expected each joint mark on one row only)");
+                }
+            }
+            if (row.clean()) {
+                joints.add(new Joint(mark, diameter, mass, quantity));
+            }
+        }
+        return joints;
+    }
+}

@@ -1,0 +1,150 @@
+package kitwright.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import kitwright.model.Bar;
+import kitwright.model.KitSettings;
+import kitwright.model.StructureCount;
+import kitwright.model.TubeCatalog;
+
+/**
+ * The checks across files that turn bars.csv rows into the kit's marks: each section is in the tube catalog; the
+ * cut length is derived from or agrees with the node-to-node length; each bar fits the longest stock length of its
+ * section; structures.csv names only known marks; and each quantity covers what the structures need (the largest
+ * count any one structure uses, or the sum when the structures stand together).
+ */
+final class KitAssembler {
+    /** Node-to-node and cut length agree within this, in millimetres. */
+    static final double LENGTH_AGREEMENT_MM = 0.1;
+
+    private KitAssembler() {
+    }
+
+    /**
+     * The kit's marks in bars.csv order, adding a problem for each row that fails a check.
+     *
+     * @param catalog    the tube catalog, or null when it could not be read cleanly (section checks are skipped)
+     * @param structures rows of structures.csv, empty when there is none
+     */
+    static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
+                           TubeCatalog catalog, Problems problems) {
+        Map<String, Need> needs = needs(settings, lines, structures, problems);
+        List<Bar> bars = new ArrayList<>();
+        for (Sourced<BarLine> sourced : lines) {
+            BarLine line = sourced.value();
+            if (!line.readable()) {
+                continue;
+            }
+            int before = problems.count();
+            Double length = cutLength(settings, sourced, problems);
+            if (catalog != null) {
+                checkSection(settings, sourced, length, catalog, problems);
+            }
+            Need need = needs.get(line.mark());
+            Integer quantity = line.quantity();
+            if (quantity == null && need != null) {
+                quantity = need.count;
+            } else if (quantity == null) {
+                String why = structures.isEmpty() ? "a whole number of bars; without structures.csv the quantity"
+                        + " must be given" : "a whole number of bars; structures.csv does not use mark " + line.mark();
+                problems.add(sourced.problem("quantity", "the value is blank (expected " + why + ")"));
+            } else if (need != null && quantity < need.count) {
+                problems.add(sourced.problem("quantity", "mark " + line.mark() + " has " + quantity + " bars but "
+                        + need.who + " " + need.count + " (expected at least " + need.count
+                        + ", or a blank quantity to take it from structures.csv)"));
+            }
+            if (problems.count() == before) {
+                int required = structures.isEmpty() ? quantity : need == null ? 0 : need.count;
+                bars.add(new Bar(line.mark(), line.section(), length, quantity, required, line.nodeToNodeMm(),
+                        line.toleranceMm(), line.note()));
+            }
+        }
+        return bars;
+    }
+
+    /** What the structures need of each mark; reports structure rows naming a mark bars.csv does not have. */
+    private static Map<String, Need> needs(KitSettings settings, List<Sourced<BarLine>> lines,
+                                           List<Sourced<StructureCount>> structures, Problems problems) {
+        Set<String> marks = new LinkedHashSet<>();
+        lines.forEach(l -> marks.add(l.value().mark()));
+        Map<String, Need> needs = new LinkedHashMap<>();
+        for (Sourced<StructureCount> row : structures) {
+            StructureCount count = row.value();
+            if (!marks.contains(count.mark())) {
+                String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
+                String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";
+                problems.add(row.problem("mark", "mark " + count.mark() + " is not in bars.csv (" + hint
+                        + "expected a mark of bars.csv" + known + ")"));
+                continue;
+            }
+            Need need = needs.get(count.mark());
+            if (settings.structuresStandTogether()) {
+                int total = (need == null ? 0 : need.count) + count.count();
+                needs.put(count.mark(), new Need(total, "the structures standing together need"));
+            } else if (need == null || count.count() > need.count) {
+                needs.put(count.mark(), new Need(count.count(), "structure " + count.structure() + " needs"));
+            }
+        }
+        return needs;
+    }
+
+    /** The cut length, derived from node-to-node when blank; null when it cannot be had (reported). */
+    private static Double cutLength(KitSettings settings, Sourced<BarLine> sourced, Problems problems) {
+        BarLine line = sourced.value();
+        if (line.nodeToNodeMm() == null) {
+            return line.lengthMm();
+        }
+        double deduction = settings.endDeductionMm();
+        double derived = line.nodeToNodeMm() - 2 * deduction;
+        String sum = "node_to_node_mm " + Figures.plain(line.nodeToNodeMm()) + " mm minus 2 x endDeductionMm "
+                + Figures.plain(deduction) + " mm";
+        if (derived <= 0) {
+            problems.add(sourced.problem("node_to_node_mm", sum + " leaves no bar (expected more than "
+                    + Figures.plain(2 * deduction) + " mm)"));
+            return null;
+        }
+        if (line.lengthMm() != null && Math.abs(line.lengthMm() - derived) > LENGTH_AGREEMENT_MM + 1e-9) {
+            problems.add(sourced.problem("length_mm", "the cut length " + Figures.plain(line.lengthMm())
+                    + " mm does not match " + sum + " = " + Figures.plain(derived) + " mm (expected "
+                    + Figures.plain(derived) + " mm within " + LENGTH_AGREEMENT_MM
+                    + " mm, or a blank length_mm to derive it)"));
+            return null;
+        }
+        return line.lengthMm() != null ? line.lengthMm() : derived;
+    }
+
+    private static void checkSection(KitSettings settings, Sourced<BarLine> sourced, Double length,
+                                     TubeCatalog catalog, Problems problems) {
+        BarLine line = sourced.value();
+        if (catalog.section(line.section()).isEmpty()) {
+            Set<String> sections = catalog.sections().keySet();
+            String hint = NearestName.of(line.section(), sections).map(n -> "did you mean " + n + "? ").orElse("");
+            String known = sections.size() <= 20 ? ": " + String.join(", ", sections) : "";
+            problems.add(sourced.problem("section", "unknown section '" + line.section() + "' (" + hint
+                    + "expected a section of " + fileName(catalog.file()) + known + ")"));
+            return;
+        }
+        double longest = catalog.longestLengthMm(line.section());
+        double usable = longest - 2 * settings.trimMm();
+        if (length != null && length > usable + 1e-9) {
+            problems.add(sourced.problem("length_mm", "mark " + line.mark() + " is " + Figures.plain(length)
+                    + " mm long, more than the usable " + Figures.plain(usable) + " mm of the longest stock length of "
+                    + line.section() + " (expected at most " + Figures.plain(usable) + " mm = "
+                    + Figures.plain(longest) + " mm minus 2 x trimMm " + Figures.plain(settings.trimMm())
+                    + " mm, or a longer stock length in the catalog)"));
+        }
+    }
+
+    private static String fileName(Path file) {
+        return file == null ? "the tube catalog" : String.valueOf(file.getFileName());
+    }
+
+    /** How many bars of a mark the structures need, and who needs them (for messages). */
+    private record Need(int count, String who) {
+    }
+}

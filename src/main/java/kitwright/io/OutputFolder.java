@@ -1,0 +1,175 @@
+package kitwright.io;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileVisitResult;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.util.concurrent.ThreadLocalRandom;
+
+/**
+ * A result folder that appears whole or not at all. Files are written into a hidden temporary folder beside the
+ * target (same parent, so the same file system); {@link #commit} then moves it into place with an atomic rename
+ * where the file system allows. An existing target is replaced only after the new folder is complete, and only
+ * when kitwright wrote it (it holds the marker file {@value #MARKER}) or it is empty, so that a mistyped
+ * {@code --out} never wipes a folder of the user's. Closing without commit deletes the temporary folder.
+ *
+ * <pre>{@code
+ * try (OutputFolder out = OutputFolder.create(dir)) {
+ *     out.write("summary.json", PrettyJson.write(summary));
+ *     out.commit();
+ * }
+ * }</pre>
+ */
+public final class OutputFolder implements AutoCloseable {
+    /** Marks a folder as kitwright's output, which the next run may replace whole. */
+    public static final String MARKER = ".kitwright-output";
+    private static final String MARKER_TEXT = "Written by kitwright. The next run into this folder replaces it"
+            + " whole; keep your own files elsewhere.\n";
+
+    private final Path target;
+    private final Path temporary;
+    private boolean committed;
+
+    private OutputFolder(Path target, Path temporary) {
+        this.target = target;
+        this.temporary = temporary;
+    }
+
+    /**
+     * Starts a result folder for {@code target}; throws InvalidInputException when the target is a file or a
+     * folder kitwright did not write.
+     */
+    public static OutputFolder create(Path target) throws InvalidInputException, IOException {
+        Path absolute = target.toAbsolutePath().normalize();
+        if (Files.exists(absolute) && !replaceable(absolute)) {
+            String why = Files.isDirectory(absolute) ? "the folder exists and was not written by kitwright"
+                    : "this is a file, not a folder";
+            throw new InvalidInputException(Problem.ofFile(target, why + " (expected a new or empty folder, or"
+                    + " one kitwright wrote before, which is then replaced)"));
+        }
+        Path parent = absolute.getParent();
+        Files.createDirectories(parent);
+        Path temporary = newFolder(parent, "." + absolute.getFileName() + ".partial-");
+        Files.writeString(temporary.resolve(MARKER), MARKER_TEXT, StandardCharsets.UTF_8);
+        return new OutputFolder(absolute, temporary);
+    }
+
+    /** The final location. */
+    public Path target() {
+        return target;
+    }
+
+    /** Where a file of the result is being written now (inside the temporary folder). */
+    public Path resolve(String name) {
+        if (committed) {
+            throw new IllegalStateException("the output folder is already in place: " + target);
+        }
+        Path file = temporary.resolve(name).normalize();
+        if (!file.startsWith(temporary)) {
+            throw new IllegalArgumentException("not a name inside the output folder: " + name);
+        }
+        return file;
+    }
+
+    /** Writes a UTF-8 text file of the result, creating sub-folders as needed. */
+    public Path write(String name, String text) throws IOException {
+        Path file = resolve(name);
+        Files.createDirectories(file.getParent());
+        return Files.writeString(file, text, StandardCharsets.UTF_8);
+    }
+
+    /** Moves the complete folder into place, replacing a previous kitwright result. */
+    public void commit() throws IOException {
+        if (committed) {
+            return;
+        }
+        Path old = null;
+        if (Files.exists(target)) {
+            old = target.resolveSibling(temporary.getFileName().toString().replace(".partial-", ".old-"));
+            move(target, old);
+        }
+        try {
+            move(temporary, target);
+        } catch (IOException e) {
+            if (old != null) {
+                move(old, target);
+            }
+            throw e;
+        }
+        committed = true;
+        if (old != null) {
+            deleteTree(old);
+        }
+    }
+
+    /** Deletes the temporary folder unless the result was committed. */
+    @Override
+    public void close() throws IOException {
+        if (!committed) {
+            deleteTree(temporary);
+        }
+    }
+
+    /** A new folder with a unique name; unlike a temp directory it gets the usual permissions (umask). */
+    private static Path newFolder(Path parent, String prefix) throws IOException {
+        for (int attempt = 0; ; attempt++) {
+            Path folder = parent.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
+            try {
+                return Files.createDirectory(folder);
+            } catch (FileAlreadyExistsException e) {
+                if (attempt > 100) {
+                    throw e;
+                }
+            }
+        }
+    }
+
+    private static boolean replaceable(Path folder) throws IOException {
+        if (!Files.isDirectory(folder)) {
+            return false;
+        }
+        if (Files.exists(folder.resolve(MARKER))) {
+            return true;
+        }
+        try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder)) {
+            return !entries.iterator().hasNext();
+        }
+    }
+
+    private static void move(Path from, Path to) throws IOException {
+        try {
+            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(from, to);
+        }
+    }
+
+    private static void deleteTree(Path root) throws IOException {
+        if (!Files.exists(root)) {
+            return;
+        }
+        Files.walkFileTree(root, new SimpleFileVisitor<>() {
+            @Override
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attributes) throws IOException {
+                Files.delete(file);
+                return FileVisitResult.CONTINUE;
+            }
+
+            @Override
+            public FileVisitResult postVisitDirectory(Path dir, IOException failure) throws IOException {
+                if (failure != null) {
+                    throw failure;
+                }
+                Files.delete(dir);
+                return FileVisitResult.CONTINUE;
+            }
+        });
+    }
+}

@@ -1,0 +1,122 @@
+package kitwright.plan;
+
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import kitwright.model.Bar;
+import kitwright.model.Joint;
+import kitwright.model.Kit;
+import kitwright.model.Section;
+import kitwright.model.StructureCount;
+
+/**
+ * What a kit holds, before anything is planned: marks, bars, cut length and mass per section, joints, the members
+ * of each structure and the reuse ratio (members in all structures / bars in the kit), and the spares (bars beyond
+ * what the structures need). Lengths are rounded to 0.1 mm, masses to 0.001 kg, the ratio to 0.001.
+ *
+ * @param members      members in all structures, or null without structures.csv
+ * @param reuseRatio   members / bars, or null without structures.csv
+ * @param barsMassKg   mass of all bars, or null when materials are unknown
+ * @param jointsMassKg mass of all joints (0 without joints.csv)
+ * @param kitMassKg    bars plus joints, or null when materials are unknown
+ * @param spares       marks with more bars than the structures need, and how many more
+ */
+public record KitSummary(String kit, String description, int marks, int bars, Integer members, Double reuseRatio,
+                         List<SectionTotal> sections, List<MarkLine> markList, List<StructureMembers> structures,
+                         JointTotal joints, Double barsMassKg, double jointsMassKg, Double kitMassKg,
+                         List<SpareCount> spares) {
+
+    public KitSummary {
+        sections = List.copyOf(sections);
+        markList = List.copyOf(markList);
+        structures = List.copyOf(structures);
+        spares = List.copyOf(spares);
+    }
+
+    /** Totals of one section: marks, bars, total cut length and mass (null when the material is unknown). */
+    public record SectionTotal(String section, String material, int marks, int bars, double cutLengthMm,
+                               Double massKg) {
+    }
+
+    /** One mark: cut length, kit quantity, what the structures need, the surplus and the mark's total mass. */
+    public record MarkLine(String mark, String section, double lengthMm, int quantity, int required, int surplus,
+                           Double massKg) {
+    }
+
+    /** Members (bars in place) of one structure. */
+    public record StructureMembers(String structure, int members) {
+    }
+
+    /** Joint types, pieces and their total mass. */
+    public record JointTotal(int types, int count, double massKg) {
+    }
+
+    /** Spare bars of one mark: the kit's quantity minus what the structures need. */
+    public record SpareCount(String mark, int count) {
+    }
+
+    /** Summarises a validated kit. */
+    public static KitSummary of(Kit kit) {
+        List<MarkLine> markList = new ArrayList<>();
+        List<SpareCount> spares = new ArrayList<>();
+        boolean massKnown = true;
+        double barsMass = 0;
+        for (Bar bar : kit.bars()) {
+            Optional<Double> each = kit.barMassKg(bar);
+            massKnown &= each.isPresent();
+            Double total = each.map(m -> m * bar.quantity()).orElse(null);
+            barsMass += total == null ? 0 : total;
+            markList.add(new MarkLine(bar.mark(), bar.section(), round(bar.lengthMm(), 1), bar.quantity(),
+                    bar.requiredQuantity(), bar.surplus(), total == null ? null : round(total, 3)));
+            if (bar.surplus() > 0) {
+                spares.add(new SpareCount(bar.mark(), bar.surplus()));
+            }
+        }
+        int bars = kit.bars().stream().mapToInt(Bar::quantity).sum();
+        Integer members = null;
+        Double reuseRatio = null;
+        if (!kit.structures().isEmpty()) {
+            members = kit.structures().stream().mapToInt(StructureCount::count).sum();
+            reuseRatio = round((double) members / bars, 3);
+        }
+        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
+        JointTotal joints = new JointTotal(kit.joints().size(), kit.joints().stream().mapToInt(Joint::quantity).sum(),
+                round(jointsMass, 3));
+        Double barsMassKg = massKnown ? round(barsMass, 3) : null;
+        Double kitMassKg = massKnown ? round(barsMass + jointsMass, 3) : null;
+        return new KitSummary(kit.name(), kit.settings().description(), kit.bars().size(), bars, members,
+                reuseRatio, sections(kit), markList, structures(kit), joints, barsMassKg, round(jointsMass, 3),
+                kitMassKg, spares);
+    }
+
+    private static List<SectionTotal> sections(Kit kit) {
+        List<SectionTotal> totals = new ArrayList<>();
+        for (String name : kit.usedSections()) {
+            Section section = kit.catalog().section(name).orElseThrow();
+            List<Bar> bars = kit.bars().stream().filter(b -> b.section().equals(name)).toList();
+            double length = bars.stream().mapToDouble(b -> b.lengthMm() * b.quantity()).sum();
+            Double mass = kit.material(section)
+                    .map(m -> round(section.massPerMetreKg(m.densityKgM3()) * length / 1000.0, 3)).orElse(null);
+            totals.add(new SectionTotal(name, section.material(), bars.size(),
+                    bars.stream().mapToInt(Bar::quantity).sum(), round(length, 1), mass));
+        }
+        return totals;
+    }
+
+    private static List<StructureMembers> structures(Kit kit) {
+        Map<String, Integer> members = new LinkedHashMap<>();
+        for (StructureCount count : kit.structures()) {
+            members.merge(count.structure(), count.count(), Integer::sum);
+        }
+        return members.entrySet().stream().map(e -> new StructureMembers(e.getKey(), e.getValue())).toList();
+    }
+
+    /** Rounds half up to the given decimals, so that summaries read the same on every machine. */
+    static double round(double value, int decimals) {
+        return BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP).doubleValue();
+    }
+}
