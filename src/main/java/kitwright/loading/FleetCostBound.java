@@ -12,8 +12,8 @@ import java.util.Set;
 import kitwright.model.VehicleType;
 
 /**
- * The fleet-cost lower bound: the linear relaxation over vehicle types of "enough payload, floor area and load
- * volume" (DOMAIN.md section 4; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
+ * The fleet-cost lower bound of the issue: the linear relaxation over vehicle types of "enough payload, floor area
+ * and load volume" (DOMAIN.md section 4; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
  * <pre>
  *   minimise  sum_v cost_v y_v
  *   subject to, for every set F of vehicle types that is the set some crate fits (and F = all types):
@@ -25,6 +25,7 @@ import kitwright.model.VehicleType;
  * A crate "must stand at the top" when it is not stackable, or no other crate fits on it by size, top load or
  * height; each such crate tops its own stack, whose base covers at least its footprint. Every load plan gives a
  * feasible y (its vehicle counts), so the LP value bounds the trip cost from below. Areas and volumes in m2, m3.
+ * {@link WholeVehicleBound} tightens it.
  */
 final class FleetCostBound {
     private static final double EPS = 1e-9;
@@ -32,7 +33,7 @@ final class FleetCostBound {
     private FleetCostBound() {
     }
 
-    /** The LP value; 0 when there is nothing to load. */
+    /** The LP value; 0 when there is nothing to load or GLOP stops without an optimum. */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost) {
         Loader.loadNativeLibraries();
         boolean[][] fit = new boolean[classes.size()][vehicles.size()];
@@ -75,7 +76,7 @@ final class FleetCostBound {
                     if (inside) {
                         mass += c.demand() * c.massKg();
                         volume += c.demand() * c.volume() / 1e9;
-                        if (alwaysTop(c, classes, maxDeckHeight)) {
+                        if (StackingRules.alwaysTop(c, classes, maxDeckHeight)) {
                             area += c.demand() * c.footprint() / 1e6;
                         }
                     }
@@ -95,20 +96,5 @@ final class FleetCostBound {
         } finally {
             solver.delete();
         }
-    }
-
-    /** No crate can stand on c (by its stackability, top load, size or the deck height). */
-    static boolean alwaysTop(CrateClass c, List<CrateClass> classes, double maxDeckHeight) {
-        if (!c.stackable()) {
-            return true;
-        }
-        for (CrateClass o : classes) {
-            boolean another = o.index() != c.index() || c.demand() > 1;
-            if (another && o.lengthMm() <= c.lengthMm() + EPS && o.widthMm() <= c.widthMm() + EPS
-                    && o.massKg() <= c.maxTopLoadKg() + EPS && c.heightMm() + o.heightMm() <= maxDeckHeight + EPS) {
-                return false;
-            }
-        }
-        return true;
     }
 }

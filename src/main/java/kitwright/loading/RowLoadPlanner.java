@@ -20,7 +20,8 @@ import kitwright.packing.PatternCover;
  * size, mass and stacking limits are interchangeable. Places a chosen load has beyond the demand are left empty
  * from the tops of stacks; each load then moves to the cheapest vehicle type that still takes all of it.
  *
- * <p>Status: OPTIMAL when the trip cost meets the proven {@link FleetCostBound}, else FEASIBLE with the gap;
+ * <p>Status: OPTIMAL when the trip cost meets the proven bound (the larger of {@link FleetCostBound}, the issue's
+ * linear relaxation, and {@link WholeVehicleBound}), else FEASIBLE with the gap;
  * INFEASIBLE when a crate fits no vehicle type (the reason names it). Crates of types missing from the crate
  * catalog are treated as not stackable. Loads start at the front of the deck; the centre of gravity is reported,
  * not balanced, and axle loads and load securing (EN 12195-1) are not checked.
@@ -100,11 +101,13 @@ public final class RowLoadPlanner implements LoadPlanner {
         List<VehicleLoad> loads = realise(decks, vehicles, classes, members);
         double tripCost = VehicleChoice.total(decks, cost);
         double relaxation = FleetCostBound.compute(classes, vehicles, cost);
+        double whole = WholeVehicleBound.compute(classes, vehicles, cost);
+        whole = Double.isNaN(whole) ? relaxation : Math.max(relaxation, whole);
         double cheapest = Arrays.stream(cost).min().orElse(0);
-        double bound = Math.max(relaxation, cheapest);
+        double bound = Math.max(whole, cheapest);
         double gap = tripCost <= 0 ? 0 : Math.max(0, (tripCost - bound) / tripCost);
         Status status = tripCost <= bound + 1e-6 * Math.max(1, tripCost) ? Status.OPTIMAL : Status.FEASIBLE;
-        return new LoadPlan(status, bound, loads, tripCost, new LoadBounds(relaxation, bound, gap), null);
+        return new LoadPlan(status, bound, loads, tripCost, new LoadBounds(relaxation, whole, bound, gap), null);
     }
 
     /** Leaves empty, from the tops of stacks, the places beyond each class's demand; null when it cannot. */

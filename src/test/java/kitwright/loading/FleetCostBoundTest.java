@@ -57,7 +57,7 @@ class FleetCostBoundTest {
     void fitSets() {
         // 6 crates 12.5 x 1.2 x 1 m of 500 kg fit only the 13.6 m semi-trailer; not stackable: floor 90 m2
         List<CrateClass> classes = List.of(new CrateClass(0, 12_500, 1200, 1000, 500, false, 0, 6));
-        double lp = FleetCostBound.compute(classes, FLEET, COST);
-        assertThat(lp).isCloseTo(6 * 12.5 * 1.2 / 33.728 * 1000, within(1e-6));
+        assertThat(FleetCostBound.compute(classes, FLEET, COST)).isCloseTo(6 * 12.5 * 1.2 / 33.728 * 1000,
+                within(1e-6));
     }
 }
