@@ -1,0 +1,85 @@
+package kitwright.report;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import kitwright.cutting.SectionCutPlan;
+import kitwright.model.Kit;
+import kitwright.model.KitSettings;
+import kitwright.model.Material;
+
+/**
+ * The inputs the plan was made from, so a reader can repeat it: kit settings (kerf, trim, minimum remnant, time
+ * limit), the files read, the materials with their sources, the saw settings each section was planned with, and
+ * the marks of the kit.
+ */
+final class InputsSection {
+    static final String ID = "inputs";
+
+    record Setting(String name, String value) {
+    }
+
+    record SectionSetting(String section, String kerf, String trim, String minRemnant, String objective) {
+    }
+
+    record MaterialRow(String name, String density, String source) {
+    }
+
+    record MarkRow(String mark, String section, String length, String nodeToNode, String tolerance,
+                   String quantity, String needed, String note) {
+    }
+
+    record View(List<Setting> settings, List<SectionSetting> sections, boolean hasSections,
+                List<MaterialRow> materials, boolean hasMaterials, List<MarkRow> marks) {
+    }
+
+    private InputsSection() {
+    }
+
+    static ReportSection of(Kit kit, List<SectionCutPlan> plans) {
+        KitSettings s = kit.settings();
+        List<Setting> settings = new ArrayList<>();
+        settings.add(new Setting("Kit", kit.name()));
+        if (kit.dir() != null && kit.dir().getFileName() != null) {
+            settings.add(new Setting("Kit folder", kit.dir().getFileName().toString()));
+        }
+        settings.add(new Setting("Tube catalog", file(kit.dir(), kit.catalog().file())));
+        settings.add(new Setting("Kerf", ShopFormat.mmUnit(s.kerfMm())));
+        settings.add(new Setting("End trim", ShopFormat.mmUnit(s.trimMm()) + " each end, including its own cut"));
+        settings.add(new Setting("Minimum remnant", ShopFormat.mmUnit(s.minRemnantMm())
+                + " (shorter offcuts are scrap)"));
+        settings.add(new Setting("Time limit", ShopFormat.seconds(s.timeLimitSeconds())
+                + "\u00A0s per section and stage (a safety net)"));
+        List<SectionSetting> sections = plans.stream().map(p -> new SectionSetting(p.section(),
+                ShopFormat.mmUnit(p.kerfMm()), ShopFormat.mmUnit(p.trimMm()), ShopFormat.mmUnit(p.minRemnantMm()),
+                "length".equals(p.objective()) ? "least stock length (no prices)" : "least cost")).toList();
+        List<MaterialRow> materials = kit.materials().values().stream()
+                .sorted(java.util.Comparator.comparing(Material::name))
+                .map(m -> new MaterialRow(m.name(), ShopFormat.count(Math.round(m.densityKgM3())) + "\u00A0kg/m\u00B3",
+                        m.source())).toList();
+        List<MarkRow> marks = kit.bars().stream().map(b -> new MarkRow(b.mark(), b.section(),
+                ShopFormat.mm(b.lengthMm()), b.nodeToNodeMm() == null ? "" : ShopFormat.mm(b.nodeToNodeMm()),
+                b.toleranceMm() == null ? "" : "\u00B1\u2009" + ShopFormat.mm(b.toleranceMm()),
+                ShopFormat.count(b.quantity()), ShopFormat.count(b.requiredQuantity()), b.note())).toList();
+        return new ReportSection(ID, "Inputs used", "inputs", new View(List.copyOf(settings), sections,
+                !sections.isEmpty(), materials, !materials.isEmpty(), marks));
+    }
+
+    /** A file as the reader should see it: relative to the kit folder when it lies below it, else its name. */
+    static String file(Path kitDir, Path file) {
+        if (file == null) {
+            return ShopFormat.UNKNOWN;
+        }
+        Path shown = file;
+        if (kitDir != null && file.isAbsolute() == kitDir.isAbsolute()) {
+            try {
+                shown = kitDir.normalize().relativize(file.normalize());
+            } catch (IllegalArgumentException differentRoots) {
+                shown = file.getFileName();
+            }
+        } else if (file.isAbsolute()) {
+            shown = file.getFileName();
+        }
+        return shown.toString().replace('\\', '/');
+    }
+}

@@ -1,0 +1,134 @@
+package kitwright.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.fail;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.imageio.ImageIO;
+import kitwright.cutting.CutPlan;
+import kitwright.model.Bar;
+import kitwright.model.Kit;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Renders the report of a sample-like kit in headless Chromium: the screenshot is not blank, and in the DOM the
+ * browser built every distinct pattern has its drawing and the legends list every mark. Skipped with a message
+ * where Chromium is not installed, unless the environment variable CI is "true": then it fails.
+ */
+class ReportBrowserTest {
+
+    private static HeadlessChromium chromiumOrSkip(Path dir) {
+        Optional<HeadlessChromium> chromium = HeadlessChromium.find(dir);
+        if (chromium.isEmpty()) {
+            String message = "chromium is not installed (apt-get install chromium); the browser test needs it";
+            if ("true".equals(System.getenv("CI"))) {
+                fail(message + " and CI=true");
+            }
+            Assumptions.abort(message + "; skipped outside CI");
+        }
+        return chromium.get();
+    }
+
+    private static String unescape(String attribute) {
+        return attribute.replace("&quot;", "\"").replace("&#39;", "'").replace("&lt;", "<").replace("&gt;", ">")
+                .replace("&amp;", "&");
+    }
+
+    private static List<String> attributes(String dom, String regex) {
+        Matcher m = Pattern.compile(regex).matcher(dom);
+        List<String> found = new java.util.ArrayList<>();
+        while (m.find()) {
+            found.add(unescape(m.group(1)));
+        }
+        return found;
+    }
+
+    @Test
+    @DisplayName("report.html renders in headless Chromium: not blank, every pattern drawn, every mark in a legend")
+    void rendersInHeadlessChromium(@TempDir Path dir) throws Exception {
+        HeadlessChromium chromium = chromiumOrSkip(dir);
+        Kit kit = ReportFixtures.sampleKit();
+        CutPlan plan = ReportFixtures.samplePlan(kit);
+        Path page = ReportWriter.writeInto(ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14)), dir);
+
+        Path png = dir.resolve("report.png");
+        chromium.screenshot(page, png, 1280, 2000);
+        BufferedImage image = ImageIO.read(png.toFile());
+        assertThat(image.getWidth()).isEqualTo(1280);
+        long inked = 0;
+        long firstMarkColour = 0;
+        Set<Integer> colours = new HashSet<>();
+        int markRgb = Integer.parseInt(MarkPalette.colour(0).substring(1), 16);
+        for (int y = 0; y < image.getHeight(); y++) {
+            for (int x = 0; x < image.getWidth(); x++) {
+                int rgb = image.getRGB(x, y) & 0xFFFFFF;
+                colours.add(rgb);
+                int r = rgb >> 16 & 0xFF;
+                int g = rgb >> 8 & 0xFF;
+                int b = rgb & 0xFF;
+                if (r < 235 || g < 235 || b < 235) {
+                    inked++;
+                }
+                if (rgb == markRgb) {
+                    firstMarkColour++;
+                }
+            }
+        }
+        double share = inked / (double) (image.getWidth() * image.getHeight());
+        assertThat(share).as("share of non-white pixels").isBetween(0.03, 0.6);
+        assertThat(colours.size()).as("distinct colours").isGreaterThan(40);
+        assertThat(firstMarkColour).as("pixels of the first mark's colour (a drawn piece)").isGreaterThan(500);
+
+        String dom = chromium.dumpDom(page);
+        assertThat(dom).contains("<h1>Touring cinema kit (test data)</h1>");
+        List<String> expected = new java.util.ArrayList<>();
+        for (int s = 0; s < plan.sections().size(); s++) {
+            int patterns = SawSheetSection.distinct(plan.sections().get(s).patterns()).size();
+            for (int p = 1; p <= patterns; p++) {
+                expected.add("s" + (s + 1) + "-p" + p);
+            }
+        }
+        assertThat(attributes(dom, "<figure [^>]*data-pattern=\"([^\"]+)\""))
+                .containsExactlyElementsOf(expected);
+        assertThat(attributes(dom, "<svg [^>]*data-pattern=\"([^\"]+)\"")).containsExactlyElementsOf(expected);
+        assertThat(attributes(dom, "<tr class=\"legend-mark\" data-mark=\"([^\"]*)\""))
+                .containsExactlyInAnyOrderElementsOf(kit.bars().stream().map(Bar::mark).toList());
+        assertThat(attributes(dom, "<td class=\"mark\">([^<]*)</td>")).contains(ReportFixtures.HOSTILE);
+    }
+
+    @Test
+    @DisplayName("printed, report.html gives A4 pages with each section's saw sheets on a page of their own")
+    void printsOnA4WithEverySectionsSawSheetsOnANewPage(@TempDir Path dir) throws Exception {
+        HeadlessChromium chromium = chromiumOrSkip(dir);
+        Kit kit = ReportFixtures.sampleKit();
+        // one short pattern per section: without the page breaks all of it would fit on three pages or so
+        CutPlan plan = new CutPlan(ReportFixtures.samplePlan(kit).sections().stream()
+                .map(s -> new kitwright.cutting.SectionCutPlan(s.section(), s.kerfMm(), s.trimMm(),
+                        s.minRemnantMm(), s.objective(), s.status(), s.reason(), s.value(), s.lowerBound(), s.gap(),
+                        s.patterns().get(0).count(), List.of(s.patterns().get(0)), s.spares()))
+                .toList());
+        Path page = ReportWriter.writeInto(ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14)), dir);
+        Path pdf = dir.resolve("report.pdf");
+        chromium.printToPdf(page, pdf);
+        String raw = new String(java.nio.file.Files.readAllBytes(pdf), java.nio.charset.StandardCharsets.ISO_8859_1);
+        long pages = Pattern.compile("/Type\\s*/Page\\b").matcher(raw).results().count();
+        // summary and purchase order, then at least one page per section's saw sheets, cautions, inputs
+        assertThat(pages).isGreaterThanOrEqualTo(1 + plan.sections().size() + 2);
+        // A4 is 210 x 297 mm = 595.3 x 841.9 pt (ISO 216)
+        Matcher box = Pattern.compile("/MediaBox\\s*\\[\\s*0\\s+0\\s+([0-9.]+)\\s+([0-9.]+)").matcher(raw);
+        assertThat(box.find()).isTrue();
+        assertThat(Double.parseDouble(box.group(1))).isCloseTo(595.3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(Double.parseDouble(box.group(2))).isCloseTo(841.9, org.assertj.core.data.Offset.offset(1.0));
+    }
+}
