@@ -5,7 +5,8 @@ import java.util.List;
 /**
  * Joint boxes in a grid filling a rectangular region of a crate, in the orientation (any of the six) that holds
  * the most boxes; upright orientations are tried first so that ties keep boxes the right way up. Cells are filled
- * layer by layer from the bottom, each with the first box type still available whose mass fits the crate.
+ * layer by layer from the bottom, each with the first box type still available whose mass fits the crate. All box
+ * types share one size (the kit's joint box); they differ in mass only.
  */
 final class BoxGrid {
     private static final double EPS = 1e-6;
@@ -13,23 +14,35 @@ final class BoxGrid {
     private BoxGrid() {
     }
 
+    /** Most boxes of this size a region holds in one orientation. */
+    static long capacity(double lx, double wy, double hz, ItemType box) {
+        long best = 0;
+        for (double[] o : orientations(box)) {
+            best = Math.max(best, (long) RowPattern.floor(lx / o[0]) * RowPattern.floor(wy / o[1])
+                    * RowPattern.floor(hz / o[2]));
+        }
+        return best;
+    }
+
+    private static double[][] orientations(ItemType b) {
+        return new double[][] {
+            {b.lengthMm(), b.widthMm(), b.heightMm()},
+            {b.widthMm(), b.lengthMm(), b.heightMm()},
+            {b.lengthMm(), b.heightMm(), b.widthMm()},
+            {b.heightMm(), b.lengthMm(), b.widthMm()},
+            {b.widthMm(), b.heightMm(), b.lengthMm()},
+            {b.heightMm(), b.widthMm(), b.lengthMm()},
+        };
+    }
+
     static void fill(double x0, double y0, double z0, double lx, double wy, double hz, List<ItemType> boxes,
                      int[] left, double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
         if (lx <= EPS || wy <= EPS || hz <= EPS) {
             return;
         }
-        ItemType first = boxes.get(0);
-        double[][] orientations = {
-            {first.lengthMm(), first.widthMm(), first.heightMm()},
-            {first.widthMm(), first.lengthMm(), first.heightMm()},
-            {first.lengthMm(), first.heightMm(), first.widthMm()},
-            {first.heightMm(), first.lengthMm(), first.widthMm()},
-            {first.widthMm(), first.heightMm(), first.lengthMm()},
-            {first.heightMm(), first.widthMm(), first.lengthMm()},
-        };
         double[] best = null;
         long bestCount = 0;
-        for (double[] o : orientations) {
+        for (double[] o : orientations(boxes.get(0))) {
             long n = (long) RowPattern.floor(lx / o[0]) * RowPattern.floor(wy / o[1]) * RowPattern.floor(hz / o[2]);
             if (n > bestCount) {
                 bestCount = n;

@@ -19,7 +19,8 @@ import kitwright.model.CrateType;
  *   join it, thinner ones start a group on top or take a free cell left in a row below. A lane that would pass
  *   the crate's net capacity (max gross - tare) is cut short.</li>
  *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
- *   box orientation that holds most.</li>
+ *   box orientation that holds most. When both bundles and boxes are on offer, a second layout puts the boxes
+ *   first, in as few full tiers on the floor as hold them, with the lanes above; the caller chooses.</li>
  * </ol>
  * Guarantee: every item lies inside the inner walls, circles of bundles that share a stretch of length do not
  * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, and the contents' mass is within
@@ -31,8 +32,28 @@ final class CrateFiller {
     static final double MERGE = 0.9;
     private static final double EPS = 1e-6;
 
-    /** The layout of one crate of {@code crate} (catalog index {@code crateIndex}) from {@code available}. */
+    /**
+     * The layouts of one crate of {@code crate} (catalog index {@code crateIndex}) from {@code available}: lanes
+     * first with boxes in the space left; and, when both bundles and boxes are on offer, the boxes' floor tiers
+     * first with lanes above. The caller keeps the one that suits it.
+     */
+    List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
+        CrateLayout lanesFirst = build(crateIndex, crate, types, available, false);
+        boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
+        boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
+        if (!boxes || !bundles) {
+            return List.of(lanesFirst);
+        }
+        return List.of(lanesFirst, build(crateIndex, crate, types, available, true));
+    }
+
+    /** The lanes-first layout (see {@link #fills}). */
     CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
+        return build(crateIndex, crate, types, available, false);
+    }
+
+    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available,
+                              boolean boxesFirst) {
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
@@ -40,10 +61,35 @@ final class CrateFiller {
         int[] counts = new int[types.size()];
         List<CrateLayout.Slot> slots = new ArrayList<>();
         double[] mass = {0};
-        List<LaneBuilder.Lane> lanes = new LaneBuilder().build(offeredBundles(crate, types, available, net), length);
-        double[] used = placeLanes(lanes, width, height, net, mass, counts, slots);
-        placeBoxes(crate, types, available, net, used[0], used[1], mass, counts, slots);
+        int[] left = available.clone();
+        double floor = boxesFirst ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
+        List<LaneBuilder.Lane> lanes = new LaneBuilder().build(offeredBundles(crate, types, left, net - mass[0]),
+                length);
+        double[] used = placeLanes(lanes, width, floor, height, net, mass, counts, slots);
+        placeBoxes(crate, types, left, net, floor, used[0], used[1], mass, counts, slots);
         return new CrateLayout(crateIndex, counts, slots, mass[0]);
+    }
+
+    /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
+    private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
+                                     int[] counts, List<CrateLayout.Slot> slots) {
+        List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
+        ItemType box = boxes.get(0);
+        double tier = Math.min(box.lengthMm(), Math.min(box.widthMm(), box.heightMm()));
+        int tiers = 1;
+        while ((tiers + 1) * tier <= crate.innerHeightMm() + EPS
+                && BoxGrid.capacity(crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, box) < wanted) {
+            tiers++;
+        }
+        int before = slots.size();
+        BoxGrid.fill(0, 0, 0, crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, boxes, left, net, mass,
+                counts, slots);
+        double top = 0;
+        for (int k = before; k < slots.size(); k++) {
+            top = Math.max(top, slots.get(k).z() + slots.get(k).height());
+        }
+        return top;
     }
 
     /** Bundles offered to this crate, largest diameter and longest first, bounded by cells, length and mass. */
@@ -82,9 +128,9 @@ final class CrateFiller {
     /**
      * Places lanes into row groups; returns {end of the longest lane, top of the rows}.
      */
-    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double height, double net,
-                                       double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
-        double base = 0;
+    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double floor, double height,
+                                       double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
+        double base = floor;
         Group current = null;
         List<Cell> free = new ArrayList<>();
         double endX = 0;
@@ -145,19 +191,19 @@ final class CrateFiller {
         return best < 0 ? null : free.remove(best);
     }
 
-    private static void placeBoxes(CrateType crate, List<ItemType> types, int[] available, double net, double endX,
-                                   double top, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
+    private static void placeBoxes(CrateType crate, List<ItemType> types, int[] left, double net, double floor,
+                                   double endX, double top, double[] mass, int[] counts,
+                                   List<CrateLayout.Slot> slots) {
         List<ItemType> boxes = types.stream()
-                .filter(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0).toList();
+                .filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
         if (boxes.isEmpty()) {
             return;
         }
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
-        int[] left = available.clone();
-        // the end of the crate behind the longest lane, full width and height
-        BoxGrid.fill(endX, 0, 0, length - endX, width, height, boxes, left, net, mass, counts, slots);
+        // the end of the crate behind the longest lane, full width, from the floor tiers up
+        BoxGrid.fill(endX, 0, floor, length - endX, width, height - floor, boxes, left, net, mass, counts, slots);
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
             BoxGrid.fill(0, 0, top, endX, width, height - top, boxes, left, net, mass, counts, slots);

@@ -173,9 +173,12 @@ public final class LaneCratePacker implements CratePacker {
                 if (cost[t] >= cost[l.crateType()] - EPS) {
                     break;
                 }
-                CrateLayout moved = filler.fill(t, crates.get(t), types, l.counts());
-                if (java.util.Arrays.equals(moved.counts(), l.counts())) {
-                    kept = moved;
+                for (CrateLayout moved : filler.fills(t, crates.get(t), types, l.counts())) {
+                    if (kept == l && java.util.Arrays.equals(moved.counts(), l.counts())) {
+                        kept = moved;
+                    }
+                }
+                if (kept != l) {
                     break;
                 }
             }
