@@ -45,17 +45,21 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "pack", mixinStandardHelpOptions = true,
         description = {
-            "Packs a kit for shipping: joints into joint boxes, bundles and boxes into crates from the crate",
-            "catalog (least total crate price, then fewest crates), crates onto vehicles from the vehicle",
-            "catalog (least total trip cost). Prints each count beside its lower bound and the status.",
+            "Packs a kit for shipping: joints into joint boxes, bundles and boxes into",
+            "crates from the crate catalog (least total crate price, then fewest",
+            "crates), crates onto vehicles from the vehicle catalog (least total trip",
+            "cost). Prints each count beside its lower bound and the status.",
             "",
-            "With --out DIR: packing-lists.csv (per crate: type, marks and counts, bundles, boxes, gross mass),",
-            "manifests.csv (per vehicle: crates, mass, floor length used, centre of gravity from the front) and",
-            "drawings/ (crate cross-sections and deck plans, SVG, to scale). The folder is written beside DIR",
-            "and moved into place when complete. With --json FILE: {\"crates\": ..., \"loads\": ...}.",
+            "With --out DIR: packing-lists.csv (per crate: type, marks and counts,",
+            "bundles, boxes, gross mass), manifests.csv (per vehicle: crates, mass,",
+            "floor length used, centre of gravity from the front) and drawings/",
+            "(crate cross-sections and deck plans, SVG, to scale). The folder is",
+            "written beside DIR and moved into place when complete.",
+            "With --json FILE: {\"crates\": ..., \"loads\": ...} as in plan.json.",
             "",
-            "Lifting and load securing are not checked (EN 12195-1; local rules decide).",
-            "Exit codes: 0 ok, 2 invalid input, 3 when an item fits no crate or a crate no vehicle."
+            "Lifting and load securing are not checked (EN 12195-1; local rules",
+            "decide). Exit codes: 0 ok, 2 invalid input, 3 when an item fits no",
+            "crate or a crate no vehicle."
         })
 public final class PackCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
