@@ -113,7 +113,8 @@ public final class DeckPlanDrawing {
         if (label.length() * font * 0.56 > w - 4) {
             font = Math.max(6, (w - 4) / (label.length() * 0.56));
         }
-        svg.text(x + w / 2, y + h / 2 + font * 0.35, label, "text-anchor", "middle", "font-size", font, "fill", INK);
+        svg.text(x + w / 2, y + h / 2 + font * 0.35, label, "text-anchor", "middle", "font-size", font, "fill", INK,
+                "paint-order", "stroke", "stroke", "#ffffff", "stroke-width", 3, "stroke-linejoin", "round");
         svg.close("g");
     }
 
