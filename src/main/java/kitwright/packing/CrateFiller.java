@@ -131,8 +131,8 @@ final class CrateFiller {
     private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double floor, double height,
                                        double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
         double base = floor;
-        Group current = null;
-        List<Cell> free = new ArrayList<>();
+        RowGroup current = null;
+        List<RowGroup.Cell> free = new ArrayList<>();
         double endX = 0;
         for (int k = 0; k < lanes.size(); k++) {
             LaneBuilder.Lane lane = lanes.get(k);
@@ -140,7 +140,7 @@ final class CrateFiller {
             if (mass[0] + lane.lightestKg() > net + EPS) {
                 continue;
             }
-            Cell cell = null;
+            RowGroup.Cell cell = null;
             if (current != null && current.hasRoomInOpenRow()) {
                 cell = current.next();
             } else if (current != null && d >= MERGE * current.d - EPS && current.canOpenRow()) {
@@ -154,7 +154,7 @@ final class CrateFiller {
                         current = null;
                     }
                     if (height - base + EPS >= d) {
-                        current = Group.open(lanes, k, width, height - base, base);
+                        current = RowGroup.open(lanes, k, width, height - base, base);
                         cell = current.next();
                     }
                 }
@@ -181,7 +181,7 @@ final class CrateFiller {
     }
 
     /** The free cell with the smallest diameter that takes a lane of cell d, removed from the list. */
-    private static Cell takeFree(List<Cell> free, double d) {
+    private static RowGroup.Cell takeFree(List<RowGroup.Cell> free, double d) {
         int best = -1;
         for (int i = 0; i < free.size(); i++) {
             if (free.get(i).d + EPS >= d && (best < 0 || free.get(i).d < free.get(best).d)) {
@@ -207,102 +207,6 @@ final class CrateFiller {
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
             BoxGrid.fill(0, 0, top, endX, width, height - top, boxes, left, net, mass, counts, slots);
-        }
-    }
-
-    /** A cell for one lane: its diameter and centre in the cross-section. */
-    record Cell(double d, double y, double z) {
-    }
-
-    /** Rows of one cell diameter and one row pattern, from {@code base} up. */
-    private static final class Group {
-        final RowPattern pattern;
-        final double d;
-        final double base;
-        final double width;
-        final int maxRows;
-        int row;
-        int inRow;
-
-        private Group(RowPattern pattern, double d, double base, double width, int maxRows) {
-            this.pattern = pattern;
-            this.d = d;
-            this.base = base;
-            this.width = width;
-            this.maxRows = maxRows;
-        }
-
-        /** A group for lanes.get(from) and the lanes after it close enough in size, in the better pattern. */
-        static Group open(List<LaneBuilder.Lane> lanes, int from, double width, double room, double base) {
-            double d = lanes.get(from).cellMm();
-            int n = 0;
-            for (int k = from; k < lanes.size() && lanes.get(k).cellMm() >= MERGE * d - EPS; k++) {
-                n++;
-            }
-            RowPattern best = null;
-            double bestHeight = Double.MAX_VALUE;
-            int bestCapacity = -1;
-            boolean bestHoldsAll = false;
-            for (RowPattern p : RowPattern.values()) {
-                int rows = p.rows(room, d);
-                int capacity = p.count(rows, width, d);
-                int need = p.rowsFor(n, width, d);
-                boolean holdsAll = need >= 0 && need <= rows;
-                double h = holdsAll ? p.height(need, d) : p.height(rows, d);
-                boolean better = best == null
-                        || (holdsAll && (!bestHoldsAll || h < bestHeight - EPS))
-                        || (!holdsAll && !bestHoldsAll && capacity > bestCapacity);
-                if (better) {
-                    best = p;
-                    bestHeight = h;
-                    bestCapacity = capacity;
-                    bestHoldsAll = holdsAll;
-                }
-            }
-            return new Group(best, d, base, width, best.rows(room, d));
-        }
-
-        boolean hasRoomInOpenRow() {
-            return inRow > 0 && inRow < pattern.perRow(row, width, d);
-        }
-
-        boolean canOpenRow() {
-            int r = inRow == 0 ? row : row + 1;
-            while (r < maxRows && pattern.perRow(r, width, d) == 0) {
-                r++;
-            }
-            return r < maxRows;
-        }
-
-        Cell next() {
-            if (inRow > 0 && inRow >= pattern.perRow(row, width, d)) {
-                row++;
-                inRow = 0;
-            }
-            while (row < maxRows && pattern.perRow(row, width, d) == 0) {
-                row++;
-            }
-            if (row >= maxRows) {
-                return null;
-            }
-            Cell c = new Cell(d, pattern.centreY(row, inRow, d), base + pattern.centreZ(row, d));
-            inRow++;
-            return c;
-        }
-
-        double heightUsed() {
-            int rows = inRow == 0 ? row : row + 1;
-            return pattern.height(rows, d);
-        }
-
-        List<Cell> unusedInOpenRows() {
-            List<Cell> cells = new ArrayList<>();
-            if (inRow > 0) {
-                for (int j = inRow; j < pattern.perRow(row, width, d); j++) {
-                    cells.add(new Cell(d, pattern.centreY(row, j, d), base + pattern.centreZ(row, d)));
-                }
-            }
-            return cells;
         }
     }
 }
