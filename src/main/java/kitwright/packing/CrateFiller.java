@@ -170,7 +170,7 @@ final class CrateFiller {
                 mass[0] += t.massKg();
                 counts[t.index()]++;
                 double r = t.diameterMm() / 2;
-                slots.add(new CrateLayout.Slot(t.index(), x, cell.y - r, cell.z - r, t.lengthMm(),
+                slots.add(new CrateLayout.Slot(t.index(), x, cell.y() - r, cell.z() - r, t.lengthMm(),
                         t.diameterMm(), t.diameterMm()));
                 x += t.lengthMm();
             }
@@ -184,7 +184,7 @@ final class CrateFiller {
     private static RowGroup.Cell takeFree(List<RowGroup.Cell> free, double d) {
         int best = -1;
         for (int i = 0; i < free.size(); i++) {
-            if (free.get(i).d + EPS >= d && (best < 0 || free.get(i).d < free.get(best).d)) {
+            if (free.get(i).d() + EPS >= d && (best < 0 || free.get(i).d() < free.get(best).d())) {
                 best = i;
             }
         }
