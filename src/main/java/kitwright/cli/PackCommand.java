@@ -17,7 +17,7 @@ import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
 import kitwright.io.Problem;
 import kitwright.loading.LoadPlan;
-import kitwright.loading.RowLoadPlanner;
+import kitwright.loading.Shipping;
 import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.Status;
@@ -25,7 +25,6 @@ import kitwright.nesting.Bundle;
 import kitwright.nesting.NestPlan;
 import kitwright.packing.Crate;
 import kitwright.packing.CratePlan;
-import kitwright.packing.LaneCratePacker;
 import kitwright.packing.StructureShare;
 import kitwright.report.CrateSectionDrawing;
 import kitwright.report.DeckPlanDrawing;
@@ -124,29 +123,21 @@ public final class PackCommand implements Callable<Integer> {
         stderr.printf("pack: crating %d bundles and %d joints%n", bundles.size(),
                 joints.stream().mapToInt(Joint::quantity).sum());
         stderr.flush();
-        double limit = kit.settings().timeLimitSeconds();
-        CratePlan crates = new LaneCratePacker(new LaneCratePacker.Limits(
-                LaneCratePacker.Limits.DEFAULT.deterministicTime(), limit,
-                LaneCratePacker.Limits.DEFAULT.pricingRounds()))
-                .pack(bundles, joints, kit.crates(), kit.settings().jointBox());
-        long crated = System.nanoTime();
+        Shipping.Shipment shipment = Shipping.plan(kit, bundles, joints);
+        CratePlan crates = shipment.crates();
+        LoadPlan loads = shipment.loads();
         if (crates.status() == Status.INFEASIBLE) {
             stderr.println("pack: no crate plan: " + crates.reason());
             stderr.flush();
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        stderr.printf("pack: %d crates in %.2f s; loading%n", crates.crates().size(), (crated - start) / 1e9);
-        stderr.flush();
-        LoadPlan loads = new RowLoadPlanner(new RowLoadPlanner.Limits(
-                RowLoadPlanner.Limits.DEFAULT.deterministicTime(), limit,
-                RowLoadPlanner.Limits.DEFAULT.pricingRounds()))
-                .load(crates, kit.crates(), kit.vehicles());
         if (loads.status() == Status.INFEASIBLE) {
             stderr.println("pack: no load plan: " + loads.reason());
             stderr.flush();
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        stderr.printf("pack: %d trips in %.2f s%n", loads.vehicles().size(), (System.nanoTime() - crated) / 1e9);
+        stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
+                (System.nanoTime() - start) / 1e9);
         stderr.flush();
         if (out != null) {
             writeFolder(crates, loads, nest.bundles());
