@@ -10,11 +10,13 @@ package kitwright.packing;
  *                             inner volume): valid for every packing
  * @param massCrates           ceil(total mass / largest net capacity (max gross - tare))
  * @param crates               the proven count bound: max(cylinderVolumeCrates, massCrates), at least 1 with items
- * @param price                proven lower bound on the total crate price (linear relaxation over crate types
- *                             with volume and mass by length class), or null when the catalog has no prices
+ * @param priceRelaxation      the linear relaxation over crate types with volume and mass by length class, or
+ *                             null when the catalog has no prices
+ * @param price                proven lower bound on the total crate price: the relaxation, the same with whole
+ *                             crates, and the count bound times the cheapest price, whichever is largest; or null
  * @param gap                  (objective - bound) / objective on price when priced, else on the count
  */
-public record CrateBounds(int boxVolumeCrates, int cylinderVolumeCrates, int massCrates, int crates, Double price,
-                          double gap) {
-    public static final CrateBounds NONE = new CrateBounds(0, 0, 0, 0, null, 0);
+public record CrateBounds(int boxVolumeCrates, int cylinderVolumeCrates, int massCrates, int crates,
+                          Double priceRelaxation, Double price, double gap) {
+    public static final CrateBounds NONE = new CrateBounds(0, 0, 0, 0, null, null, 0);
 }

@@ -25,7 +25,8 @@ import kitwright.model.CrateType;
  *       sum_{t: L_t >= l_k} net_t y_t >= mass of the items longer than l_{k-1}
  *   y_t >= 0
  *   </pre>
- *   solved by GLOP, and at least (count bound) x (cheapest price).</li>
+ *   solved by GLOP; then the same with whole crates (y_t integer, SCIP through MPSolver, its proven bound), which
+ *   is tighter and still a relaxation; and at least (count bound) x (cheapest price).</li>
  * </ul>
  */
 final class CrateLowerBounds {
@@ -48,7 +49,7 @@ final class CrateLowerBounds {
             items += t.demand();
         }
         if (items == 0 || crates.isEmpty()) {
-            return new CrateBounds(0, 0, 0, 0, totalPrice == null ? null : 0.0, 0);
+            return new CrateBounds(0, 0, 0, 0, totalPrice == null ? null : 0.0, totalPrice == null ? null : 0.0, 0);
         }
         double largestVolume = crates.stream()
                 .mapToDouble(c -> c.innerLengthMm() * c.innerWidthMm() * c.innerHeightMm()).max().orElseThrow();
@@ -58,30 +59,38 @@ final class CrateLowerBounds {
         int byMass = largestNet > 0 ? ceil(mass / largestNet) : 0;
         int count = Math.max(1, Math.max(bySolid, byMass));
         Double price = null;
+        Double relaxation = null;
         double gap;
         if (totalPrice != null) {
             double cheapest = crates.stream().mapToDouble(CrateType::price).min().orElseThrow();
-            price = Math.max(count * cheapest, priceRelaxation(types, crates));
+            relaxation = priceRelaxation(types, crates, false);
+            double whole = priceRelaxation(types, crates, true);
+            price = Math.max(count * cheapest, Double.isNaN(whole) ? relaxation : Math.max(relaxation, whole));
             gap = totalPrice <= 0 ? 0 : Math.max(0, (totalPrice - price) / totalPrice);
         } else {
             gap = crateCount <= 0 ? 0 : Math.max(0, (crateCount - count) / (double) crateCount);
         }
-        return new CrateBounds(byBox, bySolid, byMass, count, price, gap);
+        return new CrateBounds(byBox, bySolid, byMass, count, relaxation, price, gap);
     }
 
     private static int ceil(double x) {
         return (int) Math.ceil(x - EPS);
     }
 
-    private static double priceRelaxation(List<ItemType> types, List<CrateType> crates) {
+    /** The model's optimum (its proven bound for whole crates); 0 or NaN when the solver proves nothing. */
+    private static double priceRelaxation(List<ItemType> types, List<CrateType> crates, boolean whole) {
         Loader.loadNativeLibraries();
         double[] lengths = crates.stream().mapToDouble(CrateType::innerLengthMm).distinct().sorted().toArray();
-        MPSolver solver = MPSolver.createSolver("GLOP");
+        MPSolver solver = MPSolver.createSolver(whole ? "SCIP" : "GLOP");
+        if (solver == null) {
+            return Double.NaN;
+        }
         try {
             MPVariable[] y = new MPVariable[crates.size()];
             MPObjective objective = solver.objective();
             for (int t = 0; t < crates.size(); t++) {
-                y[t] = solver.makeNumVar(0, Double.POSITIVE_INFINITY, "crates_" + t);
+                y[t] = whole ? solver.makeIntVar(0, Double.POSITIVE_INFINITY, "crates_" + t)
+                        : solver.makeNumVar(0, Double.POSITIVE_INFINITY, "crates_" + t);
                 objective.setCoefficient(y[t], crates.get(t).price());
             }
             objective.setMinimization();
@@ -108,7 +117,14 @@ final class CrateLowerBounds {
                 }
                 previous = lengths[k];
             }
+            if (whole) {
+                solver.setTimeLimit(5000);
+            }
             MPSolver.ResultStatus status = solver.solve();
+            if (whole) {
+                boolean solved = status == MPSolver.ResultStatus.OPTIMAL || status == MPSolver.ResultStatus.FEASIBLE;
+                return solved ? objective.bestBound() : Double.NaN;
+            }
             return status == MPSolver.ResultStatus.OPTIMAL ? objective.value() : 0;
         } finally {
             solver.delete();
