@@ -15,11 +15,11 @@ import picocli.CommandLine.Spec;
 /** {@code kitwright check KIT_DIR}: validate a kit folder and its catalogs, then summarise the kit. */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {
-            "Reads and validates a kit folder and its catalogs, then prints a summary: marks, bars, total cut",
-            "length and mass per section, joints, members per structure, the reuse ratio and the spares.",
+            "Reads and validates a kit folder and its catalogs, then prints a summary: marks, bars, total cut"
+                    + " length and mass per section, joints, members per structure, the reuse ratio and the spares.",
             "",
-            "Every problem is listed as FILE:LINE: COLUMN: what is wrong (what was expected); nothing is",
-            "written. Exit code 0 when the kit is valid, 2 when it has problems."
+            "Every problem is listed as FILE:LINE: COLUMN: what is wrong (what was expected); nothing is"
+                    + " written. Exit code 0 when the kit is valid, 2 when it has problems."
         })
 public final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",

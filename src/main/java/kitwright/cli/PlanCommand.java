@@ -23,11 +23,11 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = {
-            "Validates a kit and writes the plan folder: summary.json (marks, bars, cut length and mass per",
-            "section, joints, members per structure, reuse ratio, spares).",
+            "Validates a kit and writes the plan folder: summary.json (marks, bars, cut length and mass per"
+                    + " section, joints, members per structure, reuse ratio, spares).",
             "",
-            "The folder is written beside DIR and moved into place only when complete. An existing DIR is",
-            "replaced only when kitwright wrote it. On invalid input (exit code 2) nothing is written."
+            "The folder is written beside DIR and moved into place only when complete. An existing DIR is"
+                    + " replaced only when kitwright wrote it. On invalid input (exit code 2) nothing is written."
         })
 public final class PlanCommand implements Callable<Integer> {
     /** The file holding the kit summary in the plan folder. */
@@ -42,7 +42,7 @@ public final class PlanCommand implements Callable<Integer> {
             description = "Folder to write the plan into; created, or replaced when kitwright wrote it before.")
     Path out;
 
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD", converter = IsoDateConverter.class,
             description = "Date printed on the report (default: today). Fix it to get byte-identical output.")
     LocalDate date;
 

@@ -18,11 +18,12 @@ final class SummaryText {
         if (!s.description().isEmpty()) {
             sb.append(": ").append(s.description());
         }
-        sb.append("\n\n").append(s.marks()).append(" marks, ").append(s.bars()).append(" bars in the kit\n");
+        sb.append("\n\n").append(count(s.marks(), "mark")).append(", ").append(count(s.bars(), "bar"))
+                .append(" in the kit\n");
         if (s.members() != null) {
-            sb.append(s.structures().size()).append(" structures with ").append(s.members())
-                    .append(" members in all; reuse ratio ").append(fixed(s.reuseRatio(), 2))
-                    .append(" (members in all structures / bars in the kit)\n");
+            sb.append(count(s.structures().size(), "structure")).append(" with ")
+                    .append(count(s.members(), "member")).append(" in all; reuse ratio ")
+                    .append(fixed(s.reuseRatio(), 2)).append(" (members in all structures / bars in the kit)\n");
         } else {
             sb.append("No structures.csv: quantities as given, no reuse ratio\n");
         }
@@ -54,8 +55,9 @@ final class SummaryText {
         if (s.joints().types() == 0) {
             sb.append("Joints: none (no joints.csv)\n");
         } else {
-            sb.append("Joints: ").append(s.joints().types()).append(" types, ").append(s.joints().count())
-                    .append(" pieces, ").append(fixed(s.joints().massKg(), 1)).append(" kg\n");
+            sb.append("Joints: ").append(count(s.joints().types(), "type")).append(", ")
+                    .append(count(s.joints().count(), "piece")).append(", ")
+                    .append(fixed(s.joints().massKg(), 1)).append(" kg\n");
         }
         if (s.kitMassKg() == null) {
             sb.append("Kit mass: unknown (no materials file found, so no densities)\n");
@@ -68,6 +70,10 @@ final class SummaryText {
                 : s.spares().stream().map(c -> c.mark() + " " + c.count()).collect(Collectors.joining(", ")))
                 .append('\n');
         return sb.toString();
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     private static String fixed(Double value, int decimals) {

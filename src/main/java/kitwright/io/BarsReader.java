@@ -34,7 +34,7 @@ public final class BarsReader {
         if (table == null) {
             return bars;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no bars under the header (expected one row per mark)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

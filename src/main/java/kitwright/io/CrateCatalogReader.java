@@ -38,7 +38,7 @@ public final class CrateCatalogReader {
         if (table == null) {
             return crates;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no crates under the header (expected one row per crate type)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

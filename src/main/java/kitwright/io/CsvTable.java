@@ -18,6 +18,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
@@ -32,20 +34,30 @@ public final class CsvTable {
     private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder()
             .setIgnoreSurroundingSpaces(true).setTrim(true).setIgnoreEmptyLines(true).get();
 
+    private static final Pattern START_LINE = Pattern.compile("\\(startline (\\d+)\\)");
+
     private final Path file;
     private final List<CsvRow> rows;
+    private final int dataRows;
 
-    private CsvTable(Path file, List<CsvRow> rows) {
+    private CsvTable(Path file, List<CsvRow> rows, int dataRows) {
         this.file = file;
         this.rows = List.copyOf(rows);
+        this.dataRows = dataRows;
     }
 
     public Path file() {
         return file;
     }
 
+    /** The rows that have one value per column (others are reported and left out). */
     public List<CsvRow> rows() {
         return rows;
+    }
+
+    /** True when nothing but blank rows follows the header. */
+    public boolean isEmpty() {
+        return dataRows == 0;
     }
 
     /**
@@ -104,38 +116,49 @@ public final class CsvTable {
                 records.add(record);
             }
         } catch (IOException | UncheckedIOException e) {
-            // The broken record starts after the last good one (exact for one-line records).
-            int line = records.isEmpty() ? 1
-                    : lineOf(lineStarts, records.get(records.size() - 1).getCharacterPosition()) + 1;
-            problems.add(file, line, "", "the file is not valid CSV: " + firstLine(e.getMessage())
-                    + " (expected comma-separated values; close every opening quote)");
+            problems.add(file, brokenLine(e, records, text, lineStarts), "", "the file is not valid CSV: "
+                    + describe(e) + " (expected comma-separated values; close every opening quote)");
             return Optional.empty();
         }
         CSVRecord headerRecord = records.get(0);
-        int headerLine = lineOf(lineStarts, headerRecord.getCharacterPosition());
+        int headerLine = lineOf(lineStarts, start(text, headerRecord));
         Optional<List<String>> header = header(file, headerLine, headerRecord, columns, problems);
         if (header.isEmpty()) {
             return Optional.empty();
         }
         List<CsvRow> rows = new ArrayList<>();
+        int dataRows = 0;
         for (CSVRecord record : records.subList(1, records.size())) {
-            int line = lineOf(lineStarts, record.getCharacterPosition());
+            int line = lineOf(lineStarts, start(text, record));
             if (record.stream().allMatch(String::isBlank)) {
                 continue;
             }
-            if (record.size() != header.get().size()) {
+            dataRows++;
+            if (record.size() > header.get().size()) {
                 problems.add(file, line, "", "the row has " + record.size() + " values but the header has "
                         + header.get().size() + " columns (expected one value per column; quote a value that"
                         + " contains a comma)");
                 continue;
             }
+            // A short row reads its missing trailing values as blank, as hand-written files often leave them out.
             Map<String, String> values = new LinkedHashMap<>();
+            boolean unnamed = false;
             for (int i = 0; i < record.size(); i++) {
-                values.put(header.get().get(i), record.get(i).trim());
+                String name = header.get().get(i);
+                String value = record.get(i).trim();
+                if (name.isEmpty() && !value.isEmpty() && !unnamed) {
+                    unnamed = true;
+                    problems.add(file, line, "", "the value '" + value + "' stands in a column without a name"
+                            + " (expected a header name for every column that holds values)");
+                }
+                values.put(name, value);
+            }
+            if (unnamed) {
+                continue;
             }
             rows.add(new CsvRow(file, line, values, problems));
         }
-        return Optional.of(new CsvTable(file, rows));
+        return Optional.of(new CsvTable(file, rows, dataRows));
     }
 
     /** Checks the header: separator, duplicates, unknown (with the nearest known name) and missing columns. */
@@ -157,6 +180,9 @@ public final class CsvTable {
         Set<String> seen = new HashSet<>();
         Set<String> suggested = new HashSet<>();
         for (String name : names) {
+            if (name.isEmpty()) {
+                continue; // spreadsheets add unnamed empty columns; values under them are reported per row
+            }
             if (!seen.add(name)) {
                 problems.add(file, line, name, "the column appears twice (expected each column once)");
             } else if (!columns.knows(name)) {
@@ -164,7 +190,7 @@ public final class CsvTable {
                 Optional<String> near = NearestName.of(name, unused);
                 near.ifPresent(suggested::add);
                 String hint = near.map(n -> "did you mean " + n + "? ").orElse("");
-                problems.add(file, line, name.isEmpty() ? "(blank)" : name, "unknown column (" + hint
+                problems.add(file, line, name, "unknown column (" + hint
                         + "known columns: " + columns.describe() + ")");
             }
         }
@@ -175,6 +201,15 @@ public final class CsvTable {
             }
         }
         return problems.count() == before ? Optional.of(names) : Optional.empty();
+    }
+
+    /** Where a record's first value starts: the parser's position may point at the blank lines it skipped. */
+    private static long start(String text, CSVRecord record) {
+        int position = (int) record.getCharacterPosition();
+        while (position < text.length() && (text.charAt(position) == '\r' || text.charAt(position) == '\n')) {
+            position++;
+        }
+        return position;
     }
 
     private static int[] lineStarts(String text) {
@@ -201,7 +236,27 @@ public final class CsvTable {
         return low + 1;
     }
 
-    private static String firstLine(String message) {
-        return message == null ? "unreadable" : message.lines().findFirst().orElse(message);
+    /** The line the parser names ("startline N"), else the line after the last good record. */
+    private static int brokenLine(Exception e, List<CSVRecord> records, String text, int[] lineStarts) {
+        Matcher startLine = START_LINE.matcher(String.valueOf(rootCause(e).getMessage()));
+        if (startLine.find()) {
+            return Integer.parseInt(startLine.group(1));
+        }
+        return records.isEmpty() ? 1 : lineOf(lineStarts, start(text, records.get(records.size() - 1))) + 1;
+    }
+
+    private static String describe(Exception e) {
+        String message = String.valueOf(rootCause(e).getMessage());
+        if (message.contains("EOF reached before encapsulated token finished")) {
+            return "a quoted value is not closed before the end of the file";
+        }
+        if (message.toLowerCase(java.util.Locale.ROOT).contains("between encapsulated token and delimiter")) {
+            return "text follows a closing quote; quote the whole value and double any quote inside it";
+        }
+        return START_LINE.matcher(message.lines().findFirst().orElse(message)).replaceAll("").trim();
+    }
+
+    private static Throwable rootCause(Throwable t) {
+        return t.getCause() == null || t.getCause() == t ? t : rootCause(t.getCause());
     }
 }

@@ -30,7 +30,7 @@ public final class JointsReader {
         if (table == null) {
             return joints;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no joints under the header (expected one row per joint type)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

@@ -102,6 +102,10 @@ public final class KitJsonReader {
         json.unknownKeys(root, "", KEYS);
         KitSettings defaults = KitSettings.defaults(folderName(kitDir));
         String name = json.text(root, "", "name", "the kit's name").orElse(defaults.name());
+        if (name.isBlank()) {
+            json.report("", "name", "the name is blank (expected a name, or leave the key out to use the folder's)");
+            name = defaults.name();
+        }
         String description = json.text(root, "", "description", "a description of the kit").orElse("");
         Path stock = json.path(root, "stockCatalog", kitDir).orElse(kitDir.resolve("stock.csv").normalize());
         Path materials = json.path(root, "materials", kitDir).orElse(null);

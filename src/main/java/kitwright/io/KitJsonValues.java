@@ -165,7 +165,7 @@ final class KitJsonValues {
         return value == null || value.isNull() ? null : value;
     }
 
-    private void report(String prefix, String key, String message) {
+    void report(String prefix, String key, String message) {
         String pointer = "/" + prefix.replace('.', '/') + key.replace("~", "~0").replace("/", "~1");
         problems.add(file, lineOf(pointer), prefix + key, message);
     }

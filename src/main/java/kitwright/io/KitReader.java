@@ -47,7 +47,9 @@ public final class KitReader {
         }
         KitSettings settings = kitJson.settings();
         Map<String, Material> materials = materials(kitJson.materialsFile(), kitJson.materials() != null, problems);
-        TubeCatalog catalog = catalog(kitJson.stockCatalog(), materials, kitJson.materialsFile(), problems);
+        boolean catalogNamed = !kitJson.stockCatalog().equals(KitJsonReader.defaults(kitDir).stockCatalog());
+        TubeCatalog catalog = catalog(kitJson.stockCatalog(), catalogNamed, materials, kitJson.materialsFile(),
+                problems);
         List<CrateType> crates = List.of();
         if (kitJson.crateCatalog() != null || Files.exists(kitJson.crateCatalogFile())) {
             crates = CrateCatalogReader.read(kitJson.crateCatalogFile(), problems);
@@ -78,7 +80,7 @@ public final class KitReader {
             throws InvalidInputException {
         Problems problems = new Problems();
         Map<String, Material> materials = materialsFile == null ? null : materials(materialsFile, true, problems);
-        TubeCatalog catalog = catalog(stockCatalog, materials, materialsFile, problems);
+        TubeCatalog catalog = catalog(stockCatalog, true, materials, materialsFile, problems);
         List<Sourced<BarLine>> lines = BarsReader.read(barsFile, problems);
         List<Bar> bars = KitAssembler.marks(settings, lines, List.of(), catalog, problems);
         problems.throwIfAny();
@@ -97,11 +99,13 @@ public final class KitReader {
     }
 
     /** The tube catalog, or null when it is missing or has problems (section checks would mislead). */
-    private static TubeCatalog catalog(Path file, Map<String, Material> materials, Path materialsFile,
-                                       Problems problems) {
+    private static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
+                                       Path materialsFile, Problems problems) {
         if (!Files.exists(file)) {
+            String hint = named ? "check the path; kit.json paths are relative to the kit folder"
+                    : "put stock.csv in the kit folder or name the catalog in kit.json as \"stockCatalog\"";
             problems.add(Problem.ofFile(file, "file not found (expected a tube catalog with the columns "
-                    + TubeCatalogReader.COLUMNS.header() + "; name it in kit.json as \"stockCatalog\")"));
+                    + TubeCatalogReader.COLUMNS.header() + "; " + hint + ")"));
             return null;
         }
         int before = problems.count();

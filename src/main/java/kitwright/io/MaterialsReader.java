@@ -33,7 +33,7 @@ public final class MaterialsReader {
         if (table == null) {
             return materials;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no materials under the header (expected one row per material)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

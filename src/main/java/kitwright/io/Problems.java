@@ -2,7 +2,10 @@ package kitwright.io;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Collects every problem found while reading input, so that a clerk sees all of them in one run rather than one
@@ -27,15 +30,24 @@ public final class Problems {
         return found.isEmpty();
     }
 
-    /** The problems in the order they were found. */
+    /**
+     * The problems grouped by file (files in the order they were first reported) and by line within a file, so
+     * that a clerk can work down each file once.
+     */
     public List<Problem> list() {
-        return List.copyOf(found);
+        Map<Path, Integer> fileOrder = new HashMap<>();
+        for (Problem problem : found) {
+            fileOrder.putIfAbsent(problem.file(), fileOrder.size());
+        }
+        List<Problem> sorted = new ArrayList<>(found);
+        sorted.sort(Comparator.comparing((Problem p) -> fileOrder.get(p.file())).thenComparingInt(Problem::line));
+        return List.copyOf(sorted);
     }
 
     /** Throws one exception carrying every problem, when there is any. */
     public void throwIfAny() throws InvalidInputException {
         if (!found.isEmpty()) {
-            throw new InvalidInputException(found);
+            throw new InvalidInputException(list());
         }
     }
 }

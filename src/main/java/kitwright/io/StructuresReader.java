@@ -32,7 +32,7 @@ public final class StructuresReader {
         if (table == null) {
             return counts;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no rows under the header (expected one row per structure and mark)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

@@ -49,7 +49,7 @@ public final class TubeCatalogReader {
         if (table == null) {
             return Optional.empty();
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no stock under the header (expected one row per section and stock length)");
         }
         Map<String, Section> sections = new LinkedHashMap<>();

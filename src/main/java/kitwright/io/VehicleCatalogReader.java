@@ -35,7 +35,7 @@ public final class VehicleCatalogReader {
         if (table == null) {
             return vehicles;
         }
-        if (table.rows().isEmpty()) {
+        if (table.isEmpty()) {
             problems.add(file, 2, "", "no vehicles under the header (expected one row per vehicle type)");
         }
         Map<String, Integer> firstLine = new HashMap<>();

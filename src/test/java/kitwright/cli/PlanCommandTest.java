@@ -1,0 +1,107 @@
+package kitwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import kitwright.io.KitFiles;
+import kitwright.io.OutputFolder;
+import kitwright.io.PrettyJson;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class PlanCommandTest {
+
+    @Test
+    void planWritesTheSummaryIntoAFolderThatAppearsWhole(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("reports").resolve("cinema-6");
+
+        CliRun run = CliRun.of("plan", "sample-kits/cinema-6", "--out", out.toString(), "--date", "2025-06-30");
+
+        assertThat(run.err()).isEmpty();
+        assertThat(run.exitCode()).isEqualTo(ExitCode.OK.code());
+        assertThat(entries(out)).containsExactly(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON);
+        assertThat(entries(out.getParent())).as("no temporary folder left beside").containsExactly("cinema-6");
+        JsonNode summary = PrettyJson.mapper().readTree(out.resolve(PlanCommand.SUMMARY_JSON).toFile());
+        assertThat(summary.get("kit").asText()).isEqualTo("cinema-6");
+        assertThat(summary.get("marks").asInt()).isEqualTo(6);
+        assertThat(summary.get("bars").asInt()).isEqualTo(318);
+        assertThat(summary.get("members").asInt()).isEqualTo(570);
+        assertThat(summary.get("sections")).hasSize(5);
+    }
+
+    @Test
+    void theSummaryIsStableJsonWithTwoSpaceIndentAndATrailingNewline(@TempDir Path dir) throws Exception {
+        KitFiles.kit(dir.resolve("kit"), "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1000,4\n");
+        Path first = dir.resolve("one");
+        Path second = dir.resolve("two");
+
+        CliRun.of("plan", dir.resolve("kit").toString(), "--out", first.toString());
+        CliRun.of("plan", dir.resolve("kit").toString(), "--out", second.toString());
+
+        String text = Files.readString(first.resolve("summary.json"));
+        assertThat(Files.readString(second.resolve("summary.json"))).isEqualTo(text);
+        assertThat(text).startsWith("{\n  \"kit\": \"kit\",\n  \"description\": \"\",\n  \"marks\": 1,\n")
+                .contains("\n  \"spares\": []\n}").endsWith("}\n").doesNotContain("\r");
+        List<String> keys = iterate(PrettyJson.mapper().readTree(text).fieldNames());
+        assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
+                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares");
+    }
+
+    @Test
+    void invalidInputLeavesNoFolderAndKeepsAPreviousOne(@TempDir Path dir) throws Exception {
+        Path kit = KitFiles.kit(dir.resolve("kit"), "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1000,4\n");
+        Path fresh = dir.resolve("fresh");
+        Path previous = dir.resolve("previous");
+        assertThat(CliRun.of("plan", kit.toString(), "--out", previous.toString()).exitCode()).isZero();
+        String before = Files.readString(previous.resolve("summary.json"));
+        KitFiles.write(kit, "bars.csv", "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1000,-4\n");
+
+        CliRun intoFresh = CliRun.of("plan", kit.toString(), "--out", fresh.toString());
+        CliRun intoPrevious = CliRun.of("plan", kit.toString(), "--out", previous.toString());
+
+        assertThat(intoFresh.exitCode()).isEqualTo(ExitCode.INVALID_INPUT.code());
+        assertThat(intoPrevious.exitCode()).isEqualTo(ExitCode.INVALID_INPUT.code());
+        assertThat(intoFresh.err()).contains("bars.csv:2: quantity: -4 is negative");
+        assertThat(fresh).doesNotExist();
+        assertThat(previous.resolve("summary.json")).hasContent(before.strip());
+        assertThat(entries(dir)).containsExactly("kit", "previous");
+    }
+
+    @Test
+    void aFolderKitwrightDidNotWriteIsRefused(@TempDir Path dir) throws Exception {
+        Path mine = Files.createDirectories(dir.resolve("mine"));
+        Files.writeString(mine.resolve("notes.txt"), "keep");
+
+        CliRun run = CliRun.of("plan", "sample-kits/alu-kiosk", "--out", mine.toString());
+
+        assertThat(run.exitCode()).isEqualTo(ExitCode.INVALID_INPUT.code());
+        assertThat(run.err()).contains("the folder exists and was not written by kitwright");
+        assertThat(entries(mine)).containsExactly("notes.txt");
+    }
+
+    @Test
+    void aBadDateIsInvalidInput(@TempDir Path dir) {
+        CliRun run = CliRun.of("plan", "sample-kits/alu-kiosk", "--out", dir.resolve("x").toString(),
+                "--date", "30/06/2025");
+
+        assertThat(run.exitCode()).isEqualTo(ExitCode.INVALID_INPUT.code());
+        assertThat(run.err()).contains("'30/06/2025' is not a date (expected YYYY-MM-DD, e.g. 2025-06-30)");
+        assertThat(dir.resolve("x")).doesNotExist();
+    }
+
+    private static List<String> entries(Path dir) throws Exception {
+        try (Stream<Path> list = Files.list(dir)) {
+            return list.map(p -> p.getFileName().toString()).sorted().toList();
+        }
+    }
+
+    private static <T> List<T> iterate(java.util.Iterator<T> iterator) {
+        List<T> list = new java.util.ArrayList<>();
+        iterator.forEachRemaining(list::add);
+        return list;
+    }
+}

@@ -1,0 +1,109 @@
+package kitwright.io;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.nio.file.Path;
+import kitwright.model.JointBox;
+import kitwright.model.KitSettings;
+import kitwright.model.NestTolerance;
+import kitwright.model.SparesPolicy;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class KitJsonReaderTest {
+
+    @Test
+    void everyKeyIsRead(@TempDir Path dir) throws Exception {
+        Path file = KitFiles.write(dir, "kit.json", """
+                {
+                  "name": "tower",
+                  "description": "a tower kit",
+                  "stockCatalog": "../catalogs/steel.csv",
+                  "materials": "/data/materials.csv",
+                  "crateCatalog": "crates/timber.csv",
+                  "vehicleCatalog": "trucks.csv",
+                  "kerfMm": 3.0,
+                  "trimMm": 8,
+                  "minRemnantMm": 750,
+                  "timeLimitSeconds": 30,
+                  "structuresStandTogether": true,
+                  "endDeductionMm": 42.5,
+                  "nestTolerance": "nominal",
+                  "nestClearanceMm": 3,
+                  "nestEndAllowanceMm": 20,
+                  "maxBundleMassKg": 50,
+                  "jointBox": {"lengthMm": 800, "widthMm": 600, "heightMm": 400, "maxMassKg": 30},
+                  "spares": {"lossRatePerCycle": 0.02, "cycles": 10, "serviceLevel": 0.95}
+                }
+                """);
+
+        KitJson json = KitJsonReader.read(file, dir);
+
+        KitSettings s = json.settings();
+        assertThat(s).isEqualTo(new KitSettings("tower", "a tower kit", 3.0, 8, 750, 30, true, 42.5,
+                NestTolerance.NOMINAL, 3, 20, 50.0, new JointBox(800, 600, 400, 30),
+                new SparesPolicy(0.02, 10, 0.95)));
+        assertThat(json.stockCatalog()).isEqualTo(dir.getParent().resolve("catalogs/steel.csv"));
+        assertThat(json.materialsFile()).isEqualTo(Path.of("/data/materials.csv"));
+        assertThat(json.crateCatalogFile()).isEqualTo(dir.resolve("crates/timber.csv"));
+        assertThat(json.vehicleCatalogFile()).isEqualTo(dir.resolve("trucks.csv"));
+    }
+
+    @Test
+    void anEmptyObjectGivesTheDefaultsAndCatalogsBesideTheTubeCatalog(@TempDir Path dir) throws Exception {
+        Path kitDir = dir.resolve("kiosk");
+        Path file = KitFiles.write(kitDir, "kit.json", "{}");
+
+        KitJson json = KitJsonReader.read(file, kitDir);
+
+        assertThat(json.settings()).isEqualTo(KitSettings.defaults("kiosk"));
+        assertThat(json.stockCatalog()).isEqualTo(kitDir.resolve("stock.csv"));
+        assertThat(json.materials()).isNull();
+        assertThat(json.materialsFile()).isEqualTo(kitDir.resolve("materials.csv"));
+        assertThat(json.crateCatalogFile()).isEqualTo(kitDir.resolve("crates.csv"));
+        assertThat(json.vehicleCatalogFile()).isEqualTo(kitDir.resolve("vehicles.csv"));
+    }
+
+    @Test
+    void aPartialJointBoxKeepsTheOtherDefaultsAndNullMeansNotGiven(@TempDir Path dir) throws Exception {
+        Path file = KitFiles.write(dir, "kit.json",
+                "{\"jointBox\": {\"maxMassKg\": 20}, \"maxBundleMassKg\": null, \"kerfMm\": null}");
+
+        KitSettings s = KitJsonReader.read(file, dir).settings();
+
+        assertThat(s.jointBox()).isEqualTo(new JointBox(600, 400, 300, 20));
+        assertThat(s.maxBundleMassKg()).isNull();
+        assertThat(s.kerfMm()).isEqualTo(KitSettings.DEFAULT_KERF_MM);
+    }
+
+    @Test
+    void problemsCarryTheParserLineAndTheKey(@TempDir Path dir) {
+        Path file = KitFiles.write(dir, "kit.json", """
+                {
+                  "name": "x",
+                  "jointBox": {
+                    "lengthMm": 0,
+                    "depthMm": 300
+                  },
+                  "timeLimitSeconds": 0
+                }
+                """);
+
+        assertThatThrownBy(() -> KitJsonReader.read(file, dir))
+                .isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.problems())
+                        .extracting(p -> p.line() + " " + p.column())
+                        .containsExactly("4 jointBox.lengthMm", "5 jointBox.depthMm", "7 timeLimitSeconds"));
+    }
+
+    @Test
+    void aFileThatIsNotAnObjectSaysWhatItHolds(@TempDir Path dir) {
+        Path file = KitFiles.write(dir, "kit.json", "[1, 2]");
+
+        assertThatThrownBy(() -> KitJsonReader.read(file, dir))
+                .isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.problems())
+                        .singleElement().asString()
+                        .endsWith("kit.json:1: the file holds a list (expected a JSON object such as"
+                                + " {\"kerfMm\": 2.0})"));
+    }
+}
