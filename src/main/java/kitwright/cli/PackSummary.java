@@ -36,7 +36,7 @@ final class PackSummary {
         if (price != null) {
             sb.append(", price ").append(ShopFormat.money(price));
         }
-        sb.append("; lower bound ").append(crates.lowerBound()).append(" crates");
+        sb.append("; lower bound ").append(crates.lowerBound()).append(crates.lowerBound() == 1 ? " crate" : " crates");
         if (crates.bounds().price() != null) {
             sb.append(", price ").append(ShopFormat.money(crates.bounds().price()));
         }
