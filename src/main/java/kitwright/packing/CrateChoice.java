@@ -15,7 +15,7 @@ import kitwright.model.CrateType;
  * <ol>
  *   <li>Construction, a greedy set cover (Chvátal 1979): fill one crate of every type from what is left, keep the
  *   one with the least cost per share of the remaining job (the larger of its volume share and mass share),
- *   repeat. The same run with one crate type at a time, and both again with the boxes-first layouts of
+ *   repeat. The same run with one crate type and with each pair of types, and all again with the boxes-first layouts of
  *   {@link CrateFiller#fills} as further choices, give more complete covers; the cheapest starts the search.</li>
  *   <li>Candidate patterns: every crate filled on the way, one crate of each type holding a single item type, and
  *   patterns priced by the duals of {@link CoverRelaxation} (column generation, Gilmore &amp; Gomory 1961; the
@@ -25,6 +25,8 @@ import kitwright.model.CrateType;
  */
 final class CrateChoice {
     private static final double EPS = 1e-9;
+    /** How many of the first patterns get complements. */
+    private static final int COMPLEMENTS = 40;
 
     private final CrateFiller filler = new CrateFiller();
     private final PatternCover cover;
@@ -41,9 +43,15 @@ final class CrateChoice {
         Map<String, CrateLayout> patterns = new LinkedHashMap<>();
         List<CrateLayout> best = List.of();
         double bestCost = Double.MAX_VALUE;
+        List<int[]> subsets = new ArrayList<>();
+        subsets.add(allTypes(crates.size()));
+        for (int t = 0; t < crates.size(); t++) {
+            for (int u = t; u < crates.size(); u++) {
+                subsets.add(t == u ? new int[] {t} : new int[] {t, u});
+            }
+        }
         for (boolean boxesFirst : new boolean[] {false, true}) {
-            for (int t = -1; t < crates.size(); t++) {
-                int[] allowed = t < 0 ? allTypes(crates.size()) : new int[] {t};
+            for (int[] allowed : subsets) {
                 List<CrateLayout> run = greedy(crates, crateCost, types, demand, allowed, boxesFirst, patterns);
                 double c = cost(run, crateCost);
                 if (!run.isEmpty() && (best.isEmpty() || c < bestCost - EPS
@@ -63,6 +71,7 @@ final class CrateChoice {
                 add(patterns, filler.fill(t, crates.get(t), types, only));
             }
         }
+        complements(crates, types, demand, patterns);
         priceColumns(crates, crateCost, types, demand, patterns);
 
         List<CrateLayout> list = new ArrayList<>(patterns.values());
@@ -146,6 +155,30 @@ final class CrateChoice {
             result.add(pick);
         }
         return result;
+    }
+
+    /**
+     * For the first patterns found, a crate of every type filled with what such a pattern leaves: pairs of crates
+     * that together hold a small job, which the greedy runs, filling the first crate fullest, may miss.
+     */
+    private void complements(List<CrateType> crates, List<ItemType> types, int[] demand,
+                             Map<String, CrateLayout> patterns) {
+        List<CrateLayout> first = new ArrayList<>(patterns.values()).subList(0, Math.min(COMPLEMENTS,
+                patterns.size()));
+        for (CrateLayout p : first) {
+            int[] rest = new int[demand.length];
+            for (int i = 0; i < rest.length; i++) {
+                rest[i] = Math.max(0, demand[i] - p.counts()[i]);
+            }
+            if (Arrays.stream(rest).allMatch(n -> n == 0)) {
+                continue;
+            }
+            for (int t = 0; t < crates.size(); t++) {
+                for (CrateLayout layout : filler.fills(t, crates.get(t), types, rest)) {
+                    add(patterns, layout);
+                }
+            }
+        }
     }
 
     /** Column generation rounds: add crates whose reduced cost under the LP duals is negative. */

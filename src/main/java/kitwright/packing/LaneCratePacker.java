@@ -31,7 +31,7 @@ public final class LaneCratePacker implements CratePacker {
      * @param pricingRounds     column generation rounds
      */
     public record Limits(double deterministicTime, double safetySeconds, int pricingRounds) {
-        public static final Limits DEFAULT = new Limits(0.5, 10.0, 20);
+        public static final Limits DEFAULT = new Limits(1.0, 10.0, 20);
     }
 
     private final Limits limits;
