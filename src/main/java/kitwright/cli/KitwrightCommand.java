@@ -24,7 +24,8 @@ import picocli.CommandLine.Command;
             "kitwright plans material and logistics only. It does not check structural capacity, joints, lifting",
             "or load securing; follow local codes and licensed professionals."
         },
-        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CompareCommand.class})
+        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CutCommand.class,
+            PackCommand.class, CompareCommand.class})
 public final class KitwrightCommand implements Runnable {
 
     @CommandLine.Spec

@@ -1,0 +1,208 @@
+package kitwright.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import kitwright.cutting.CutPlan;
+import kitwright.cutting.CutProgress;
+import kitwright.cutting.KitCutter;
+import kitwright.cutting.SectionCutPlan;
+import kitwright.io.InvalidInputException;
+import kitwright.io.KitReader;
+import kitwright.io.OutputFolder;
+import kitwright.io.PrettyJson;
+import kitwright.model.Kit;
+import kitwright.model.KitSettings;
+import kitwright.model.Status;
+import kitwright.report.cutting.CutListCsv;
+import kitwright.report.cutting.OrderCsv;
+import kitwright.report.cutting.RackAfterCsv;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code kitwright cut KIT_DIR} or {@code kitwright cut --bars FILE --stock FILE [--materials FILE]}: plans what
+ * stock to buy and how to saw it, section by section, and prints the summary; writes the plan as JSON and the
+ * saw sheet, order and rack files when asked.
+ */
+@Command(name = "cut", mixinStandardHelpOptions = true,
+        description = {
+            "Plans the cutting of a kit: which stock lengths to buy (and which rack offcuts to use) and how to saw",
+            "each piece, at the least total price (without prices: the least total stock length), one section at",
+            "a time. Each section is OPTIMAL (proven), FEASIBLE (with its gap to the lower bound) or INFEASIBLE",
+            "(with the reason, e.g. too few rack offcuts).",
+            "",
+            "Saw model: the trim is taken off each end of a stock piece and includes its own squaring cut; pieces",
+            "are separated by one kerf; the offcut is what is left after the last piece's kerf. An offcut of at",
+            "least the minimum remnant length goes back on the rack (rack-after.csv).",
+            "",
+            "Exit codes: 0 every section planned, 2 invalid input, 3 some section has no feasible plan (the other",
+            "sections are still planned and written)."
+        })
+public final class CutCommand implements Callable<Integer> {
+    @Parameters(index = "0", arity = "0..1", paramLabel = "KIT_DIR",
+            description = "The kit folder (kit.json, bars.csv). Leave out to use --bars and --stock instead.")
+    Path kitDir;
+
+    @Option(names = "--bars", paramLabel = "FILE", description = "bars.csv, for a run without a kit folder.")
+    Path barsFile;
+
+    @Option(names = "--stock", paramLabel = "FILE", description = "The tube catalog, with --bars.")
+    Path stockFile;
+
+    @Option(names = "--materials", paramLabel = "FILE",
+            description = "materials.csv, with --bars; without it masses are left out.")
+    Path materialsFile;
+
+    @Option(names = "--kerf", paramLabel = "MM", description = "Saw kerf in mm (default: kit.json kerfMm, else 2).")
+    Double kerf;
+
+    @Option(names = "--trim", paramLabel = "MM",
+            description = "End trim per end in mm, including its own cut (default: kit.json trimMm, else 5).")
+    Double trim;
+
+    @Option(names = "--min-remnant", paramLabel = "MM",
+            description = "Shortest offcut kept as a remnant, in mm (default: kit.json minRemnantMm, else 500).")
+    Double minRemnant;
+
+    @Option(names = "--time-limit", paramLabel = "SECONDS",
+            description = "Safety-net time limit per section in seconds (default: kit.json timeLimitSeconds, else"
+                    + " 10). The work limits are deterministic; this one only stops a runaway search.")
+    Double timeLimit;
+
+    @Option(names = "--json", paramLabel = "FILE", description = "Also write the plan as JSON to FILE.")
+    Path json;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Write cut-list.csv, order.csv, rack-after.csv and cutting.json into DIR (created, or"
+                    + " replaced when kitwright wrote it before).")
+    Path out;
+
+    @Option(names = "--spares-from-offcuts",
+            description = "Fill offcuts with spare bars of the section's marks, most-used first, buying nothing"
+                    + " more.")
+    boolean sparesFromOffcuts;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws InvalidInputException, IOException {
+        Kit kit = readKit();
+        PrintWriter err = spec.commandLine().getErr();
+        if (kit.materials().isEmpty()) {
+            err.println("kitwright: warning: no materials, so masses are left out"
+                    + (kitDir == null ? " (give --materials FILE)" : ""));
+        }
+        long start = System.nanoTime();
+        CutProgress progress = (stage, section, bound, best) -> {
+            err.printf(Locale.ROOT, "cut %s: %s, lower bound %s, best %s%n", section, stage, figure(bound),
+                    best == null ? "-" : figure(best));
+            err.flush();
+        };
+        CutPlan plan = KitCutter.cut(kit, new KitCutter.Options(sparesFromOffcuts, null), progress);
+        err.printf(Locale.ROOT, "cut: %.2f s%n", (System.nanoTime() - start) / 1e9);
+        err.flush();
+        String planJson = PrettyJson.write(plan);
+        if (json != null) {
+            writeAtomically(json, planJson);
+        }
+        if (out != null) {
+            try (OutputFolder folder = OutputFolder.create(out)) {
+                folder.write("cut-list.csv", CutListCsv.format(kit, plan));
+                folder.write("order.csv", OrderCsv.format(kit, plan));
+                folder.write("rack-after.csv", RackAfterCsv.format(kit, plan));
+                folder.write("cutting.json", planJson);
+                folder.commit();
+            }
+        }
+        PrintWriter stdout = spec.commandLine().getOut();
+        stdout.print(CutSummaryText.format(kit, plan));
+        if (json != null) {
+            stdout.println("Wrote " + json);
+        }
+        if (out != null) {
+            stdout.println("Wrote " + out.resolve("cut-list.csv") + ", order.csv, rack-after.csv, cutting.json");
+        }
+        stdout.flush();
+        boolean infeasible = plan.sections().stream().map(SectionCutPlan::status).anyMatch(Status.INFEASIBLE::equals);
+        return infeasible ? ExitCode.NO_FEASIBLE_PLAN.code() : ExitCode.OK.code();
+    }
+
+    private Kit readKit() throws InvalidInputException {
+        boolean looseFiles = barsFile != null || stockFile != null || materialsFile != null;
+        if (kitDir != null && looseFiles) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "give either KIT_DIR or --bars and --stock, not both");
+        }
+        if (kitDir == null && (barsFile == null || stockFile == null)) {
+            throw new CommandLine.ParameterException(spec.commandLine(),
+                    "give KIT_DIR, or --bars FILE and --stock FILE");
+        }
+        check(kerf, "--kerf", true);
+        check(trim, "--trim", true);
+        check(minRemnant, "--min-remnant", true);
+        check(timeLimit, "--time-limit", false);
+        if (kitDir != null) {
+            Kit kit = KitReader.read(kitDir);
+            return kit.withSettings(override(kit.settings()));
+        }
+        String name = String.valueOf(barsFile.toAbsolutePath().getParent().getFileName());
+        return KitReader.fromFiles(barsFile, stockFile, materialsFile, override(KitSettings.defaults(name)));
+    }
+
+    private KitSettings override(KitSettings settings) {
+        KitSettings s = settings;
+        if (kerf != null) {
+            s = s.withKerfMm(kerf);
+        }
+        if (trim != null) {
+            s = s.withTrimMm(trim);
+        }
+        if (minRemnant != null) {
+            s = s.withMinRemnantMm(minRemnant);
+        }
+        if (timeLimit != null) {
+            s = s.withTimeLimitSeconds(timeLimit);
+        }
+        return s;
+    }
+
+    private void check(Double value, String option, boolean zeroAllowed) {
+        if (value != null && (value.isNaN() || value.isInfinite() || value < 0 || (!zeroAllowed && value == 0))) {
+            throw new CommandLine.ParameterException(spec.commandLine(), option + " " + value + " is not allowed"
+                    + " (expected a number " + (zeroAllowed ? "0 or more" : "above 0") + ")");
+        }
+    }
+
+    /** Writes beside the target, then renames it into place, so a failed run leaves no half file. */
+    private static void writeAtomically(Path target, String text) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Files.createDirectories(absolute.getParent());
+        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".partial");
+        try {
+            Files.writeString(temporary, text, StandardCharsets.UTF_8);
+            try {
+                Files.move(temporary, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temporary);
+        }
+    }
+
+    private static String figure(double value) {
+        return kitwright.io.Figures.plain(Math.round(value * 100) / 100.0);
+    }
+}

@@ -1,0 +1,57 @@
+package kitwright.report.cutting;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import kitwright.cutting.Cut;
+import kitwright.cutting.CutPattern;
+import kitwright.cutting.CutPlan;
+import kitwright.cutting.SectionCutPlan;
+import kitwright.model.Bar;
+import kitwright.model.Kit;
+
+/**
+ * The saw sheet, {@code cut-list.csv}: one row per piece to cut, in saw order, and one row per stock piece for its
+ * offcut. Stock pieces are numbered 1, 2, ... through the whole kit. A piece starts at
+ * {@code trim + sum over earlier pieces of (length + kerf)}; the offcut starts after the last piece's kerf.
+ * {@code kind} is {@code cut}, {@code spare} (a bar beyond the kit's quantity of its mark), {@code remnant} or
+ * {@code scrap}.
+ */
+public final class CutListCsv {
+    public static final List<String> HEADER = List.of("stock_piece", "section", "stock_length_mm", "origin",
+            "sequence", "kind", "mark", "length_mm", "tolerance_mm", "start_mm");
+
+    private CutListCsv() {
+    }
+
+    public static String format(Kit kit, CutPlan plan) {
+        Map<String, Bar> bars = new HashMap<>();
+        kit.bars().forEach(b -> bars.put(b.mark(), b));
+        Map<String, Integer> cutSoFar = new HashMap<>();
+        List<List<Object>> rows = new ArrayList<>();
+        int stockPiece = 0;
+        for (SectionCutPlan section : plan.sections()) {
+            for (CutPattern pattern : section.patterns()) {
+                for (int n = 0; n < pattern.count(); n++) {
+                    stockPiece++;
+                    double position = section.trimMm();
+                    int sequence = 0;
+                    for (Cut cut : pattern.cuts()) {
+                        Bar bar = bars.get(cut.mark());
+                        int made = cutSoFar.merge(cut.mark(), 1, Integer::sum);
+                        String kind = bar != null && made > bar.quantity() ? "spare" : "cut";
+                        rows.add(List.of(stockPiece, section.section(), pattern.stockLengthMm(),
+                                pattern.origin().code(), ++sequence, kind, cut.mark(), cut.lengthMm(),
+                                bar == null || bar.toleranceMm() == null ? "" : bar.toleranceMm(), position));
+                        position += cut.lengthMm() + section.kerfMm();
+                    }
+                    rows.add(List.of(stockPiece, section.section(), pattern.stockLengthMm(),
+                            pattern.origin().code(), ++sequence, pattern.offcutKind(), "", pattern.offcutMm(), "",
+                            position));
+                }
+            }
+        }
+        return CsvText.of(HEADER, rows);
+    }
+}
