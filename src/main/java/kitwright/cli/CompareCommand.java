@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.function.Consumer;
 import kitwright.compare.CompareFiles;
 import kitwright.compare.OptionPlanner;
 import kitwright.compare.OptionRunner;
@@ -55,12 +56,12 @@ public final class CompareCommand implements Callable<Integer> {
 
     private OptionPlanner planner;
 
-    /** The command as the root command builds it: options planned by the whole-chain pipeline. */
+    /** The command as the root command builds it: options planned by the whole chain ({@link OptionPlanners}). */
     public CompareCommand() {
-        this(OptionPlanners.pipeline());
+        this(null);
     }
 
-    /** The command with another planner (tests, tools). */
+    /** The command with another planner (tests, tools); null for the whole chain. */
     public CompareCommand(OptionPlanner planner) {
         this.planner = planner;
     }
@@ -78,12 +79,14 @@ public final class CompareCommand implements Callable<Integer> {
             err.flush();
             return ExitCode.INVALID_INPUT.code();
         }
-        OptionRunner runner = new OptionRunner(planner, threads, line -> {
+        Consumer<String> progress = line -> {
             synchronized (err) {
                 err.println(line);
                 err.flush();
             }
-        });
+        };
+        OptionPlanner chosen = planner != null ? planner : OptionPlanners.pipeline(progress);
+        OptionRunner runner = new OptionRunner(chosen, threads, progress);
         List<OptionSummary> options;
         // Claim the output folder first: a wrong --out is reported before the planning, not after it.
         try (OutputFolder folder = OutputFolder.create(out)) {

@@ -112,8 +112,8 @@ final class CompareCharts {
                         List.of(new Series("offcut", List.of(
                                 new Segment("scrap", "#c0504d", o -> o.scrapPct()),
                                 new Segment("remnant", "#e8a33d", o -> o.remnantPct())), "%", 2))),
-                new Spec("mass", "Mass per option", "Stock bought (the base of embodied carbon) against the "
-                        + "kit's bars and joints.",
+                new Spec("mass", "Mass per option", "Mill stock bought (the base of embodied carbon) against "
+                        + "the kit's bars and joints.",
                         List.of(new Series("bought", List.of(
                                         new Segment("stock bought", "#4f8a4c", OptionSummary::boughtMassKg)), "kg", 0),
                                 new Series("kit", List.of(

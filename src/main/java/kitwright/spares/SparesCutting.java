@@ -8,6 +8,7 @@ import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.cutting.Spare;
 import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -62,6 +63,7 @@ public final class SparesCutting {
             added = next;
             plan = cutting.fillOffcuts(more, replanned, shortfall(need, produced(replanned, kit)));
         }
+        plan = withSparesOf(plan, kit);
         Map<String, Integer> extra = produced(plan, kit);
         List<SparesSupply> supply = new ArrayList<>();
         for (Bar bar : kit.bars()) {
@@ -92,6 +94,33 @@ public final class SparesCutting {
             beyond.put(bar.mark(), Math.max(0, cut.get(bar.mark()) - bar.quantity()));
         }
         return beyond;
+    }
+
+    /**
+     * The plan with each section's spares counted against the kit's own quantities, so that bars bought as spares
+     * (added to the demand of a re-plan) are listed as spares too, as the cutting JSON contract means them.
+     */
+    static CutPlan withSparesOf(CutPlan plan, Kit kit) {
+        List<SectionCutPlan> sections = new ArrayList<>();
+        for (SectionCutPlan s : plan.sections()) {
+            Map<String, Integer> cut = new LinkedHashMap<>();
+            for (CutPattern p : s.patterns()) {
+                for (Cut c : p.cuts()) {
+                    cut.merge(c.mark(), p.count(), Integer::sum);
+                }
+            }
+            List<Spare> spares = new ArrayList<>();
+            for (Bar bar : kit.bars()) {
+                int beyond = cut.getOrDefault(bar.mark(), 0) - bar.quantity();
+                if (bar.section().equals(s.section()) && beyond > 0) {
+                    spares.add(new Spare(bar.mark(), beyond));
+                }
+            }
+            sections.add(new SectionCutPlan(s.section(), s.kerfMm(), s.trimMm(), s.minRemnantMm(), s.objective(),
+                    s.status(), s.reason(), s.value(), s.lowerBound(), s.gap(), s.stockPieces(), s.patterns(),
+                    spares));
+        }
+        return new CutPlan(sections);
     }
 
     private static Map<String, Integer> shortfall(Map<String, Integer> need, Map<String, Integer> have) {

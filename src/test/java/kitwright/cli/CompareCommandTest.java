@@ -89,4 +89,25 @@ class CompareCommandTest {
         assertThat(out.toString()).contains("KIT_DIR", "--out", "--threads", "compare.html", "compare.csv",
                 "compare.json", "3 some option has no feasible plan");
     }
+
+    @Test
+    void comparesTwoKitsThroughTheWholeChain() throws Exception {
+        Path a = kitwright.compare.TinyKits.write(tmp, "long-c", false, null);
+        Path b = kitwright.compare.TinyKits.write(tmp, "short-c", true, null);
+        Path dir = tmp.resolve("out");
+        CommandLine cl = KitwrightCommand.commandLine();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        int code = cl.execute("compare", a.toString(), b.toString(), "--out", dir.toString(), "--threads", "2");
+        assertThat(code).as(err.toString()).isEqualTo(ExitCode.OK.code());
+        var options = kitwright.compare.CompareJson.read(Files.readString(dir.resolve("compare.json"))).options();
+        assertThat(options).extracting(OptionSummary::kit).containsExactly("long-c", "short-c");
+        assertThat(options).allSatisfy(o -> {
+            assertThat(o.vehicles()).isPositive();
+            assertThat(o.cost()).isPositive();
+            assertThat(o.co2eKg()).isPositive();
+        });
+        assertThat(options).extracting(OptionSummary::members).containsOnly(43);
+        assertThat(err.toString()).contains("compare: long-c: cutting: 3 sections", "(2 of 2 done)");
+    }
 }
