@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Supplier;
 import kitwright.cutting.CutPlan;
-import kitwright.cutting.KitCutter;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.Shipping;
 import kitwright.model.Kit;
@@ -13,6 +12,7 @@ import kitwright.nesting.NestResult;
 import kitwright.nesting.Nester;
 import kitwright.nesting.NestingOptions;
 import kitwright.packing.CratePlan;
+import kitwright.spares.SparesStage;
 
 /**
  * The whole chain for one kit, as one pure function: cutting, then nesting of every cut piece, then crating of
@@ -34,8 +34,8 @@ public final class Planner {
         KitSummary summary = KitSummary.of(kit);
 
         progress.stage("cutting", kit.usedSections().size() + " sections");
-        CutPlan cutting = timed(seconds, "cutting", () -> KitCutter.cut(kit,
-                new KitCutter.Options(options.sparesFromOffcuts(), null), progress));
+        CutPlan cutting = timed(seconds, "cutting", () -> SparesStage.cut(kit, options.sparesFromOffcuts(), null,
+                progress).plan());
 
         progress.stage("nesting", "every cut piece into bundles");
         NestResult nesting = timed(seconds, "nesting", () -> Nester.run(kit, cutting,

@@ -64,4 +64,19 @@ class SparesStageTest {
         assertThat(r.plan()).isEqualTo(KitCutter.cut(kit, new KitCutter.Options(false, LIMITS), CutProgress.NONE));
         assertThat(r.plan().sections()).allSatisfy((SectionCutPlan s) -> assertThat(s.spares()).isEmpty());
     }
+
+    @Test
+    void theWholeChainCutsTheKitsServiceLifeSpares() throws Exception {
+        Kit kit = KitReader.read(TinyKits.write(tmp, "chain", false,
+                "{\"lossRatePerCycle\": 0.02, \"cycles\": 6, \"serviceLevel\": 0.9}"));
+        kitwright.plan.PlanResult result = kitwright.plan.Planner.run(kit, kitwright.plan.Planner.Options.DEFAULT,
+                kitwright.plan.PlanProgress.NONE);
+        CutPlanValidator.validate(kit, result.cutting());
+        SparesPlan sized = ServiceLifeSpares.plan(kit.bars(), kit.settings().spares());
+        Map<String, Integer> listed = result.cutting().sections().stream().flatMap(s -> s.spares().stream())
+                .collect(Collectors.toMap(Spare::mark, Spare::count));
+        for (MarkSpares m : sized.marks()) {
+            assertThat(listed.getOrDefault(m.mark(), 0)).as(m.mark()).isGreaterThanOrEqualTo(m.toMake());
+        }
+    }
 }
