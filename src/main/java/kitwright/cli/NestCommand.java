@@ -110,6 +110,10 @@ public final class NestCommand implements Callable<Integer> {
             kit = kit.withSettings(kit.settings().withNestTolerance(tolerance));
         }
         PrintWriter err = spec.commandLine().getErr();
+        if (kit.materials().isEmpty()) {
+            err.println("kitwright: warning: no materials, so bundle masses are 0 and maxBundleMassKg cannot be"
+                    + " checked");
+        }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
             err.printf(Locale.ROOT, "cut %s: %s, lower bound %.2f, best %s%n", section, stage, bound,
