@@ -7,7 +7,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.StringReader;
 import java.io.StringWriter;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -117,16 +116,6 @@ class CompareWritersTest {
     static int count(String text, String part) {
         int n = 0;
         for (int i = text.indexOf(part); i >= 0; i = text.indexOf(part, i + 1)) {
-            n++;
-        }
-        return n;
-    }
-
-    @SuppressWarnings("unused")
-    private static <T> int size(Iterator<T> it) {
-        int n = 0;
-        while (it.hasNext()) {
-            it.next();
             n++;
         }
         return n;
