@@ -39,6 +39,7 @@ public final class KitwrightCommand implements Runnable {
     /** Builds the command line with kitwright's exit codes and error handling. */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new KitwrightCommand());
+        cl.setUsageHelpWidth(110);
         cl.setExitCodeExceptionMapper(KitwrightCommand::exitCodeOf);
         cl.setExecutionExceptionHandler(KitwrightCommand::handleExecutionException);
         cl.setParameterExceptionHandler((ex, args) -> {
