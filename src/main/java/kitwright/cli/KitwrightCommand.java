@@ -25,7 +25,7 @@ import picocli.CommandLine.Command;
             "or load securing; follow local codes and licensed professionals."
         },
         subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CutCommand.class,
-            PackCommand.class})
+            NestCommand.class, PackCommand.class})
 public final class KitwrightCommand implements Runnable {
 
     @CommandLine.Spec

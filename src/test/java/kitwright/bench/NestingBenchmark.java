@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Random;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.CutProgress;
+import kitwright.cutting.KitCutter;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.model.Kit;
@@ -17,7 +19,6 @@ import kitwright.nesting.NestResult;
 import kitwright.nesting.Nester;
 import kitwright.nesting.NestingOptions;
 import kitwright.nesting.NestingProblem;
-import kitwright.nesting.SampleKitNestingTest;
 import kitwright.nesting.Tube;
 import kitwright.nesting.TubeEnvelope;
 import kitwright.nesting.TubeList;
@@ -72,14 +73,11 @@ public final class NestingBenchmark {
                 rows.size(), rows.get(rows.size() / 2)[0], slowest, worstGap);
     }
 
-    /**
-     * A sample kit, every bar as one piece (the pieces nesting sees; the cutting stage adds only its spares), with
-     * the kit's own fit rule.
-     */
+    /** A sample kit through the cutting stage (not timed), then nested with the kit's own fit rule. */
     private static void runSample(String name, NestingOptions options, List<double[]> rows) {
         try {
             Kit kit = KitReader.read(Path.of("sample-kits", name));
-            CutPlan cuts = SampleKitNestingTest.oneBarPerStockPiece(kit);
+            CutPlan cuts = KitCutter.cut(kit, KitCutter.Options.DEFAULT, CutProgress.NONE);
             KitSettings s = kit.settings();
             FitRule rule = new FitRule(s.nestTolerance(), s.nestClearanceMm());
             NestingProblem problem = new NestingProblem(TubeList.of(kit, cuts, rule), s.nestClearanceMm(),
