@@ -89,7 +89,7 @@ public final class PackCommand implements Callable<Integer> {
     private final PackUpstream upstream;
 
     public PackCommand() {
-        this(PackUpstream.UNNESTED);
+        this(PackUpstream.STAGES);
     }
 
     /** A pack command taking its bundles from the given stages (tests, and the plan chain). */
@@ -104,10 +104,10 @@ public final class PackCommand implements Callable<Integer> {
         Kit kit = KitReader.read(kitDir);
         checkCatalogs(kit);
         long start = System.nanoTime();
+        stderr.println("pack: cutting and nesting " + kit.bars().stream().mapToInt(b -> b.quantity()).sum()
+                + " bars");
+        stderr.flush();
         NestPlan nest = upstream.bundles(kit);
-        if (upstream.note() != null) {
-            stderr.println(upstream.note());
-        }
         List<Bundle> bundles = nest.bundles();
         List<Joint> joints = kit.joints();
         StructureShare share = null;

@@ -20,14 +20,51 @@ import kitwright.model.VehicleType;
  *   sum_{c in G} l_c w_c x_cv <= L_v W_v y_v                      G: classes that always stand on the floor
  *   x_cv <= sideBySide_cv y_v                                      c in T or G
  *   sum_{c in S} along_cv x_cv <= floor(W_v / minAcross_S) L_v y_v   S = T or G, fixed orientation on v
+ *   sum_q z_vq <= floor(W_v / minAcross_S) y_v,  x_cv <= sum_q a_cq z_vq   lanes of S as patterns q, z_vq >= 0
  * </pre>
  * The crates of T (or of G) never overlap when seen from above, so their footprints share the floor; those that
- * fit only one way stand side by side at most floor(W / narrowest) deep at any point along the deck.
+ * fit only one way stand side by side at most floor(W / narrowest) deep at any point along the deck, so they split
+ * into that many lanes, each a set of crates end to end ({@link LanePatterns}).
  */
 final class WholeVehicleBound {
     private static final double SECONDS = 5;
+    private static final int MAX_LANE_PATTERNS = 2000;
 
     private WholeVehicleBound() {
+    }
+
+    /**
+     * The lanes of fixed-orientation crates of one set on vehicle type v as patterns ({@link LanePatterns}):
+     * sum_q z_q <= k y_v and x_cv <= sum_q a_cq z_q. Skipped when there are too many patterns.
+     */
+    private static void lanePatterns(MPSolver solver, List<CrateClass> classes, boolean[] set, VehicleType t, int v,
+                                     double k, MPVariable[][] x, MPVariable y) {
+        List<CrateClass> fixed = classes.stream().filter(c -> set[c.index()] && StackingRules.fixedOrientation(c, t)
+                && DeckFiller.fitsVehicle(c, t)).toList();
+        if (fixed.isEmpty()) {
+            return;
+        }
+        double[] lengths = fixed.stream().mapToDouble(c -> c.alongDeck(StackingRules.turned(c, t))).toArray();
+        List<int[]> patterns = LanePatterns.maximal(lengths, t.deckLengthMm(), MAX_LANE_PATTERNS);
+        if (patterns == null) {
+            return;
+        }
+        MPConstraint lanes = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "lane_count_" + v);
+        lanes.setCoefficient(y, -k);
+        MPConstraint[] covers = new MPConstraint[fixed.size()];
+        for (int i = 0; i < fixed.size(); i++) {
+            covers[i] = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "lane_cover_" + v + "_" + i);
+            covers[i].setCoefficient(x[fixed.get(i).index()][v], 1);
+        }
+        for (int q = 0; q < patterns.size(); q++) {
+            MPVariable z = solver.makeNumVar(0, Double.POSITIVE_INFINITY, "lane_" + v + "_" + q);
+            lanes.setCoefficient(z, 1);
+            for (int i = 0; i < fixed.size(); i++) {
+                if (patterns.get(q)[i] > 0) {
+                    covers[i].setCoefficient(z, -patterns.get(q)[i]);
+                }
+            }
+        }
     }
 
     /** The bound, or NaN when no MIP solver is at hand or it proved nothing. */
@@ -96,7 +133,9 @@ final class WholeVehicleBound {
                         }
                     }
                     if (narrowest < Double.POSITIVE_INFINITY) {
-                        lanes.setCoefficient(y[v], -Math.floor(t.deckWidthMm() / narrowest + 1e-9) * t.deckLengthMm());
+                        double k = Math.floor(t.deckWidthMm() / narrowest + 1e-9);
+                        lanes.setCoefficient(y[v], -k * t.deckLengthMm());
+                        lanePatterns(solver, classes, set, t, v, k, x, y[v]);
                     }
                 }
             }

@@ -11,14 +11,20 @@ import kitwright.io.KitReader;
 import kitwright.io.VehicleCatalogReader;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.RowLoadPlanner;
-import kitwright.model.Bar;
+import kitwright.cli.PackUpstream;
 import kitwright.model.CrateType;
 import kitwright.model.Joint;
 import kitwright.model.JointBox;
 import kitwright.model.Kit;
+import kitwright.model.NestTolerance;
 import kitwright.model.Section;
 import kitwright.model.VehicleType;
 import kitwright.nesting.Bundle;
+import kitwright.nesting.FitRule;
+import kitwright.nesting.Nester;
+import kitwright.nesting.NestingOptions;
+import kitwright.nesting.NestingProblem;
+import kitwright.nesting.Tube;
 import kitwright.packing.CratePlan;
 import kitwright.packing.LaneCratePacker;
 import kitwright.validate.CratePlanValidator;
@@ -26,7 +32,9 @@ import kitwright.validate.LoadPlanValidator;
 
 /**
  * Crating and loading benchmark (not a unit test): the sample kits and generated kits up to 5,000 pieces, with the
- * shipped crate and vehicle catalogs. Pieces are the kit's bars (no cutting), nested by {@link ChainNesting}.
+ * shipped crate and vehicle catalogs. The sample kits go through the real cutting and nesting stages (as
+ * {@code pack} runs them); the generated kits' pieces (12 marks of random section and length) through the nesting
+ * stage with the worst-case fit rule and a 2 mm clearance.
  * Prints one row per kit: crates against the rounded-up box-volume bound and the mass bound, price against its
  * bound, trip cost against the fleet-cost LP and the whole-vehicle bound, and seconds (crating + loading, median
  * of three runs after a warm-up: wall clock, and CPU time of the calling thread, which CP-SAT with one worker runs
@@ -41,6 +49,7 @@ import kitwright.validate.LoadPlanValidator;
  */
 public final class PackingBenchmark {
     private static final int RUNS = 3;
+    private static final double CLEARANCE_MM = 2.0;
     private static final double STEEL = 7850;
     private static final double ALUMINIUM = 2700;
     private static final double[][] STEEL_SECTIONS = {
@@ -58,12 +67,15 @@ public final class PackingBenchmark {
             Path dir = Path.of("sample-kits", name);
             if (Files.isDirectory(dir)) {
                 Kit kit = KitReader.read(dir);
-                kits.add(new Object[] {name, piecesOf(kit), kit.joints()});
+                int pieces = kit.bars().stream().mapToInt(b -> b.quantity()).sum();
+                kits.add(new Object[] {name, pieces, PackUpstream.STAGES.bundles(kit).bundles(), kit.joints()});
             }
         }
         for (int n : new int[] {500, 1000, 2000, 5000}) {
-            kits.add(new Object[] {"steel-" + n, generated(n, STEEL_SECTIONS, STEEL, n), generatedJoints(n)});
-            kits.add(new Object[] {"alu-" + n, generated(n, ALUMINIUM_SECTIONS, ALUMINIUM, n + 7), generatedJoints(n)});
+            kits.add(new Object[] {"steel-" + n, n, nested(generated(n, STEEL_SECTIONS, "steel", STEEL, n)),
+                generatedJoints(n)});
+            kits.add(new Object[] {"alu-" + n, n, nested(generated(n, ALUMINIUM_SECTIONS, "aluminium", ALUMINIUM,
+                n + 7)), generatedJoints(n)});
         }
         run(kits.get(0), crates, vehicles); // warm-up: native libraries, JIT
         System.out.println("| kit | pieces | bundles | crates | box-volume bound | mass bound | crates / box-volume"
@@ -77,9 +89,9 @@ public final class PackingBenchmark {
 
     @SuppressWarnings("unchecked")
     private static String run(Object[] kit, List<CrateType> crates, List<VehicleType> vehicles) {
-        List<ChainNesting.Piece> pieces = (List<ChainNesting.Piece>) kit[1];
-        List<Joint> joints = (List<Joint>) kit[2];
-        List<Bundle> bundles = ChainNesting.bundles(pieces);
+        int pieces = (Integer) kit[1];
+        List<Bundle> bundles = (List<Bundle>) kit[2];
+        List<Joint> joints = (List<Joint>) kit[3];
         java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
         double[] wall = new double[RUNS];
         double[] cpuTimes = new double[RUNS];
@@ -111,7 +123,7 @@ public final class PackingBenchmark {
         int massBound = plan.bounds().massCrates();
         double price = plan.crates().stream().mapToDouble(c -> priceOf(crates, c.type())).sum();
         return String.format(Locale.ROOT, "| %s | %d | %d | %d | %d | %d | %.3f | %.3f | %.3f | %d | %.3f | %.3f |"
-                + " %.2f | %.2f |", kit[0], pieces.size(), bundles.size(), plan.crates().size(), boxBound, massBound,
+                + " %.2f | %.2f |", kit[0], pieces, bundles.size(), plan.crates().size(), boxBound, massBound,
                 plan.crates().size() / (double) Math.max(1, boxBound),
                 plan.crates().size() / (double) Math.max(1, Math.max(boxBound, massBound)),
                 price / plan.bounds().price(), load.vehicles().size(),
@@ -123,34 +135,33 @@ public final class PackingBenchmark {
         return crates.stream().filter(c -> c.name().equals(type)).findFirst().orElseThrow().price();
     }
 
-    private static List<ChainNesting.Piece> piecesOf(Kit kit) {
-        List<ChainNesting.Piece> pieces = new ArrayList<>();
-        for (Bar bar : kit.bars()) {
-            Section s = kit.section(bar);
-            double mass = kit.barMassKg(bar).orElse(0.0);
-            for (int i = 0; i < bar.quantity(); i++) {
-                pieces.add(new ChainNesting.Piece(bar.mark(), s.outerDiameterMm(), s.wallMm(), bar.lengthMm(), mass));
-            }
-        }
-        return pieces;
-    }
-
-    /** n pieces in 12 marks of random section and length (500 to 6000 mm), fixed seed. */
-    private static List<ChainNesting.Piece> generated(int n, double[][] sections, double density, long seed) {
+    /** n cut pieces in 12 marks of random section and length (500 to 6000 mm), fixed seed. */
+    private static List<Tube> generated(int n, double[][] sections, String material, double density, long seed) {
         Random random = new Random(seed);
+        FitRule rule = new FitRule(NestTolerance.WORST_CASE, CLEARANCE_MM);
         int marks = 12;
-        double[][] mark = new double[marks][];
+        Object[][] mark = new Object[marks][];
         for (int m = 0; m < marks; m++) {
             double[] s = sections[random.nextInt(sections.length)];
-            mark[m] = new double[] {s[0], s[1], 500 + random.nextInt(56) * 100};
+            Section section = new Section(material + " " + s[0] + "x" + s[1], material, s[0], s[1], null,
+                    "steel".equals(material) ? null : 0.4, "steel".equals(material) ? null : 10.0);
+            mark[m] = new Object[] {section, 500.0 + random.nextInt(56) * 100};
         }
-        List<ChainNesting.Piece> pieces = new ArrayList<>();
+        List<Tube> tubes = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            double[] m = mark[i % marks];
-            double perMetre = Math.PI * (m[0] - m[1]) * m[1] * density * 1e-6;
-            pieces.add(new ChainNesting.Piece("M" + (i % marks), m[0], m[1], m[2], perMetre * m[2] / 1000));
+            Section s = (Section) mark[i % marks][0];
+            double length = (Double) mark[i % marks][1];
+            var envelope = rule.envelope(s);
+            tubes.add(new Tube(i, "M" + (i % marks), s.name(), envelope.outerDiameterMm(), envelope.boreMm(), length,
+                    s.massPerMetreKg(density) * length / 1000));
         }
-        return pieces;
+        return tubes;
+    }
+
+    private static List<Bundle> nested(List<Tube> tubes) {
+        NestingProblem problem = new NestingProblem(tubes, CLEARANCE_MM, 10, null);
+        return Nester.run(problem, new FitRule(NestTolerance.WORST_CASE, CLEARANCE_MM), NestingOptions.DEFAULT)
+                .plan().bundles();
     }
 
     private static List<Joint> generatedJoints(int pieces) {

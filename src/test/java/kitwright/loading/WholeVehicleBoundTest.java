@@ -39,4 +39,17 @@ class WholeVehicleBoundTest {
         CrateClass b = new CrateClass(1, 4620, 1120, 840, 2400, true, 1500, 4);
         assertThat(WholeVehicleBound.compute(List.of(a, b), SEMI, COST)).isCloseTo(2000, within(1e-6));
     }
+
+    @Test
+    @DisplayName("lane patterns: 6.44 m and 4.62 m crates fill a 13.6 m lane as 2+0, 1+1 or 0+2 (hand count), so 29 "
+            + "and 17 of them need 23 lanes, 12 semi-trailers, where lengths alone allow 10")
+    void lanePatterns() {
+        List<int[]> patterns = LanePatterns.maximal(new double[] {6440, 4620}, 13_600, 100);
+        assertThat(patterns).extracting(p -> p[0] + "+" + p[1]).containsExactlyInAnyOrder("2+0", "1+1", "0+2");
+        CrateClass a = new CrateClass(0, 6440, 1140, 960, 2900, false, 0, 29);
+        CrateClass b = new CrateClass(1, 4620, 1120, 840, 2400, true, 1500, 17);
+        // lanes: 2 x1 + x2 >= 29 and x2 + 2 x3 >= 17 with x1 + x2 + x3 lanes: at least 23 (23 = 29/2 + 17/2 rounded);
+        // two lanes a semi-trailer: 11.5, so 12 trips (the payload would allow 8, the lengths 265 300 / 27 200 = 9.75)
+        assertThat(WholeVehicleBound.compute(List.of(a, b), SEMI, COST)).isCloseTo(12_000, within(1e-6));
+    }
 }
