@@ -24,7 +24,8 @@ import picocli.CommandLine.Command;
             "kitwright plans material and logistics only. It does not check structural capacity, joints, lifting",
             "or load securing; follow local codes and licensed professionals."
         },
-        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CutCommand.class})
+        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CutCommand.class,
+            NestCommand.class, PackCommand.class, CompareCommand.class})
 public final class KitwrightCommand implements Runnable {
 
     @CommandLine.Spec
@@ -38,6 +39,7 @@ public final class KitwrightCommand implements Runnable {
     /** Builds the command line with kitwright's exit codes and error handling. */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new KitwrightCommand());
+        cl.setUsageHelpWidth(110);
         cl.setExitCodeExceptionMapper(KitwrightCommand::exitCodeOf);
         cl.setExecutionExceptionHandler(KitwrightCommand::handleExecutionException);
         cl.setParameterExceptionHandler((ex, args) -> {

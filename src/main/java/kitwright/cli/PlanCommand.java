@@ -4,13 +4,19 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
-import kitwright.plan.KitSummary;
+import kitwright.plan.PlanProgress;
+import kitwright.plan.PlanResult;
+import kitwright.plan.Planner;
+import kitwright.report.PlanFiles;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -18,20 +24,29 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code kitwright plan KIT_DIR --out DIR}: validates the kit and writes the report folder. The folder is built
- * beside DIR and moved into place when complete, so a failed run leaves DIR as it was.
+ * {@code kitwright plan KIT_DIR --out DIR [--date YYYY-MM-DD]}: the main job. Runs every stage and writes the plan
+ * folder. The folder is built beside DIR and moved into place when complete, so a failed run leaves DIR as it was.
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = {
-            "Validates a kit and writes the plan folder: summary.json (marks, bars, cut length and mass per"
-                    + " section, joints, members per structure, reuse ratio, spares).",
+            "Plans a kit from end to end and writes one folder to open, print and e-mail:",
+            "  report.html        the report: summary, purchase order, saw sheets, bundles, crates, trucks",
+            "  order.csv          stock to buy (and rack offcuts to take), with prices",
+            "  cut-list.csv       the saw sheet: every stock piece, every cut, start positions, offcuts",
+            "  rack-after.csv     the rack for the next job, in the tube catalog's format",
+            "  nests.csv          which tube goes inside which; assembly-order.csv, innermost first",
+            "  packing-lists.csv  per crate: marks and counts, bundles, boxes, gross mass",
+            "  manifests.csv      per vehicle: crates, mass, floor length, centre of gravity",
+            "  plan.json          every stage as data; summary.json the kit summary",
+            "  timing.json        seconds per stage (the only file that changes between identical runs)",
             "",
-            "The folder is written beside DIR and moved into place only when complete. An existing DIR is"
-                    + " replaced only when kitwright wrote it. On invalid input (exit code 2) nothing is written."
+            "Progress goes to stderr. The folder is written beside DIR and moved into place only when",
+            "complete; an existing DIR is replaced only when kitwright wrote it. Exit code 2 on invalid input",
+            "(nothing written), 3 when some part has no feasible plan (the rest is still written)."
         })
 public final class PlanCommand implements Callable<Integer> {
     /** The file holding the kit summary in the plan folder. */
-    public static final String SUMMARY_JSON = "summary.json";
+    public static final String SUMMARY_JSON = PlanFiles.SUMMARY_JSON;
 
     @Parameters(index = "0", paramLabel = "KIT_DIR",
             description = "The kit folder: kit.json (optional), bars.csv, and optionally structures.csv and"
@@ -46,21 +61,59 @@ public final class PlanCommand implements Callable<Integer> {
             description = "Date printed on the report (default: today). Fix it to get byte-identical output.")
     LocalDate date;
 
+    @Option(names = "--spares-from-offcuts",
+            description = "Fill offcuts with spare bars of the section's marks (most-used first), buying nothing"
+                    + " more.")
+    boolean sparesFromOffcuts;
+
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
-        KitSummary summary = KitSummary.of(kit);
+        PrintWriter err = spec.commandLine().getErr();
+        PlanResult result = Planner.run(kit, new Planner.Options(sparesFromOffcuts), progress(err));
+        LocalDate day = date != null ? date : LocalDate.now();
+        Map<String, String> files = PlanFiles.of(result, day);
         try (OutputFolder folder = OutputFolder.create(out)) {
-            folder.write(SUMMARY_JSON, PrettyJson.write(summary));
+            for (Map.Entry<String, String> file : files.entrySet()) {
+                folder.write(file.getKey(), file.getValue());
+            }
+            folder.write("timing.json", PrettyJson.write(timing(result)));
             folder.commit();
         }
+        result.stageSeconds().forEach((stage, s) -> err.printf(Locale.ROOT, "plan: %s took %.2f s%n", stage, s));
+        err.flush();
         PrintWriter stdout = spec.commandLine().getOut();
-        stdout.println("Kit " + summary.kit() + ": " + summary.marks() + " marks, " + summary.bars() + " bars.");
-        stdout.println("Wrote " + out.resolve(SUMMARY_JSON));
+        stdout.print(PlanSummaryText.format(result));
+        stdout.println("Open " + out.resolve(PlanFiles.REPORT_HTML) + " in a browser (it prints to A4).");
         stdout.flush();
-        return ExitCode.OK.code();
+        return result.anyInfeasible() ? ExitCode.NO_FEASIBLE_PLAN.code() : ExitCode.OK.code();
+    }
+
+    private static Map<String, Object> timing(PlanResult result) {
+        Map<String, Object> timing = new LinkedHashMap<>();
+        timing.put("kit", result.kit().name());
+        timing.put("stageSeconds", result.stageSeconds());
+        timing.put("totalSeconds", result.stageSeconds().values().stream().mapToDouble(Double::doubleValue).sum());
+        return timing;
+    }
+
+    private static PlanProgress progress(PrintWriter err) {
+        return new PlanProgress() {
+            @Override
+            public void stage(String stage, String detail) {
+                err.println("plan: " + stage + ": " + detail);
+                err.flush();
+            }
+
+            @Override
+            public void report(String stage, String section, double lowerBound, Double bestValue) {
+                err.printf(Locale.ROOT, "plan: cutting %s: %s, lower bound %.2f, best %s%n", section, stage,
+                        lowerBound, bestValue == null ? "-" : String.format(Locale.ROOT, "%.2f", bestValue));
+                err.flush();
+            }
+        };
     }
 }

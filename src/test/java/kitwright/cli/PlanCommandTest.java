@@ -21,9 +21,12 @@ class PlanCommandTest {
 
         CliRun run = CliRun.of("plan", "sample-kits/cinema-6", "--out", out.toString(), "--date", "2025-06-30");
 
-        assertThat(run.err()).isEmpty();
-        assertThat(run.exitCode()).isEqualTo(ExitCode.OK.code());
-        assertThat(entries(out)).containsExactly(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON);
+        assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
+        assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
+        assertThat(entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
+                "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
+                "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
+        assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(entries(out.getParent())).as("no temporary folder left beside").containsExactly("cinema-6");
         JsonNode summary = PrettyJson.mapper().readTree(out.resolve(PlanCommand.SUMMARY_JSON).toFile());
         assertThat(summary.get("kit").asText()).isEqualTo("cinema-6");

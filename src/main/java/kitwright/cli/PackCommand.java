@@ -1,0 +1,208 @@
+package kitwright.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import kitwright.io.InvalidInputException;
+import kitwright.io.KitReader;
+import kitwright.io.OutputFolder;
+import kitwright.io.Problem;
+import kitwright.loading.LoadPlan;
+import kitwright.loading.Shipping;
+import kitwright.model.Joint;
+import kitwright.model.Kit;
+import kitwright.model.Status;
+import kitwright.nesting.Bundle;
+import kitwright.nesting.NestPlan;
+import kitwright.packing.Crate;
+import kitwright.packing.CratePlan;
+import kitwright.packing.StructureShare;
+import kitwright.report.CrateSectionDrawing;
+import kitwright.report.DeckPlanDrawing;
+import kitwright.report.LogisticsCautions;
+import kitwright.report.LogisticsCsv;
+import kitwright.report.LogisticsJson;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code kitwright pack KIT_DIR [--for STRUCTURE] [--out DIR] [--json FILE]}: bundles into crates, crates onto
+ * vehicles. Prints the crates and trips with their bounds; writes the packing lists, manifests and drawings with
+ * {@code --out}, the JSON with {@code --json}.
+ */
+@Command(name = "pack", mixinStandardHelpOptions = true,
+        description = {
+            "Packs a kit for shipping: joints into joint boxes, bundles and boxes into",
+            "crates from the crate catalog (least total crate price, then fewest",
+            "crates), crates onto vehicles from the vehicle catalog (least total trip",
+            "cost). Prints each count beside its lower bound and the status.",
+            "",
+            "With --out DIR: packing-lists.csv (per crate: type, marks and counts,",
+            "bundles, boxes, gross mass), manifests.csv (per vehicle: crates, mass,",
+            "floor length used, centre of gravity from the front) and drawings/",
+            "(crate cross-sections and deck plans, SVG, to scale). The folder is",
+            "written beside DIR and moved into place when complete.",
+            "With --json FILE: {\"crates\": ..., \"loads\": ...} as in plan.json.",
+            "",
+            "Lifting and load securing are not checked (EN 12195-1; local rules",
+            "decide). Exit codes: 0 ok, 2 invalid input, 3 when an item fits no",
+            "crate or a crate no vehicle."
+        })
+public final class PackCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "KIT_DIR",
+            description = "The kit folder: kit.json (optional, may set jointBox {lengthMm, widthMm, heightMm,"
+                    + " maxMassKg}; default 600 x 400 x 300 mm, 25 kg), bars.csv, optionally structures.csv and"
+                    + " joints.csv; crates.csv and vehicles.csv beside the tube catalog or named in kit.json.")
+    Path kitDir;
+
+    @Option(names = "--for", paramLabel = "STRUCTURE",
+            description = "Pack only what this structure of structures.csv needs: the bundles holding its tubes"
+                    + " (whole bundles; tubes of other marks in them ride along and are listed) and the joints"
+                    + " (all of them, as structures.csv counts bars only). Default: the whole kit.")
+    String structure;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Folder for packing-lists.csv, manifests.csv and drawings/; created, or replaced when"
+                    + " kitwright wrote it before. Default: print only.")
+    Path out;
+
+    @Option(names = "--json", paramLabel = "FILE",
+            description = "Write the crate and load plans as JSON ({\"crates\", \"loads\"}, the plan.json contract)"
+                    + " to FILE. Default: none.")
+    Path json;
+
+    @Spec
+    CommandSpec spec;
+
+    private final PackUpstream upstream;
+
+    public PackCommand() {
+        this(PackUpstream.STAGES);
+    }
+
+    /** A pack command taking its bundles from the given stages (tests, and the plan chain). */
+    public PackCommand(PackUpstream upstream) {
+        this.upstream = upstream;
+    }
+
+    @Override
+    public Integer call() throws InvalidInputException, IOException {
+        PrintWriter stdout = spec.commandLine().getOut();
+        PrintWriter stderr = spec.commandLine().getErr();
+        Kit kit = KitReader.read(kitDir);
+        checkCatalogs(kit);
+        long start = System.nanoTime();
+        stderr.println("pack: cutting and nesting " + kit.bars().stream().mapToInt(b -> b.quantity()).sum()
+                + " bars");
+        stderr.flush();
+        NestPlan nest = upstream.bundles(kit);
+        List<Bundle> bundles = nest.bundles();
+        List<Joint> joints = kit.joints();
+        StructureShare share = null;
+        if (structure != null) {
+            try {
+                share = StructureShare.of(structure, bundles, joints, kit.structures());
+            } catch (IllegalArgumentException e) {
+                throw new InvalidInputException(new Problem(null, 0, "--for", e.getMessage()));
+            }
+            bundles = share.bundles();
+            joints = share.joints();
+        }
+        stderr.printf("pack: crating %d bundles and %d joints%n", bundles.size(),
+                joints.stream().mapToInt(Joint::quantity).sum());
+        stderr.flush();
+        Shipping.Shipment shipment = Shipping.plan(kit, bundles, joints);
+        CratePlan crates = shipment.crates();
+        LoadPlan loads = shipment.loads();
+        if (crates.status() == Status.INFEASIBLE) {
+            stderr.println("pack: no crate plan: " + crates.reason());
+            stderr.flush();
+            return ExitCode.NO_FEASIBLE_PLAN.code();
+        }
+        if (loads.status() == Status.INFEASIBLE) {
+            stderr.println("pack: no load plan: " + loads.reason());
+            stderr.flush();
+            return ExitCode.NO_FEASIBLE_PLAN.code();
+        }
+        stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
+                (System.nanoTime() - start) / 1e9);
+        stderr.flush();
+        if (out != null) {
+            writeFolder(crates, loads, nest.bundles());
+        }
+        if (json != null) {
+            writeAtomically(json, LogisticsJson.write(crates, loads));
+        }
+        stdout.print(PackSummary.text(kit.name(), share, crates, loads, kit.crates()));
+        LogisticsCautions.all().forEach(c -> stdout.println("Caution, " + c.heading().toLowerCase(java.util.Locale.ROOT)
+                + ": " + c.text()));
+        if (out != null) {
+            stdout.println("Wrote " + out.resolve(LogisticsCsv.PACKING_LISTS) + ", " + LogisticsCsv.MANIFESTS
+                    + " and drawings/");
+        }
+        if (json != null) {
+            stdout.println("Wrote " + json);
+        }
+        stdout.flush();
+        return ExitCode.OK.code();
+    }
+
+    private void checkCatalogs(Kit kit) throws InvalidInputException {
+        Path kitJson = kitDir.resolve(KitReader.KIT_JSON);
+        if (kit.crates().isEmpty()) {
+            throw new InvalidInputException(Problem.ofFile(kitJson, "no crate catalog for this kit (expected"
+                    + " crates.csv beside the tube catalog, or crateCatalog in kit.json)"));
+        }
+        if (kit.vehicles().isEmpty()) {
+            throw new InvalidInputException(Problem.ofFile(kitJson, "no vehicle catalog for this kit (expected"
+                    + " vehicles.csv beside the tube catalog, or vehicleCatalog in kit.json)"));
+        }
+    }
+
+    private void writeFolder(CratePlan crates, LoadPlan loads, List<Bundle> bundles)
+            throws InvalidInputException, IOException {
+        Map<String, Crate> byId = crates.crates().stream().collect(Collectors.toMap(Crate::id, Function.identity()));
+        try (OutputFolder folder = OutputFolder.create(out)) {
+            folder.write(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(crates, bundles));
+            folder.write(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(loads));
+            for (Crate c : crates.crates()) {
+                folder.write("drawings/crate-" + c.id() + ".svg", CrateSectionDrawing.draw("crate-" + c.id(), c)
+                        + "\n");
+            }
+            for (var v : loads.vehicles()) {
+                folder.write("drawings/deck-" + v.id() + ".svg", DeckPlanDrawing.draw("deck-" + v.id(), v, byId)
+                        + "\n");
+            }
+            folder.commit();
+        }
+    }
+
+    /** Writes a file beside its target and moves it into place, so a failed run leaves no half file. */
+    private static void writeAtomically(Path file, String text) throws IOException {
+        Path absolute = file.toAbsolutePath();
+        Files.createDirectories(absolute.getParent());
+        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".partial");
+        try {
+            Files.writeString(temporary, text, StandardCharsets.UTF_8);
+            try {
+                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temporary);
+        }
+    }
+}

@@ -1,0 +1,82 @@
+package kitwright.cli;
+
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import kitwright.loading.LoadPlan;
+import kitwright.loading.VehicleLoad;
+import kitwright.model.CrateType;
+import kitwright.packing.Crate;
+import kitwright.packing.CratePlan;
+import kitwright.packing.StructureShare;
+import kitwright.report.CrateContents;
+import kitwright.report.ShopFormat;
+
+/** The text {@code kitwright pack} prints: crates and trips, each beside its lower bound and status. */
+final class PackSummary {
+    private PackSummary() {
+    }
+
+    static String text(String kit, StructureShare share, CratePlan crates, LoadPlan loads, List<CrateType> catalog) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Kit ").append(kit);
+        if (share != null) {
+            sb.append(", packed for structure '").append(share.structure()).append("': the bundles holding its tubes");
+            if (!share.extraTubes().isEmpty()) {
+                sb.append(" (riding along beyond its counts: ").append(CrateContents.text(share.extraTubes()))
+                        .append(')');
+            }
+            sb.append(share.allJoints() ? "; all the kit's joints (structures.csv counts bars only)" : "");
+        }
+        sb.append(".\n");
+        Map<String, Integer> byType = new TreeMap<>();
+        crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
+        sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");
+        Double price = price(crates, catalog);
+        if (price != null) {
+            sb.append(", price ").append(ShopFormat.money(price));
+        }
+        sb.append("; lower bound ").append(crates.lowerBound()).append(crates.lowerBound() == 1 ? " crate" : " crates");
+        if (crates.bounds().price() != null) {
+            sb.append(", price ").append(ShopFormat.money(crates.bounds().price()));
+        }
+        sb.append("; ").append(crates.status()).append(", gap ").append(ShopFormat.percent(crates.bounds().gap()))
+                .append(" %.\n");
+        sb.append("Joint boxes: ").append(crates.boxes().size()).append(".\n");
+        Map<String, Integer> byVehicle = new TreeMap<>();
+        loads.vehicles().forEach(v -> byVehicle.merge(v.type(), 1, Integer::sum));
+        sb.append("Trips: ").append(loads.vehicles().size())
+                .append(byVehicle.isEmpty() ? "" : " (" + counts(byVehicle) + ")")
+                .append(", cost ").append(ShopFormat.money(loads.tripCost()))
+                .append("; lower bound ").append(ShopFormat.money(loads.lowerBound()))
+                .append(" (fleet LP ").append(ShopFormat.money(loads.bounds().fleetRelaxation())).append("); ")
+                .append(loads.status()).append(", gap ").append(ShopFormat.percent(loads.bounds().gap()))
+                .append(" %.\n");
+        for (VehicleLoad v : loads.vehicles()) {
+            sb.append("  ").append(v.id()).append(' ').append(v.type()).append(": ").append(v.crates().size())
+                    .append(" crates, ").append(ShopFormat.kg(v.massKg())).append(" kg of ")
+                    .append(ShopFormat.kg(v.payloadKg())).append(" kg, floor ").append(ShopFormat.mm(v.floorLengthMm()))
+                    .append(" of ").append(ShopFormat.mm(v.deckLengthMm())).append(" mm, centre of gravity ")
+                    .append(ShopFormat.mm(v.centreOfGravityMm())).append(" mm from the front.\n");
+        }
+        return sb.toString();
+    }
+
+    private static String counts(Map<String, Integer> counts) {
+        StringBuilder sb = new StringBuilder();
+        counts.forEach((k, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(k).append(" \u00D7 ").append(n));
+        return sb.toString();
+    }
+
+    private static Double price(CratePlan plan, List<CrateType> catalog) {
+        double sum = 0;
+        for (Crate c : plan.crates()) {
+            CrateType t = catalog.stream().filter(x -> x.name().equals(c.type())).findFirst().orElse(null);
+            if (t == null || t.price() == null) {
+                return null;
+            }
+            sum += t.price();
+        }
+        return sum;
+    }
+}

@@ -1,0 +1,61 @@
+package kitwright.compare;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/**
+ * Writes {@code compare.csv}: a header row with the compare.json keys, then one row per option in the given order.
+ * Unknown figures are empty cells; numbers in plain notation with a point as decimal separator (RFC 4180 CSV as
+ * commons-csv writes it, CRLF line ends).
+ */
+public final class CompareCsv {
+    /** The header: the compare.json keys in their order. */
+    public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
+            "stockLengthMm", "cost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
+            "bundles", "crates", "vehicles", "tripCost", "status");
+
+    private CompareCsv() {
+    }
+
+    public static void write(List<OptionSummary> options, Writer out) throws IOException {
+        CSVFormat format = CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get();
+        try (CSVPrinter printer = new CSVPrinter(out, format)) {
+            for (OptionSummary o : options) {
+                printer.printRecord(row(o));
+            }
+        }
+    }
+
+    private static List<String> row(OptionSummary o) {
+        List<String> cells = new ArrayList<>(HEADER.size());
+        cells.add(o.kit());
+        cells.add(Integer.toString(o.marks()));
+        cells.add(Integer.toString(o.bars()));
+        cells.add(Integer.toString(o.members()));
+        cells.add(number(o.reuseRatio()));
+        cells.add(Integer.toString(o.stockPieces()));
+        cells.add(number(o.stockLengthMm()));
+        cells.add(number(o.cost()));
+        cells.add(number(o.offcutPct()));
+        cells.add(number(o.scrapPct()));
+        cells.add(number(o.remnantPct()));
+        cells.add(number(o.kitMassKg()));
+        cells.add(number(o.boughtMassKg()));
+        cells.add(number(o.co2eKg()));
+        cells.add(o.bundles() == null ? "" : o.bundles().toString());
+        cells.add(o.crates() == null ? "" : o.crates().toString());
+        cells.add(o.vehicles() == null ? "" : o.vehicles().toString());
+        cells.add(number(o.tripCost()));
+        cells.add(o.status().name());
+        return cells;
+    }
+
+    private static String number(Double value) {
+        return value == null ? "" : BigDecimal.valueOf(value).toPlainString();
+    }
+}

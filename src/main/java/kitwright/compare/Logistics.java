@@ -1,0 +1,15 @@
+package kitwright.compare;
+
+/**
+ * Shipping figures of one option, from the nesting, crating and loading stages; each is null when that stage did
+ * not run or found no plan.
+ *
+ * @param bundles  nested bundles (handling units)
+ * @param crates   crates
+ * @param vehicles vehicles or containers loaded
+ * @param tripCost cost of those trips, in the vehicle catalog's currency
+ */
+public record Logistics(Integer bundles, Integer crates, Integer vehicles, Double tripCost) {
+    /** No shipping figures known. */
+    public static final Logistics UNKNOWN = new Logistics(null, null, null, null);
+}

@@ -1,0 +1,32 @@
+package kitwright.loading;
+
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * A loaded deck of one vehicle type as a reusable pattern.
+ *
+ * @param vehicleType   index into the vehicle catalog
+ * @param counts        crates per crate class
+ * @param slots         crate positions, stack by stack from the bottom up
+ * @param massKg        gross mass of the crates
+ * @param floorLengthMm from the front of the deck to the rear face of the last crate
+ */
+record DeckLayout(int vehicleType, int[] counts, List<Slot> slots, double massKg, double floorLengthMm) {
+
+    /** One crate's place: its class, its outer box corner, orientation, and its stack and level (0 = floor). */
+    record Slot(int crateClass, double x, double y, double z, boolean rotated, int stack, int level) {
+    }
+
+    DeckLayout {
+        slots = List.copyOf(slots);
+    }
+
+    boolean isEmpty() {
+        return slots.isEmpty();
+    }
+
+    String key() {
+        return vehicleType + ":" + Arrays.toString(counts);
+    }
+}

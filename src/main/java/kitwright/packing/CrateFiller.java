@@ -1,0 +1,212 @@
+package kitwright.packing;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import kitwright.model.CrateType;
+
+/**
+ * Fills one crate of a given type from the items on offer, building its layout from the floor up.
+ *
+ * <ol>
+ *   <li>Bundles are offered largest diameter first, then longest first, up to what the crate could hold by cells,
+ *   length and mass.</li>
+ *   <li>{@link LaneBuilder} puts them into lanes along the crate length by best-fit decreasing; a lane's cell is
+ *   its first (largest) bundle's diameter, thinner bundles fill its far end.</li>
+ *   <li>Lanes go into the cross-section in row groups, largest cells first. A group has one cell diameter and the
+ *   better of {@link RowPattern#SQUARE} and {@link RowPattern#STAGGERED} for the lanes it is to hold (fewest rows
+ *   for all of them, or most lanes when they do not all fit); lanes at least {@value #MERGE} of the group's cell
+ *   join it, thinner ones start a group on top or take a free cell left in a row below. A lane that would pass
+ *   the crate's net capacity (max gross - tare) is cut short.</li>
+ *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
+ *   box orientation that holds most. When both bundles and boxes are on offer, a second layout puts the boxes
+ *   first, in as few full tiers on the floor as hold them, with the lanes above; the caller chooses.</li>
+ * </ol>
+ * Guarantee: every item lies inside the inner walls, circles of bundles that share a stretch of length do not
+ * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, and the contents' mass is within
+ * the net capacity. Not a proof of the best filling: a constructive heuristic, fast enough to be called for every
+ * crate type at every step of the crate choice.
+ */
+final class CrateFiller {
+    /** Lanes at least this fraction of a group's cell diameter join the group rather than start a new one. */
+    static final double MERGE = 0.9;
+    private static final double EPS = 1e-6;
+
+    /**
+     * The layouts of one crate of {@code crate} (catalog index {@code crateIndex}) from {@code available}: lanes
+     * first with boxes in the space left; and, when both bundles and boxes are on offer, the boxes' floor tiers
+     * first with lanes above. The caller keeps the one that suits it.
+     */
+    List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
+        CrateLayout lanesFirst = build(crateIndex, crate, types, available, false);
+        boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
+        boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
+        if (!boxes || !bundles) {
+            return List.of(lanesFirst);
+        }
+        return List.of(lanesFirst, build(crateIndex, crate, types, available, true));
+    }
+
+    /** The lanes-first layout (see {@link #fills}). */
+    CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
+        return build(crateIndex, crate, types, available, false);
+    }
+
+    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available,
+                              boolean boxesFirst) {
+        double length = crate.innerLengthMm();
+        double width = crate.innerWidthMm();
+        double height = crate.innerHeightMm();
+        double net = crate.maxGrossKg() - crate.tareKg();
+        int[] counts = new int[types.size()];
+        List<CrateLayout.Slot> slots = new ArrayList<>();
+        double[] mass = {0};
+        int[] left = available.clone();
+        double floor = boxesFirst ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
+        List<LaneBuilder.Lane> lanes = new LaneBuilder().build(offeredBundles(crate, types, left, net - mass[0]),
+                length);
+        double[] used = placeLanes(lanes, width, floor, height, net, mass, counts, slots);
+        placeBoxes(crate, types, left, net, floor, used[0], used[1], mass, counts, slots);
+        return new CrateLayout(crateIndex, counts, slots, mass[0]);
+    }
+
+    /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
+    private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
+                                     int[] counts, List<CrateLayout.Slot> slots) {
+        List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
+        ItemType box = boxes.get(0);
+        double tier = Math.min(box.lengthMm(), Math.min(box.widthMm(), box.heightMm()));
+        int tiers = 1;
+        while ((tiers + 1) * tier <= crate.innerHeightMm() + EPS
+                && BoxGrid.capacity(crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, box) < wanted) {
+            tiers++;
+        }
+        int before = slots.size();
+        BoxGrid.fill(0, 0, 0, crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, boxes, left, net, mass,
+                counts, slots);
+        double top = 0;
+        for (int k = before; k < slots.size(); k++) {
+            top = Math.max(top, slots.get(k).z() + slots.get(k).height());
+        }
+        return top;
+    }
+
+    /** Bundles offered to this crate, largest diameter and longest first, bounded by cells, length and mass. */
+    private static List<ItemType> offeredBundles(CrateType crate, List<ItemType> types, int[] available, double net) {
+        double length = crate.innerLengthMm();
+        double width = crate.innerWidthMm();
+        double height = crate.innerHeightMm();
+        List<ItemType> bundles = types.stream()
+                .filter(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0)
+                .filter(t -> t.lengthMm() <= length + EPS && t.diameterMm() <= Math.min(width, height) + EPS)
+                .sorted(Comparator.comparingDouble(ItemType::diameterMm).reversed()
+                        .thenComparing(Comparator.comparingDouble(ItemType::lengthMm).reversed())
+                        .thenComparingInt(ItemType::index))
+                .toList();
+        double volumeCap = length * width * height;
+        double volume = 0;
+        double mass = 0;
+        List<ItemType> offered = new ArrayList<>();
+        for (ItemType t : bundles) {
+            double d = t.diameterMm();
+            long cells = Math.max(RowPattern.SQUARE.capacity(width, height, d),
+                    RowPattern.STAGGERED.capacity(width, height, d));
+            long cap = Math.min(available[t.index()], cells * RowPattern.floor(length / t.lengthMm()));
+            for (long k = 0; k < cap && volume <= volumeCap; k++) {
+                if (mass + t.massKg() > net + EPS) {
+                    break;
+                }
+                offered.add(t);
+                mass += t.massKg();
+                volume += t.lengthMm() * d * d * RowPattern.ROW_PITCH;
+            }
+        }
+        return offered;
+    }
+
+    /**
+     * Places lanes into row groups; returns {end of the longest lane, top of the rows}.
+     */
+    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double floor, double height,
+                                       double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
+        double base = floor;
+        RowGroup current = null;
+        List<RowGroup.Cell> free = new ArrayList<>();
+        double endX = 0;
+        for (int k = 0; k < lanes.size(); k++) {
+            LaneBuilder.Lane lane = lanes.get(k);
+            double d = lane.cellMm();
+            if (mass[0] + lane.lightestKg() > net + EPS) {
+                continue;
+            }
+            RowGroup.Cell cell = null;
+            if (current != null && current.hasRoomInOpenRow()) {
+                cell = current.next();
+            } else if (current != null && d >= MERGE * current.d - EPS && current.canOpenRow()) {
+                cell = current.next();
+            } else {
+                cell = takeFree(free, d);
+                if (cell == null) {
+                    if (current != null) {
+                        base += current.heightUsed();
+                        free.addAll(current.unusedInOpenRows());
+                        current = null;
+                    }
+                    if (height - base + EPS >= d) {
+                        current = RowGroup.open(lanes, k, width, height - base, base);
+                        cell = current.next();
+                    }
+                }
+            }
+            if (cell == null) {
+                continue;
+            }
+            double x = 0;
+            for (ItemType t : lane.items()) {
+                if (mass[0] + t.massKg() > net + EPS) {
+                    continue;
+                }
+                mass[0] += t.massKg();
+                counts[t.index()]++;
+                double r = t.diameterMm() / 2;
+                slots.add(new CrateLayout.Slot(t.index(), x, cell.y() - r, cell.z() - r, t.lengthMm(),
+                        t.diameterMm(), t.diameterMm()));
+                x += t.lengthMm();
+            }
+            endX = Math.max(endX, x);
+        }
+        double top = base + (current == null ? 0 : current.heightUsed());
+        return new double[] {endX, top};
+    }
+
+    /** The free cell with the smallest diameter that takes a lane of cell d, removed from the list. */
+    private static RowGroup.Cell takeFree(List<RowGroup.Cell> free, double d) {
+        int best = -1;
+        for (int i = 0; i < free.size(); i++) {
+            if (free.get(i).d() + EPS >= d && (best < 0 || free.get(i).d() < free.get(best).d())) {
+                best = i;
+            }
+        }
+        return best < 0 ? null : free.remove(best);
+    }
+
+    private static void placeBoxes(CrateType crate, List<ItemType> types, int[] left, double net, double floor,
+                                   double endX, double top, double[] mass, int[] counts,
+                                   List<CrateLayout.Slot> slots) {
+        List<ItemType> boxes = types.stream()
+                .filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        if (boxes.isEmpty()) {
+            return;
+        }
+        double length = crate.innerLengthMm();
+        double width = crate.innerWidthMm();
+        double height = crate.innerHeightMm();
+        // the end of the crate behind the longest lane, full width, from the floor tiers up
+        BoxGrid.fill(endX, 0, floor, length - endX, width, height - floor, boxes, left, net, mass, counts, slots);
+        // above the top row of lanes, as long as the longest lane
+        if (endX > 0) {
+            BoxGrid.fill(0, 0, top, endX, width, height - top, boxes, left, net, mass, counts, slots);
+        }
+    }
+}

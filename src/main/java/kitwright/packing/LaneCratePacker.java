@@ -1,0 +1,207 @@
+package kitwright.packing;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import kitwright.model.CrateType;
+import kitwright.model.Joint;
+import kitwright.model.JointBox;
+import kitwright.model.Status;
+import kitwright.nesting.Bundle;
+
+/**
+ * Crating by lanes and rows: joints into boxes ({@link ShelfJointBoxer}), then bundles and boxes into crates
+ * ({@link CrateFiller} builds each crate, {@link CrateChoice} picks the crate mix of least total price, then fewest
+ * crates). Without prices on every crate type the count alone is minimised. Surplus places of the chosen patterns
+ * are left empty, and each crate then moves to the cheapest type that still holds exactly its contents.
+ *
+ * <p>Status: OPTIMAL when the count meets the proven count bound and the price meets the price bound
+ * ({@link CrateLowerBounds}); else FEASIBLE with the gap. INFEASIBLE when an item fits no crate type, with the
+ * reason. Deterministic: stable ordering, one CP-SAT worker, a deterministic work limit.
+ */
+public final class LaneCratePacker implements CratePacker {
+    private static final double EPS = 1e-6;
+
+    /**
+     * Solver limits.
+     *
+     * @param deterministicTime CP-SAT deterministic work limit for the crate mix
+     * @param safetySeconds     wall-clock safety net per solver call
+     * @param pricingRounds     column generation rounds
+     */
+    public record Limits(double deterministicTime, double safetySeconds, int pricingRounds) {
+        public static final Limits DEFAULT = new Limits(1.0, 10.0, 20);
+    }
+
+    private final Limits limits;
+    private final JointBoxer boxer = new ShelfJointBoxer();
+    private final CrateFiller filler = new CrateFiller();
+
+    public LaneCratePacker() {
+        this(Limits.DEFAULT);
+    }
+
+    public LaneCratePacker(Limits limits) {
+        this.limits = limits;
+    }
+
+    @Override
+    public CratePlan pack(List<Bundle> bundles, List<Joint> joints, List<CrateType> crates, JointBox jointBox) {
+        List<JointBoxLoad> boxes;
+        try {
+            boxes = boxer.box(joints, jointBox == null ? JointBox.DEFAULT : jointBox);
+        } catch (IllegalArgumentException e) {
+            return CratePlan.infeasible(e.getMessage());
+        }
+        ItemTypes items = ItemTypes.of(bundles, boxes);
+        if (items.isEmpty()) {
+            return new CratePlan(Status.OPTIMAL, 0, List.of(), boxes, CrateLowerBounds.compute(List.of(), crates,
+                    0, null), null);
+        }
+        if (crates.isEmpty()) {
+            return CratePlan.infeasible("the crate catalog is empty, so nothing can be crated");
+        }
+        String unfit = unfit(items, crates);
+        if (unfit != null) {
+            return CratePlan.infeasible(unfit);
+        }
+        boolean priced = crates.stream().allMatch(c -> c.price() != null);
+        double[] cost = crates.stream().mapToDouble(c -> priced ? c.price() : 1.0).toArray();
+        PatternCover cover = new PatternCover(limits.deterministicTime(), limits.safetySeconds());
+        List<CrateLayout> layouts = new CrateChoice(cover, limits.pricingRounds())
+                .choose(crates, cost, items.types());
+        if (layouts.isEmpty()) {
+            return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
+        }
+        layouts = downsize(dropSurplus(layouts, items.types()), crates, cost, items.types());
+        List<Crate> result = realise(layouts, crates, items);
+        Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
+        CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);
+        boolean optimal = result.size() <= bounds.crates()
+                && (price == null || price <= bounds.price() + 1e-6 * Math.max(1, price));
+        return new CratePlan(optimal ? Status.OPTIMAL : Status.FEASIBLE, bounds.crates(), result, boxes, bounds,
+                null);
+    }
+
+    /** The first item no crate type can take, as a reason; null when every item fits somewhere. */
+    private static String unfit(ItemTypes items, List<CrateType> crates) {
+        for (ItemType t : items.types()) {
+            boolean fits = crates.stream().anyMatch(c -> fits(t, c));
+            if (!fits) {
+                String ref = items.refs().get(t.index()).get(0);
+                String what = t.kind() == ItemKind.BUNDLE
+                        ? String.format(Locale.ROOT, "bundle %s (%.0f mm long, %.1f mm across, %.1f kg)", ref,
+                                t.lengthMm(), t.diameterMm(), t.massKg())
+                        : String.format(Locale.ROOT, "joint box %s (%.0f x %.0f x %.0f mm, %.1f kg)", ref,
+                                t.lengthMm(), t.widthMm(), t.heightMm(), t.massKg());
+                return what + " fits no crate type of the catalog (inner size or max gross - tare)";
+            }
+        }
+        return null;
+    }
+
+    static boolean fits(ItemType t, CrateType c) {
+        if (t.massKg() > c.maxGrossKg() - c.tareKg() + EPS) {
+            return false;
+        }
+        double[] inner = {c.innerLengthMm(), c.innerWidthMm(), c.innerHeightMm()};
+        if (t.kind() == ItemKind.BUNDLE) {
+            return t.lengthMm() <= inner[0] + EPS && t.diameterMm() <= Math.min(inner[1], inner[2]) + EPS;
+        }
+        double[] box = {t.lengthMm(), t.widthMm(), t.heightMm()};
+        java.util.Arrays.sort(box);
+        double[] room = inner.clone();
+        java.util.Arrays.sort(room);
+        return box[0] <= room[0] + EPS && box[1] <= room[1] + EPS && box[2] <= room[2] + EPS;
+    }
+
+    /** Leaves empty the places beyond each item type's demand, from the last crates back. */
+    private static List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types) {
+        int[] surplus = new int[types.size()];
+        for (CrateLayout l : layouts) {
+            for (int i = 0; i < surplus.length; i++) {
+                surplus[i] += l.counts()[i];
+            }
+        }
+        for (ItemType t : types) {
+            surplus[t.index()] -= t.demand();
+        }
+        List<CrateLayout> result = new ArrayList<>(layouts);
+        for (int k = result.size() - 1; k >= 0; k--) {
+            CrateLayout l = result.get(k);
+            List<CrateLayout.Slot> kept = new ArrayList<>(l.slots());
+            boolean changed = false;
+            for (int s = kept.size() - 1; s >= 0; s--) {
+                int type = kept.get(s).itemType();
+                if (surplus[type] > 0) {
+                    surplus[type]--;
+                    kept.remove(s);
+                    changed = true;
+                }
+            }
+            if (changed) {
+                result.set(k, relayout(l.crateType(), kept, types));
+            }
+        }
+        result.removeIf(CrateLayout::isEmpty);
+        return result;
+    }
+
+    private static CrateLayout relayout(int crateType, List<CrateLayout.Slot> slots, List<ItemType> types) {
+        int[] counts = new int[types.size()];
+        double mass = 0;
+        for (CrateLayout.Slot s : slots) {
+            counts[s.itemType()]++;
+            mass += types.get(s.itemType()).massKg();
+        }
+        return new CrateLayout(crateType, counts, slots, mass);
+    }
+
+    /** Moves each crate's contents into the cheapest crate type that holds all of them. */
+    private List<CrateLayout> downsize(List<CrateLayout> layouts, List<CrateType> crates, double[] cost,
+                                       List<ItemType> types) {
+        List<Integer> byCost = new ArrayList<>();
+        for (int t = 0; t < crates.size(); t++) {
+            byCost.add(t);
+        }
+        byCost.sort(Comparator.<Integer>comparingDouble(t -> cost[t]).thenComparingInt(t -> t));
+        List<CrateLayout> result = new ArrayList<>();
+        for (CrateLayout l : layouts) {
+            CrateLayout kept = l;
+            for (int t : byCost) {
+                if (cost[t] >= cost[l.crateType()] - EPS) {
+                    break;
+                }
+                for (CrateLayout moved : filler.fills(t, crates.get(t), types, l.counts())) {
+                    if (kept == l && java.util.Arrays.equals(moved.counts(), l.counts())) {
+                        kept = moved;
+                    }
+                }
+                if (kept != l) {
+                    break;
+                }
+            }
+            result.add(kept);
+        }
+        result.sort(Comparator.comparingInt(CrateLayout::crateType));
+        return result;
+    }
+
+    /** Concrete crates: each place takes the next item of its type, in input order. */
+    private static List<Crate> realise(List<CrateLayout> layouts, List<CrateType> crates, ItemTypes items) {
+        int[] next = new int[items.types().size()];
+        List<Crate> result = new ArrayList<>();
+        for (CrateLayout l : layouts) {
+            List<CrateItem> placed = new ArrayList<>();
+            for (CrateLayout.Slot s : l.slots()) {
+                ItemType t = items.types().get(s.itemType());
+                String ref = items.refs().get(t.index()).get(next[t.index()]++);
+                placed.add(new CrateItem(t.kind(), ref, s.x(), s.y(), s.z(), s.length(), s.width(), s.height(),
+                        t.massKg()));
+            }
+            result.add(Crate.of("C" + (result.size() + 1), crates.get(l.crateType()), placed));
+        }
+        return result;
+    }
+}

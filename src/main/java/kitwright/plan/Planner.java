@@ -1,0 +1,67 @@
+package kitwright.plan;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Supplier;
+import kitwright.cutting.CutPlan;
+import kitwright.loading.LoadPlan;
+import kitwright.loading.Shipping;
+import kitwright.model.Kit;
+import kitwright.nesting.NestResult;
+import kitwright.nesting.Nester;
+import kitwright.nesting.NestingOptions;
+import kitwright.packing.CratePlan;
+import kitwright.spares.SparesStage;
+
+/**
+ * The whole chain for one kit, as one pure function: cutting, then nesting of every cut piece, then crating of
+ * the bundles and joint boxes and loading of the crates onto vehicles. Each stage sees only the records of the
+ * stage before it. Deterministic: the stages use one solver worker and work limits, so the plan does not depend
+ * on machine speed; only {@link PlanResult#stageSeconds()} does.
+ */
+public final class Planner {
+    private Planner() {
+    }
+
+    /** Options of a run: offcuts filled with spare bars (cut --spares-from-offcuts), nothing more bought. */
+    public record Options(boolean sparesFromOffcuts) {
+        public static final Options DEFAULT = new Options(false);
+    }
+
+    public static PlanResult run(Kit kit, Options options, PlanProgress progress) {
+        Map<String, Double> seconds = new LinkedHashMap<>();
+        KitSummary summary = KitSummary.of(kit);
+
+        progress.stage("cutting", kit.usedSections().size() + " sections");
+        CutPlan cutting = timed(seconds, "cutting", () -> SparesStage.cut(kit, options.sparesFromOffcuts(), null,
+                progress).plan());
+
+        progress.stage("nesting", "every cut piece into bundles");
+        NestResult nesting = timed(seconds, "nesting", () -> Nester.run(kit, cutting,
+                NestingOptions.DEFAULT.withWallSeconds(kit.settings().timeLimitSeconds())));
+
+        CratePlan crates = null;
+        LoadPlan loads = null;
+        if (!kit.crates().isEmpty() && !kit.vehicles().isEmpty()) {
+            progress.stage("crating and loading", nesting.plan().bundles().size() + " bundles");
+            Shipping.Shipment shipment = timed(seconds, "crating and loading",
+                    () -> Shipping.plan(kit, nesting.plan().bundles(), kit.joints()));
+            crates = shipment.crates();
+            loads = shipment.loads();
+        } else {
+            progress.stage("crating and loading", "skipped: no crate or vehicle catalog");
+        }
+        return new PlanResult(kit, summary, cutting, nesting, crates, loads, seconds);
+    }
+
+    private static <T> T timed(Map<String, Double> seconds, String stage, Supplier<T> work) {
+        long start = System.nanoTime();
+        T value = work.get();
+        seconds.put(stage, (System.nanoTime() - start) / 1e9);
+        return value;
+    }
+
+    /** Stage names in chain order, as they appear in timing.json. */
+    public static final List<String> STAGES = List.of("cutting", "nesting", "crating and loading");
+}

@@ -1,0 +1,87 @@
+package kitwright.report;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.util.Map;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import kitwright.loading.LoadPlan;
+import kitwright.loading.PlacedCrate;
+import kitwright.loading.VehicleLoad;
+import kitwright.nesting.Bundle;
+import kitwright.packing.Crate;
+import kitwright.packing.CratePlan;
+import kitwright.packing.ItemKind;
+import kitwright.packing.JointBoxLoad;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+
+/**
+ * The logistics sheets as CSV (UTF-8, header row, comma-separated, "\n" line ends, numbers with a point and no
+ * grouping so a spreadsheet reads them as numbers):
+ * <ul>
+ *   <li>{@code packing-lists.csv}, one row per crate: {@code crate,type,marks,bundles,bundle_ids,boxes,box_ids,
+ *   gross_kg,max_gross_kg} (marks as "A1 × 12; N90 × 40", tubes of the bundles and joints of the boxes);</li>
+ *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
+ *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
+ *   to the rear face of the last crate; centre of gravity from the front).</li>
+ * </ul>
+ * Pure functions returning the file's text.
+ */
+public final class LogisticsCsv {
+    public static final String PACKING_LISTS = "packing-lists.csv";
+    public static final String MANIFESTS = "manifests.csv";
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+
+    private LogisticsCsv() {
+    }
+
+    public static String packingLists(CratePlan plan, Iterable<Bundle> bundles) {
+        Map<String, Bundle> byId = new java.util.HashMap<>();
+        bundles.forEach(b -> byId.put(b.id(), b));
+        Map<String, JointBoxLoad> boxes = plan.boxes().stream()
+                .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
+        StringWriter out = new StringWriter();
+        try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
+            csv.printRecord("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids", "gross_kg",
+                    "max_gross_kg");
+            for (Crate c : plan.crates()) {
+                csv.printRecord(c.id(), c.type(), CrateContents.text(CrateContents.marks(c, byId, boxes)),
+                        c.items(ItemKind.BUNDLE).size(), CrateContents.refs(c, ItemKind.BUNDLE),
+                        c.items(ItemKind.BOX).size(), CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1),
+                        number(c.maxGrossKg(), 1));
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        return out.toString();
+    }
+
+    public static String manifests(LoadPlan plan) {
+        StringWriter out = new StringWriter();
+        try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
+            csv.printRecord("vehicle", "type", "crates", "crate_ids", "mass_kg", "payload_kg", "floor_length_mm",
+                    "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip");
+            for (VehicleLoad v : plan.vehicles()) {
+                csv.printRecord(v.id(), v.type(), v.crates().size(),
+                        v.crates().stream().map(PlacedCrate::ref).collect(Collectors.joining(" ")),
+                        number(v.massKg(), 1), number(v.payloadKg(), 1), number(v.floorLengthMm(), 0),
+                        number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2));
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        return out.toString();
+    }
+
+    /** Plain decimal, rounded half up to {@code places}, without trailing zeros: 1234.50 gives "1234.5". */
+    static String number(double value, int places) {
+        BigDecimal d = BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_UP).stripTrailingZeros();
+        if (d.signum() == 0) {
+            return "0";
+        }
+        return d.scale() < 0 ? d.setScale(0).toPlainString() : d.toPlainString();
+    }
+}

@@ -1,0 +1,112 @@
+package kitwright.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import kitwright.loading.LoadPlan;
+import kitwright.loading.VehicleLoad;
+import kitwright.model.CrateType;
+import kitwright.model.Status;
+import kitwright.nesting.Bundle;
+import kitwright.packing.Crate;
+import kitwright.packing.CrateItem;
+import kitwright.packing.CratePlan;
+import kitwright.packing.ItemKind;
+import kitwright.packing.JointBoxLoad;
+
+/**
+ * The report block for crating and loading ("crates-and-trucks"): figures with their bounds and status, the
+ * packing lists, one cross-section per distinct crate layout (crates packed alike share it, their ids listed), the
+ * manifests and one deck plan per vehicle. Hand it to {@code ReportModel.Builder#section} and the cautions of
+ * {@link LogisticsCautions} to {@code Builder#caution}. A pure function.
+ */
+public final class LogisticsSection {
+    public static final String ID = "crates-and-trucks";
+
+    record Figure(String label, String value, String note) {
+    }
+
+    record CrateRow(String id, String type, String marks, String bundles, String boxes, String gross) {
+    }
+
+    record CrateDrawing(String crates, String svg) {
+    }
+
+    record TripRow(String id, String type, String crates, String mass, String floor, String centre, String cost) {
+    }
+
+    record TripDrawing(String id, String svg) {
+    }
+
+    record View(List<Figure> figures, String crateStatus, String crateStatusClass, String tripStatus,
+                String tripStatusClass, List<CrateRow> crates, List<CrateDrawing> crateDrawings, List<TripRow> trips,
+                List<TripDrawing> tripDrawings) {
+    }
+
+    private LogisticsSection() {
+    }
+
+    public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
+                                   List<CrateType> catalog) {
+        Map<String, Bundle> byId = new java.util.HashMap<>();
+        bundles.forEach(b -> byId.put(b.id(), b));
+        Map<String, JointBoxLoad> boxes = crates.boxes().stream()
+                .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
+        List<Figure> figures = new ArrayList<>();
+        figures.add(new Figure("Crates", ShopFormat.count(crates.crates().size()),
+                "lower bound " + crates.lowerBound() + (crates.bounds().price() == null ? ""
+                        : ", price bound " + ShopFormat.money(crates.bounds().price()))));
+        figures.add(new Figure("Joint boxes", ShopFormat.count(crates.boxes().size()), "joints in boxes"));
+        figures.add(new Figure("Trips", ShopFormat.count(loads.vehicles().size()),
+                "cost " + ShopFormat.money(loads.tripCost()) + ", bound " + ShopFormat.money(loads.lowerBound())));
+        List<CrateRow> rows = crates.crates().stream().map(c -> new CrateRow(c.id(), c.type(),
+                CrateContents.text(CrateContents.marks(c, byId, boxes)),
+                ShopFormat.count(c.items(ItemKind.BUNDLE).size()), ShopFormat.count(c.items(ItemKind.BOX).size()),
+                ShopFormat.kg(c.grossKg()))).toList();
+        Map<String, List<Crate>> alike = new LinkedHashMap<>();
+        for (Crate c : crates.crates()) {
+            alike.computeIfAbsent(layoutKey(c), k -> new ArrayList<>()).add(c);
+        }
+        List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(
+                group.stream().map(Crate::id).collect(Collectors.joining(", ")),
+                CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0)))).toList();
+        Map<String, Crate> crateById = crates.crates().stream()
+                .collect(Collectors.toMap(Crate::id, Function.identity()));
+        List<TripRow> trips = loads.vehicles().stream().map(v -> new TripRow(v.id(), v.type(),
+                v.crates().stream().map(p -> p.ref()).collect(Collectors.joining(" ")),
+                ShopFormat.kg(v.massKg()) + " / " + ShopFormat.kg(v.payloadKg()),
+                ShopFormat.mm(v.floorLengthMm()) + " / " + ShopFormat.mm(v.deckLengthMm()),
+                ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();
+        List<TripDrawing> tripDrawings = new ArrayList<>();
+        for (VehicleLoad v : loads.vehicles()) {
+            tripDrawings.add(new TripDrawing(v.id(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
+        }
+        View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
+                status(loads.status(), loads.bounds().gap()), statusClass(loads.status()), rows, crateDrawings,
+                trips, tripDrawings);
+        return new ReportSection(ID, "Crates and trucks", "logistics", view);
+    }
+
+    /** Crates of one type with items in the same places look the same in cross-section. */
+    private static String layoutKey(Crate c) {
+        StringBuilder sb = new StringBuilder(c.type());
+        for (CrateItem i : c.items()) {
+            sb.append('|').append(i.kind()).append(i.yMm()).append(',').append(i.zMm()).append(',').append(i.widthMm())
+                    .append(',').append(i.heightMm()).append(',').append(i.xMm());
+        }
+        return sb.toString();
+    }
+
+    private static String status(Status status, double gap) {
+        return status == Status.OPTIMAL ? "optimal"
+                : status.name().toLowerCase(Locale.ROOT) + ", gap " + ShopFormat.percent(gap) + " %";
+    }
+
+    private static String statusClass(Status status) {
+        return "status-" + status.name().toLowerCase(Locale.ROOT);
+    }
+}

@@ -1,0 +1,71 @@
+package kitwright.report;
+
+import java.time.LocalDate;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import kitwright.io.PrettyJson;
+import kitwright.model.Kit;
+import kitwright.plan.PlanResult;
+import kitwright.report.cutting.CutListCsv;
+import kitwright.report.cutting.OrderCsv;
+import kitwright.report.cutting.RackAfterCsv;
+
+/**
+ * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
+ * date, so the same inputs and date give byte-identical files. Timings are not here (see timing.json).
+ */
+public final class PlanFiles {
+    public static final String REPORT_HTML = "report.html";
+    public static final String PLAN_JSON = "plan.json";
+    public static final String SUMMARY_JSON = "summary.json";
+
+    private PlanFiles() {
+    }
+
+    public static Map<String, String> of(PlanResult result, LocalDate date) {
+        Kit kit = result.kit();
+        Map<String, String> files = new LinkedHashMap<>();
+        files.put(REPORT_HTML, HtmlReport.render(report(result, date)));
+        files.put(PLAN_JSON, PrettyJson.write(planJson(result, date)));
+        files.put(SUMMARY_JSON, PrettyJson.write(result.summary()));
+        files.put("order.csv", OrderCsv.format(kit, result.cutting()));
+        files.put("cut-list.csv", CutListCsv.format(kit, result.cutting()));
+        files.put("rack-after.csv", RackAfterCsv.format(kit, result.cutting()));
+        files.putAll(NestingFiles.files(result.nesting().plan()));
+        if (result.logisticsPlanned()) {
+            files.put(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(result.crates(),
+                    result.nesting().plan().bundles()));
+            files.put(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(result.loads()));
+        }
+        return files;
+    }
+
+    /** plan.json: every stage under the keys the issues fix ("cutting", "nesting", "crates", "loads"). */
+    static Map<String, Object> planJson(PlanResult result, LocalDate date) {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("kit", result.kit().name());
+        root.put("date", date.toString());
+        root.put("summary", result.summary());
+        root.put("cutting", result.cutting());
+        root.put("nesting", result.nesting().plan());
+        root.put("crates", result.crates());
+        root.put("loads", result.loads());
+        return root;
+    }
+
+    /** The HTML report: summary, purchase order and saw sheets, then bundles, crates and trucks, then cautions. */
+    public static ReportModel report(PlanResult result, LocalDate date) {
+        ReportModel.Builder builder = ReportModel.builder(result.kit(), date).cutting(result.cutting());
+        builder.section(NestingSection.of(result.nesting()));
+        if (result.logisticsPlanned()) {
+            builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
+                    result.kit().crates()));
+            LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
+        } else {
+            builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"
+                    + " crating and loading were skipped. Add crates.csv and vehicles.csv beside the tube catalog"
+                    + " or name them in kit.json.");
+        }
+        return builder.build();
+    }
+}

@@ -1,0 +1,106 @@
+package kitwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+class PackCommandTest {
+    @TempDir
+    Path temp;
+
+    private record Run(int code, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        CommandLine cl = KitwrightCommand.commandLine();
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        int code = cl.execute(args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    @Test
+    @DisplayName("pack a sample kit: lists, manifests, drawings and JSON written, byte-identical on a second run")
+    void packSampleKit() throws Exception {
+        Path first = temp.resolve("first");
+        Run run = run("pack", "sample-kits/cinema-6", "--out", first.toString(), "--json",
+                temp.resolve("first.json").toString());
+        assertThat(run.code()).as(run.err()).isZero();
+        assertThat(run.out()).contains("Crates: ").contains("lower bound").contains("Trips: ")
+                .contains("EN 12195-1");
+        assertThat(first.resolve("packing-lists.csv")).exists();
+        assertThat(first.resolve("manifests.csv")).exists();
+        assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
+                .anyMatch(n -> n.startsWith("crate-C1")).anyMatch(n -> n.startsWith("deck-V1"));
+        JsonNode json = new ObjectMapper().readTree(temp.resolve("first.json").toFile());
+        List<String> keys = new ArrayList<>();
+        json.fieldNames().forEachRemaining(keys::add);
+        assertThat(keys).containsExactly("crates", "loads");
+
+        Path second = temp.resolve("second");
+        assertThat(run("pack", "sample-kits/cinema-6", "--out", second.toString(), "--json",
+                temp.resolve("second.json").toString()).code()).isZero();
+        assertThat(Files.readString(second.resolve("packing-lists.csv")))
+                .isEqualTo(Files.readString(first.resolve("packing-lists.csv")));
+        assertThat(Files.readString(second.resolve("manifests.csv")))
+                .isEqualTo(Files.readString(first.resolve("manifests.csv")));
+        assertThat(Files.readString(temp.resolve("second.json")))
+                .isEqualTo(Files.readString(temp.resolve("first.json")));
+    }
+
+    @Test
+    @DisplayName("--for STRUCTURE packs one structure; an unknown one is an input error naming the known ones")
+    void forStructure() {
+        Run run = run("pack", "sample-kits/cinema-6", "--for", "lighting-mast");
+        assertThat(run.code()).as(run.err()).isZero();
+        assertThat(run.out()).contains("packed for structure 'lighting-mast'");
+        Run bad = run("pack", "sample-kits/cinema-6", "--for", "bridge");
+        assertThat(bad.code()).isEqualTo(2);
+        assertThat(bad.err()).contains("--for: structure 'bridge' is not in structures.csv")
+                .contains("lighting-mast");
+    }
+
+    @Test
+    @DisplayName("a bundle no crate takes: exit 3, the reason on stderr, nothing written")
+    void noFeasiblePlan() throws Exception {
+        Path kit = temp.resolve("kit");
+        Files.createDirectories(kit);
+        Files.copy(Path.of("sample-kits/alu-kiosk/bars.csv"), kit.resolve("bars.csv"));
+        Files.writeString(kit.resolve("crates.csv"), "crate,inner_length_mm,inner_width_mm,inner_height_mm,"
+                + "outer_length_mm,outer_width_mm,outer_height_mm,tare_kg,max_gross_kg,stackable,max_top_load_kg,price\n"
+                + "tiny,1000,600,500,1080,680,580,20,300,yes,300,40\n", StandardCharsets.UTF_8);
+        Files.writeString(kit.resolve("kit.json"), "{\"stockCatalog\": \""
+                + Path.of("stock-catalogs/aluminium-tube.csv").toAbsolutePath() + "\", \"crateCatalog\": \"crates.csv\","
+                + " \"vehicleCatalog\": \"" + Path.of("stock-catalogs/vehicles.csv").toAbsolutePath() + "\"}",
+                StandardCharsets.UTF_8);
+        Path out = temp.resolve("out");
+        Run run = run("pack", kit.toString(), "--out", out.toString());
+        assertThat(run.code()).as(run.out() + run.err()).isEqualTo(3);
+        assertThat(run.err()).contains("no crate plan").contains("fits no crate type");
+        assertThat(out).doesNotExist();
+    }
+
+    @Test
+    @DisplayName("--help teaches: options, defaults, outputs and the caution")
+    void help() {
+        Run run = run("pack", "--help");
+        assertThat(run.code()).isZero();
+        String text = run.out().replaceAll("\\s+", " ");
+        assertThat(text).contains("--for=STRUCTURE").contains("--out=DIR").contains("--json=FILE")
+                .contains("600 x 400 x 300 mm, 25 kg").contains("EN 12195-1");
+    }
+}

@@ -1,0 +1,55 @@
+package kitwright.nesting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.ArrayList;
+import java.util.List;
+import kitwright.validate.NestPlanValidator;
+import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.lifecycle.BeforeContainer;
+
+/** Random pieces through the nest plan validator: whatever the input, the plan is valid and the bound holds. */
+class NestingProperties {
+    /** A mark: size index, length, count. */
+    record Mark(int size, double lengthMm, int count) {
+    }
+
+    @BeforeContainer
+    static void loadSolvers() {
+        com.google.ortools.Loader.loadNativeLibraries();
+    }
+
+    @Provide
+    Arbitrary<List<Mark>> marks() {
+        Arbitrary<Mark> mark = Combinators.combine(
+                Arbitraries.integers().between(0, PatternNesterTest.SIZES.length - 1),
+                Arbitraries.integers().between(30, 600).map(l -> l * 10.0),
+                Arbitraries.integers().between(1, 12)).as(Mark::new);
+        return mark.list().ofMinSize(1).ofMaxSize(7);
+    }
+
+    @Property(tries = 60, seed = "20260101")
+    void everyPlanIsValid(@ForAll("marks") List<Mark> marks,
+                          @ForAll boolean massLimited,
+                          @ForAll boolean exact) {
+        List<Tube> tubes = new ArrayList<>();
+        for (int m = 0; m < marks.size(); m++) {
+            Mark mark = marks.get(m);
+            double[] size = PatternNesterTest.SIZES[mark.size()];
+            double mass = size[0] / 20 * mark.lengthMm() / 1000;
+            for (int i = 0; i < mark.count(); i++) {
+                tubes.add(new Tube(tubes.size(), "M" + m, "S" + mark.size(), size[0], size[1], mark.lengthMm(), mass));
+            }
+        }
+        NestingProblem problem = new NestingProblem(tubes, 2.0, 10, massLimited ? 20.0 : null);
+        NestingOptions options = exact ? NestingFixtures.quick() : NestingFixtures.quick().withoutExactEnumeration();
+        NestResult result = Nester.run(problem, NestingFixtures.nominal(), options);
+        NestPlanValidator.validate(problem, result.plan());
+        assertThat(result.bundledVolumeM3()).isLessThanOrEqualTo(result.looseVolumeM3() * (1 + 1e-12));
+    }
+}
