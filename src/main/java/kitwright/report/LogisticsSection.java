@@ -33,13 +33,14 @@ public final class LogisticsSection {
     record CrateRow(String id, String type, String marks, String bundles, String boxes, String gross) {
     }
 
-    record CrateDrawing(String crates, String svg) {
+    /** A crate layout: the first crate drawn, its type, the other crates packed the same way (or null). */
+    record CrateDrawing(String first, String type, String alike, String svg) {
     }
 
     record TripRow(String id, String type, String crates, String mass, String floor, String centre, String cost) {
     }
 
-    record TripDrawing(String id, String svg) {
+    record TripDrawing(String id, String type, String svg) {
     }
 
     record View(List<Figure> figures, String crateStatus, String crateStatusClass, String tripStatus,
@@ -71,8 +72,9 @@ public final class LogisticsSection {
         for (Crate c : crates.crates()) {
             alike.computeIfAbsent(layoutKey(c), k -> new ArrayList<>()).add(c);
         }
-        List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(
-                group.stream().map(Crate::id).collect(Collectors.joining(", ")),
+        List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(group.get(0).id(),
+                group.get(0).type(), group.size() == 1 ? null
+                        : group.stream().skip(1).map(Crate::id).collect(Collectors.joining(", ")),
                 CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0)))).toList();
         Map<String, Crate> crateById = crates.crates().stream()
                 .collect(Collectors.toMap(Crate::id, Function.identity()));
@@ -83,7 +85,7 @@ public final class LogisticsSection {
                 ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();
         List<TripDrawing> tripDrawings = new ArrayList<>();
         for (VehicleLoad v : loads.vehicles()) {
-            tripDrawings.add(new TripDrawing(v.id(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
+            tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
         }
         View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
                 status(loads.status(), loads.bounds().gap()), statusClass(loads.status()), rows, crateDrawings,

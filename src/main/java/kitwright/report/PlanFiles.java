@@ -56,7 +56,7 @@ public final class PlanFiles {
     /** The HTML report: summary, purchase order and saw sheets, then bundles, crates and trucks, then cautions. */
     public static ReportModel report(PlanResult result, LocalDate date) {
         ReportModel.Builder builder = ReportModel.builder(result.kit(), date).cutting(result.cutting());
-        builder.section(NestingSection.of(result.nesting()));
+        builder.section(NestingSection.of(result.nesting(), result.kit()));
         if (result.logisticsPlanned()) {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
                     result.kit().crates()));
