@@ -18,15 +18,11 @@ import kitwright.nesting.NestedTube;
  * and loose, bundles above the one-person lift, the fit rule used (which says that out-of-roundness and
  * straightness are not counted), a table of the distinct bundle layouts and one figure of each: the drawing
  * ({@link BundleDrawing}) and a table of its tubes. With the kit, tubes are coloured by section (one tint per tube
- * size, the same in every drawing) and the tables name the section. Add it with
+ * size, the same in every drawing, see {@link SectionTints}) and the tables name the section. Add it with
  * {@code ReportModel.builder(...).section(NestingSection.of(result, kit))}.
  */
 public final class NestingSection {
     public static final String ID = "nesting";
-    /** Tints for the sections a kit uses, in catalog order: muted, apart from each other, light enough for black text. */
-    private static final List<String> SECTION_TINTS = List.of("#c5d3e4", "#e8d5b0", "#c6ddc0", "#e5c6d4",
-            "#d6cfea", "#f1e1a6", "#bddfdb", "#dcc8ba");
-
     /** One tube of a layout, for the table under its drawing. */
     record Tube(String mark, String swatch, String section, String count, String outside, String bore,
                 String length, String in) {
@@ -57,13 +53,7 @@ public final class NestingSection {
         for (Bar b : kit.bars()) {
             sectionOf.put(b.mark(), b.section());
         }
-        Map<String, String> tint = new LinkedHashMap<>();
-        for (String section : kit.usedSections()) {
-            int n = tint.size();
-            tint.put(section, n < SECTION_TINTS.size() ? SECTION_TINTS.get(n) : MarkPalette.colour(n));
-        }
-        Map<String, String> fills = new LinkedHashMap<>();
-        sectionOf.forEach((mark, section) -> fills.put(mark, tint.getOrDefault(section, "#d9d9d9")));
+        Map<String, String> fills = SectionTints.byMark(kit);
         return of(result, sectionOf, fills);
     }
 
