@@ -5,7 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.TreeSet;
 import kitwright.nesting.Bundle;
 import kitwright.nesting.NestPlan;
 import kitwright.nesting.NestedTube;
@@ -44,13 +43,6 @@ public final class BundleDrawing {
         }
     }
 
-    /** A tube with its position in the bundle's own frame. */
-    private record Placed(NestedTube tube, int level, double x, double y, double start) {
-        double end() {
-            return start + tube.lengthMm();
-        }
-    }
-
     private BundleDrawing() {
     }
 
@@ -79,12 +71,11 @@ public final class BundleDrawing {
      * @param fills fill colour by mark; a mark not in it is grey by its nesting level
      */
     public static String svg(Bundle bundle, List<String> ids, Map<String, String> fills) {
-        List<Placed> tubes = new ArrayList<>();
-        place(bundle.host(), 0, 0, 0, 0, tubes);
-        List<double[]> slices = slices(tubes);
+        List<PlacedTube> tubes = PlacedTube.of(bundle);
+        List<double[]> slices = PlacedTube.slices(tubes, MAX_SECTIONS);
         double lengthScale = (WIDTH - 2 * LEFT) / bundle.lengthMm();
         double diameterScale = Math.max(lengthScale, BAND / bundle.envelopeDiameterMm());
-        List<List<Placed>> rows = rows(tubes, lengthScale);
+        List<List<PlacedTube>> rows = rows(tubes, lengthScale);
         double extentsTop = SIDE_TOP + BAND + 22;
         double sectionsTop = extentsTop + rows.size() * ROW + 18;
         double height = sectionsTop + SECTION_SIZE + 40;
@@ -108,72 +99,18 @@ public final class BundleDrawing {
         return svg.toString();
     }
 
-    private static void place(NestedTube tube, int level, double x, double y, double start, List<Placed> out) {
-        out.add(new Placed(tube, level, x, y, start));
-        for (NestedTube g : tube.guests()) {
-            place(g, level + 1, x + g.centerXMm(), y + g.centerYMm(), start + g.offsetMm(), out);
-        }
-    }
-
-    private static String fill(Placed p, Map<String, String> fills) {
+    private static String fill(PlacedTube p, Map<String, String> fills) {
         return fills.getOrDefault(p.tube().mark(), LEVEL_FILL[p.level() % LEVEL_FILL.length]);
     }
 
-    private static String dash(Placed p) {
+    private static String dash(PlacedTube p) {
         return DASH[p.level() % DASH.length];
     }
 
-    /**
-     * Positions along the bundle where the cross-section differs: {position, total length of that cross-section,
-     * tubes in it, longest stretch}. Cross-sections over less than 2 % of the length (the end allowances) are left
-     * out; of the rest the fullest are kept (then the longest), in order along the bundle.
-     */
-    private static List<double[]> slices(List<Placed> tubes) {
-        TreeSet<Double> cuts = new TreeSet<>();
-        for (Placed p : tubes) {
-            cuts.add(p.start());
-            cuts.add(p.end());
-        }
-        Map<String, double[]> sets = new LinkedHashMap<>();
-        Double previous = null;
-        for (double c : cuts) {
-            if (previous != null && c - previous > 1e-6) {
-                double mid = (previous + c) / 2;
-                StringBuilder key = new StringBuilder();
-                int present = 0;
-                for (Placed p : tubes) {
-                    if (p.start() < mid && mid < p.end()) {
-                        present++;
-                        key.append(p.tube().mark().length()).append(':').append(p.tube().mark()).append('@')
-                                .append(NestingTables.number(p.x(), 1)).append(',')
-                                .append(NestingTables.number(p.y(), 1)).append(';');
-                    }
-                }
-                int count = present;
-                double[] slice = sets.computeIfAbsent(key.toString(), k -> new double[] {mid, 0, count, 0});
-                slice[1] += c - previous;
-                if (c - previous > slice[3]) {
-                    slice[0] = mid; // drawn in the middle of its longest stretch
-                    slice[3] = c - previous;
-                }
-            }
-            previous = c;
-        }
-        double length = cuts.last() - cuts.first();
-        List<double[]> all = new ArrayList<>(sets.values().stream().filter(v -> v[1] >= 0.02 * length).toList());
-        if (all.isEmpty()) {
-            all.addAll(sets.values());
-        }
-        all.sort((a, b) -> a[2] != b[2] ? Double.compare(b[2], a[2]) : Double.compare(b[1], a[1]));
-        List<double[]> kept = new ArrayList<>(all.subList(0, Math.min(MAX_SECTIONS, all.size())));
-        kept.sort((a, b) -> Double.compare(a[0], b[0]));
-        return kept;
-    }
-
-    private static void side(Svg svg, List<Placed> tubes, List<double[]> slices, Map<String, String> fills,
+    private static void side(Svg svg, List<PlacedTube> tubes, List<double[]> slices, Map<String, String> fills,
                              double axis, double lengthScale, double diameterScale) {
         svg.open("g", "class", "side-view");
-        for (Placed p : tubes) {
+        for (PlacedTube p : tubes) {
             double h = p.tube().outerDiameterMm() * diameterScale;
             svg.rect(LEFT + p.start() * lengthScale, axis - p.y() * diameterScale - h / 2,
                     p.tube().lengthMm() * lengthScale, h, "fill", fill(p, fills), "fill-opacity",
@@ -192,13 +129,13 @@ public final class BundleDrawing {
     }
 
     /** Tubes in rows for the length bars: level by level, a tube joins the first row of its level it clears. */
-    private static List<List<Placed>> rows(List<Placed> tubes, double lengthScale) {
-        List<Placed> order = new ArrayList<>(tubes);
+    private static List<List<PlacedTube>> rows(List<PlacedTube> tubes, double lengthScale) {
+        List<PlacedTube> order = new ArrayList<>(tubes);
         order.sort((a, b) -> a.level() != b.level() ? Integer.compare(a.level(), b.level())
                 : Double.compare(a.start(), b.start()));
-        List<List<Placed>> rows = new ArrayList<>();
+        List<List<PlacedTube>> rows = new ArrayList<>();
         List<Double> reach = new ArrayList<>();
-        for (Placed p : order) {
+        for (PlacedTube p : order) {
             double from = p.start() * lengthScale;
             int row = -1;
             for (int r = 0; r < rows.size() && row < 0; r++) {
@@ -217,23 +154,23 @@ public final class BundleDrawing {
         return rows;
     }
 
-    private static String lengthLabel(Placed p) {
+    private static String lengthLabel(PlacedTube p) {
         return p.tube().mark() + " \u00B7 " + ShopFormat.mm(p.tube().lengthMm());
     }
 
     /** Width a label needs when it does not fit in its bar (then it stands right of the bar), else 0. */
-    private static double labelOutside(Placed p, double lengthScale) {
+    private static double labelOutside(PlacedTube p, double lengthScale) {
         double text = lengthLabel(p).length() * 5.4 + 6;
         double bar = p.tube().lengthMm() * lengthScale;
         return text <= bar ? 0 : bar + text;
     }
 
-    private static void extents(Svg svg, List<List<Placed>> rows, Map<String, String> fills, double top,
+    private static void extents(Svg svg, List<List<PlacedTube>> rows, Map<String, String> fills, double top,
                                 double lengthScale) {
         svg.open("g", "class", "tube-lengths");
         for (int r = 0; r < rows.size(); r++) {
             double y = top + r * ROW;
-            for (Placed p : rows.get(r)) {
+            for (PlacedTube p : rows.get(r)) {
                 double x = LEFT + p.start() * lengthScale;
                 double w = p.tube().lengthMm() * lengthScale;
                 svg.open("g", "class", "tube-length", "data-mark", p.tube().mark());
@@ -247,13 +184,13 @@ public final class BundleDrawing {
         svg.close("g");
     }
 
-    private static void section(Svg svg, List<Placed> tubes, double at, int index, Map<String, String> fills,
+    private static void section(Svg svg, List<PlacedTube> tubes, double at, int index, Map<String, String> fills,
                                 double left, double top, double scale) {
         double cx = left + SECTION_SIZE / 2;
         double cy = top + SECTION_SIZE / 2;
-        List<Placed> cut = tubes.stream().filter(p -> p.start() < at && at < p.end()).toList();
+        List<PlacedTube> cut = tubes.stream().filter(p -> p.start() < at && at < p.end()).toList();
         svg.open("g", "class", "cross-section", "data-at-mm", Math.round(at));
-        for (Placed p : cut) {
+        for (PlacedTube p : cut) {
             double x = cx + p.x() * scale;
             double y = cy - p.y() * scale;
             double r = p.tube().outerDiameterMm() / 2 * scale;
@@ -275,9 +212,9 @@ public final class BundleDrawing {
     }
 
     /** The tubes of a cross-section from the outside in: "A1 ⊃ B1 ⊃ 3 × E2". */
-    private static String outsideIn(List<Placed> cut) {
+    private static String outsideIn(List<PlacedTube> cut) {
         Map<Integer, Map<String, Integer>> levels = new java.util.TreeMap<>();
-        for (Placed p : cut) {
+        for (PlacedTube p : cut) {
             levels.computeIfAbsent(p.level(), k -> new LinkedHashMap<>()).merge(p.tube().mark(), 1, Integer::sum);
         }
         List<String> parts = new ArrayList<>();

@@ -10,8 +10,8 @@ import kitwright.packing.Crate;
 
 /**
  * Draws a vehicle's deck plan to scale, seen from above with the front of the deck on the left: the deck, every
- * stack of crates as its footprint labelled with the crate ids from the bottom up and, when crates stand on one
- * another, the number high; stacks are shaded darker the higher they are and carry the count in text, so the plan
+ * stack of crates as its footprint labelled at its top left (clear of the centre-of-gravity line) with the crate
+ * ids from the bottom up, the number high when crates stand on one another, and the crate type where it fits; stacks are shaded darker the higher they are and carry the count in text, so the plan
  * reads in greyscale. The centre of gravity is marked along the deck with its distance from the front; a ruler
  * counts metres from the front. A pure function; text is escaped by {@link Svg}; no script.
  */
