@@ -158,6 +158,31 @@ class PlannerTest {
         assertThat(run.out()).contains("INFEASIBLE");
     }
 
+    @Test
+    @DisplayName("a mark named <b>&\" is text everywhere: escaped in report.html, quoted in the CSVs")
+    void hostileMarkStaysText(@TempDir Path dir) throws Exception {
+        Path kitDir = KitFiles.kit(dir.resolve("kit"), """
+                mark,section,length_mm,quantity
+                "<b>&\"\"",CHS 48.3x3.2,1900,6
+                E,CHS 33.7x2.6,1500,5
+                """);
+        KitFiles.write(kitDir, "crates.csv", Files.readString(Path.of("stock-catalogs", "crates.csv")));
+        KitFiles.write(kitDir, "vehicles.csv", Files.readString(Path.of("stock-catalogs", "vehicles.csv")));
+        Kit kit = KitReader.read(kitDir);
+        PlanResult result = Planner.run(kit, Planner.Options.DEFAULT, PlanProgress.NONE);
+        Map<String, String> files = PlanFiles.of(result, DATE);
+
+        PlanValidator.validate(result, files);
+
+        assertThat(kit.bars().get(0).mark()).isEqualTo("<b>&\"");
+        String html = files.get("report.html");
+        assertThat(html).doesNotContain("<b>&").contains("&lt;b&gt;&amp;&quot;");
+        assertThat(html.split("data-mark=\"&lt;b&gt;&amp;&quot;\"", -1).length - 1)
+                .as("legend row, bundle drawing bars and bundle tables").isGreaterThanOrEqualTo(3);
+        assertThat(files.get("packing-lists.csv")).contains("\"<b>&\"\" \u00D7 6");
+        assertThat(files.get("nests.csv")).contains("\"<b>&\"\"");
+    }
+
     private static List<String> names(Path dir) throws Exception {
         try (Stream<Path> list = Files.list(dir)) {
             return list.map(p -> p.getFileName().toString()).sorted().toList();
