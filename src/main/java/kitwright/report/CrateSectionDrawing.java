@@ -10,8 +10,9 @@ import kitwright.packing.ItemKind;
 /**
  * Draws a crate's cross-section to scale, looking along its length: the timber walls (outer box less inner box,
  * taken as equal on both sides), every lane of bundles as its envelope circle with the number of bundles lying end
- * to end in it, and every stack position of joint boxes hatched with its count. Circles are white with a dark
- * ring and boxes hatched, so the drawing reads in greyscale; the caption says what is inside. A pure function:
+ * to end in it, and every stack position of joint boxes hatched with its count. Circles have a dark ring (filled
+ * with a tint when the caller gives one) and boxes are hatched, so the drawing reads in greyscale; the caption
+ * says what is inside. A pure function:
  * the same crate gives the same bytes; text is escaped by {@link Svg}; no script.
  */
 public final class CrateSectionDrawing {
@@ -31,6 +32,15 @@ public final class CrateSectionDrawing {
      * @param drawingId identifier unique in the report (letters, digits and '-'), used for ids and data-crate
      */
     public static String draw(String drawingId, Crate crate) {
+        return draw(drawingId, crate, Map.of());
+    }
+
+    /**
+     * @param drawingId identifier unique in the report (letters, digits and '-'), used for ids and data-crate
+     * @param laneFills fill of a lane by the ref of a bundle in it (the report tints by the host's section); lanes
+     *                  not in it are white
+     */
+    public static String draw(String drawingId, Crate crate, Map<String, String> laneFills) {
         if (!drawingId.matches("[A-Za-z0-9-]+")) {
             throw new IllegalArgumentException("drawing id must be letters, digits and '-': " + drawingId);
         }
@@ -44,6 +54,7 @@ public final class CrateSectionDrawing {
 
         Svg svg = new Svg();
         svg.open("svg", "xmlns", "http://www.w3.org/2000/svg", "class", "crate-section", "data-crate", crate.id(),
+                "data-crate-type", crate.type(),
                 "viewBox", "0 0 " + Svg.number(WIDTH) + " " + Svg.number(height), "role", "img",
                 "aria-labelledby", drawingId + "-title");
         svg.element("title", "Crate " + crate.id() + " (" + crate.type() + "), cross-section to scale",
@@ -60,7 +71,7 @@ public final class CrateSectionDrawing {
         svg.rect(left, floor - crate.innerHeightMm() * scale, crate.innerWidthMm() * scale,
                 crate.innerHeightMm() * scale, "fill", "#ffffff", "stroke", INK, "stroke-width", 0.8);
         for (Spot s : spots(crate)) {
-            spot(svg, s, left, floor, scale, drawingId);
+            spot(svg, s, left, floor, scale, drawingId, laneFills);
         }
         svg.text(WIDTH / 2, MARGIN - 10, "inner " + ShopFormat.mm(crate.innerWidthMm()) + " mm wide", "text-anchor",
                 "middle", "font-size", 11, "fill", INK);
@@ -91,7 +102,8 @@ public final class CrateSectionDrawing {
         return List.copyOf(spots.values());
     }
 
-    private static void spot(Svg svg, Spot s, double left, double floor, double scale, String id) {
+    private static void spot(Svg svg, Spot s, double left, double floor, double scale, String id,
+                             Map<String, String> laneFills) {
         double x = left + s.y() * scale;
         double w = s.width() * scale;
         double h = s.height() * scale;
@@ -100,7 +112,8 @@ public final class CrateSectionDrawing {
         if (s.kind() == ItemKind.BUNDLE) {
             svg.open("g", "class", "lane", "data-bundles", s.refs().size());
             svg.element("title", "lane of " + s.refs().size() + " end to end: " + refs);
-            svg.empty("circle", "cx", x + w / 2, "cy", y + h / 2, "r", w / 2, "fill", "#ffffff", "stroke", INK,
+            svg.empty("circle", "cx", x + w / 2, "cy", y + h / 2, "r", w / 2, "fill",
+                    laneFills.getOrDefault(s.refs().get(0), "#ffffff"), "stroke", INK,
                     "stroke-width", 0.9);
             if (s.refs().size() > 1 && w >= 11) {
                 svg.text(x + w / 2, y + h / 2 + Math.min(w * 0.3, 4), String.valueOf(s.refs().size()),

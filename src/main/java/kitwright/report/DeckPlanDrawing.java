@@ -10,8 +10,8 @@ import kitwright.packing.Crate;
 
 /**
  * Draws a vehicle's deck plan to scale, seen from above with the front of the deck on the left: the deck, every
- * stack of crates as its footprint labelled with the crate ids from the bottom up and, when crates stand on one
- * another, the number high; stacks are shaded darker the higher they are and carry the count in text, so the plan
+ * stack of crates as its footprint labelled at its top left (clear of the centre-of-gravity line) with the crate
+ * ids from the bottom up, the number high when crates stand on one another, and the crate type where it fits; stacks are shaded darker the higher they are and carry the count in text, so the plan
  * reads in greyscale. The centre of gravity is marked along the deck with its distance from the front; a ruler
  * counts metres from the front. A pure function; text is escaped by {@link Svg}; no script.
  */
@@ -105,16 +105,23 @@ public final class DeckPlanDrawing {
         svg.element("title", String.join(" on ", topDown) + (base.rotated() ? " (turned)" : ""));
         svg.rect(x, y, w, h, "fill", SHADES[Math.min(stack.size(), SHADES.length) - 1], "stroke", INK,
                 "stroke-width", 1);
+        // labels at the top left of the footprint, clear of the centre-of-gravity line through the middle
         String label = String.join("/", ids) + (stack.size() > 1 ? " (" + stack.size() + " high)" : "");
-        double font = 11;
-        if (label.length() * font * 0.56 > w - 4) {
+        double font = 12.5;
+        if (label.length() * font * 0.6 > w - 10) {
             label = ids.get(0) + (stack.size() > 1 ? " +" + (stack.size() - 1) : "");
         }
-        if (label.length() * font * 0.56 > w - 4) {
-            font = Math.max(6, (w - 4) / (label.length() * 0.56));
+        if (label.length() * font * 0.6 > w - 10) {
+            font = Math.max(6, (w - 6) / (label.length() * 0.6));
         }
-        svg.text(x + w / 2, y + h / 2 + font * 0.35, label, "text-anchor", "middle", "font-size", font, "fill", INK,
+        double inset = Math.min(6, w / 10);
+        svg.text(x + inset, y + Math.min(h / 2, 6 + font), label, "font-size", font, "font-weight", 700, "fill", INK,
                 "paint-order", "stroke", "stroke", "#ffffff", "stroke-width", 3, "stroke-linejoin", "round");
+        String type = c.type() + (base.rotated() ? ", turned" : "");
+        if (h >= 2 * font + 16 && type.length() * 10 * 0.56 <= w - 2 * inset) {
+            svg.text(x + inset, y + 2 * font + 10, type, "font-size", 10, "fill", INK, "paint-order", "stroke",
+                    "stroke", "#ffffff", "stroke-width", 3, "stroke-linejoin", "round");
+        }
         svg.close("g");
     }
 

@@ -33,13 +33,21 @@ public final class LogisticsSection {
     record CrateRow(String id, String type, String marks, String bundles, String boxes, String gross) {
     }
 
-    record CrateDrawing(String crates, String svg) {
+    /**
+     * A crate layout: the first crate drawn, its type, the other crates packed the same way (or null), and its
+     * bundles by host mark with their swatches.
+     */
+    record CrateDrawing(String first, String type, String alike, List<HostCount> hosts, String svg) {
+    }
+
+    /** Bundles of one host mark in a crate: "A1 hosts, Ø 89.8 mm: 44". */
+    record HostCount(String swatch, String mark, String diameter, String count) {
     }
 
     record TripRow(String id, String type, String crates, String mass, String floor, String centre, String cost) {
     }
 
-    record TripDrawing(String id, String svg) {
+    record TripDrawing(String id, String type, String svg) {
     }
 
     record View(List<Figure> figures, String crateStatus, String crateStatusClass, String tripStatus,
@@ -52,8 +60,24 @@ public final class LogisticsSection {
 
     public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
                                    List<CrateType> catalog) {
+        return of(crates, loads, bundles, catalog, Map.of());
+    }
+
+    /**
+     * The block with the lanes of the crate cross-sections tinted by their bundles' host marks.
+     *
+     * @param fillByMark tint by mark (the report's {@link SectionTints}); lanes of other marks stay white
+     */
+    public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
+                                   List<CrateType> catalog, Map<String, String> fillByMark) {
         Map<String, Bundle> byId = new java.util.HashMap<>();
         bundles.forEach(b -> byId.put(b.id(), b));
+        Map<String, String> laneFills = new java.util.HashMap<>();
+        byId.forEach((id, b) -> {
+            if (fillByMark.containsKey(b.host().mark())) {
+                laneFills.put(id, fillByMark.get(b.host().mark()));
+            }
+        });
         Map<String, JointBoxLoad> boxes = crates.boxes().stream()
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
         List<Figure> figures = new ArrayList<>();
@@ -71,9 +95,11 @@ public final class LogisticsSection {
         for (Crate c : crates.crates()) {
             alike.computeIfAbsent(layoutKey(c), k -> new ArrayList<>()).add(c);
         }
-        List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(
-                group.stream().map(Crate::id).collect(Collectors.joining(", ")),
-                CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0)))).toList();
+        List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(group.get(0).id(),
+                group.get(0).type(), group.size() == 1 ? null
+                        : group.stream().skip(1).map(Crate::id).collect(Collectors.joining(", ")),
+                hosts(group.get(0), byId, fillByMark),
+                CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0), laneFills))).toList();
         Map<String, Crate> crateById = crates.crates().stream()
                 .collect(Collectors.toMap(Crate::id, Function.identity()));
         List<TripRow> trips = loads.vehicles().stream().map(v -> new TripRow(v.id(), v.type(),
@@ -83,12 +109,27 @@ public final class LogisticsSection {
                 ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();
         List<TripDrawing> tripDrawings = new ArrayList<>();
         for (VehicleLoad v : loads.vehicles()) {
-            tripDrawings.add(new TripDrawing(v.id(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
+            tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
         }
         View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
                 status(loads.status(), loads.bounds().gap()), statusClass(loads.status()), rows, crateDrawings,
                 trips, tripDrawings);
         return new ReportSection(ID, "Crates and trucks", "logistics", view);
+    }
+
+    /** The bundles of a crate by host mark and envelope, in crate order. */
+    private static List<HostCount> hosts(Crate crate, Map<String, Bundle> bundles, Map<String, String> fillByMark) {
+        Map<List<Object>, Integer> counts = new LinkedHashMap<>();
+        for (CrateItem i : crate.items(ItemKind.BUNDLE)) {
+            Bundle b = bundles.get(i.ref());
+            if (b != null) {
+                counts.merge(List.of(b.host().mark(), b.envelopeDiameterMm()), 1, Integer::sum);
+            }
+        }
+        List<HostCount> hosts = new ArrayList<>();
+        counts.forEach((key, n) -> hosts.add(new HostCount(Swatches.mark(fillByMark.getOrDefault((String) key.get(0),
+                "#ffffff")), (String) key.get(0), ShopFormat.mm((Double) key.get(1)), ShopFormat.count(n))));
+        return hosts;
     }
 
     /** Crates of one type with items in the same places look the same in cross-section. */

@@ -56,10 +56,10 @@ public final class PlanFiles {
     /** The HTML report: summary, purchase order and saw sheets, then bundles, crates and trucks, then cautions. */
     public static ReportModel report(PlanResult result, LocalDate date) {
         ReportModel.Builder builder = ReportModel.builder(result.kit(), date).cutting(result.cutting());
-        builder.section(NestingSection.of(result.nesting()));
+        builder.section(NestingSection.of(result.nesting(), result.kit()));
         if (result.logisticsPlanned()) {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
-                    result.kit().crates()));
+                    result.kit().crates(), SectionTints.byMark(result.kit())));
             LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
         } else {
             builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"

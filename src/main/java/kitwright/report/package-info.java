@@ -1,7 +1,13 @@
 /**
  * The report people look at: {@code report.html}, one self-contained page (inline CSS and SVG, no script, no
- * font or image from the network) with the summary, the purchase order, the saw sheets, the cautions and the
- * inputs used, printable on A4.
+ * font or image from the network) with the summary, the purchase order, the saw sheets, the nested bundles, the
+ * crates and trucks, the cautions and the inputs used, printable on A4 (each of these from the saw sheets on
+ * starts a new page, under a running header with the kit's name and the date). {@link kitwright.report.PlanFiles}
+ * gives every file of a plan folder as text.
+ *
+ * <p>Colour: the saw sheets colour by mark ({@link kitwright.report.MarkPalette}); the bundle and crate drawings
+ * tint by tube section ({@code SectionTints}), so a tube size looks the same from the bundle
+ * figures to the crate lanes. Every drawing also labels in text and reads in greyscale.
  *
  * <h2>Use</h2>
  * <pre>{@code

@@ -56,6 +56,9 @@ class LogisticsDrawingsTest {
         assertThat(CrateSectionDrawing.draw("crate-" + first.id(), first)).isEqualTo(svg);
         // two bundles of 1000 mm end to end in each lane of a 2000 mm crate: the lane says so
         assertThat(svg).contains("data-bundles=\"2\"");
+        String firstBundle = first.items(ItemKind.BUNDLE).get(0).ref();
+        String tinted = CrateSectionDrawing.draw("crate-" + first.id(), first, Map.of(firstBundle, "#123456"));
+        assertThat(tinted.split("fill=\"#123456\"", -1)).as("the lane of the tinted bundle").hasSize(2);
     }
 
     @Test

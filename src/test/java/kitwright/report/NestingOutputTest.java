@@ -6,6 +6,7 @@ import java.io.StringReader;
 import java.io.StringWriter;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import javax.xml.parsers.DocumentBuilderFactory;
 import kitwright.model.NestTolerance;
@@ -83,6 +84,14 @@ class NestingOutputTest {
         assertThat(svg).contains("&lt;b&gt;&amp;&quot;");
         // four different cross-sections along B001: A+B+C, A+B (past C's end), A+3E, A alone: 10 rings
         assertThat(doc.getElementsByTagName("path").getLength()).isEqualTo(3 + 2 + 4 + 1);
+        // a length bar per tube (host, the chain of two, three side by side), each labelled with mark and length
+        assertThat(svg.split("<g class=\"tube-length\"", -1)).hasSize(6 + 1);
+        assertThat(svg).contains("C \u00B7 2\u202F000").contains("A \u2283 3 \u00D7 E")
+                .contains("A \u2283 &lt;b&gt;&amp;&quot; \u2283 C");
+        assertThat(svg.split("<g class=\"cross-section\"", -1)).hasSize(4 + 1);
+        String tinted = BundleDrawing.svg(distinct.get(0).bundle(), distinct.get(0).ids(), Map.of("E", "#123456"));
+        assertThat(tinted.split("fill=\"#123456\"", -1)).as("three E in the side view, bars and section")
+                .hasSize(3 * 3 + 1);
     }
 
     @Test

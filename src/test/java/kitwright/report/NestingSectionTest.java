@@ -28,7 +28,8 @@ class NestingSectionTest {
         assertThat(html).contains("Nested bundles").contains("Out-of-roundness and straightness are not counted")
                 .contains("Worst case: largest outside diameter against smallest bore");
         int layouts = BundleDrawing.distinct(result.plan()).size();
-        assertThat(html.split("data-bundle=\"", -1)).hasSize(layouts + 1);
+        assertThat(html.split("<figure class=\"pattern bundle\"[^>]* data-bundle=\"", -1)).hasSize(layouts + 1);
+        assertThat(html.split("<svg [^>]*class=\"bundle-drawing\" data-bundle=\"", -1)).hasSize(layouts + 1);
         assertThat(html).doesNotContain("<script");
     }
 }

@@ -1,21 +1,27 @@
 package kitwright.report;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import kitwright.cutting.CutPlan;
 import kitwright.io.KitReader;
 import kitwright.model.Kit;
+import kitwright.plan.PlanProgress;
+import kitwright.plan.PlanResult;
+import kitwright.plan.Planner;
 
 /**
- * Makes the README's picture of the report, {@code src/docs/report-screenshot.png}: the page head and the first
- * saw sheets of a sample kit, rendered by headless Chromium at 0.7 scale. The plan is the tests' first-fit
- * decreasing (statuses and gaps are that plan's own, honestly bounded). Run:
+ * Makes the README's picture of the report, {@code src/docs/report-screenshot.png}: the report.html that
+ * {@code kitwright plan} writes for a sample kit (the whole chain, dated 2026-12-01), rendered by headless Chromium
+ * at 0.6 scale with the purchase order hidden in the picture only, so the summary and the first saw sheets show
+ * together. Run:
  * {@code java -cp target/classes:target/test-classes:$(cat target/cp.txt) kitwright.report.ReadmeScreenshot
  * sample-kits/cinema-12 src/docs/report-screenshot.png}
  * (after {@code mvn -q -o test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt}).
  */
 public final class ReadmeScreenshot {
+    static final LocalDate DATE = LocalDate.of(2026, 12, 1);
+
     private ReadmeScreenshot() {
     }
 
@@ -23,17 +29,19 @@ public final class ReadmeScreenshot {
         Path kitDir = Path.of(args.length > 0 ? args[0] : "sample-kits/cinema-12");
         Path png = Path.of(args.length > 1 ? args[1] : "src/docs/report-screenshot.png");
         Kit kit = KitReader.read(kitDir);
-        CutPlan plan = new CutPlan(kit.usedSections().stream()
-                .map(section -> ReportFixtures.firstFitDecreasing(kit, section)).toList());
-        ReportModel full = ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14));
-        ReportModel sawSheets = new ReportModel(full.kitName(), full.description(), full.date(),
-                full.sections().stream().filter(s -> s.id().equals(SawSheetSection.ID)).toList());
+        PlanResult result = Planner.run(kit, Planner.Options.DEFAULT, PlanProgress.NONE);
+        String html = PlanFiles.of(result, DATE).get(PlanFiles.REPORT_HTML);
+        String picture = html.replace("</head>", "<style>#" + PurchaseOrderSection.ID + " { display: none; }</style>\n"
+                + "</head>");
+        if (picture.equals(html)) {
+            throw new IllegalStateException("report.html has no </head>");
+        }
         Path work = Files.createTempDirectory("kitwright-screenshot-");
-        Path page = ReportWriter.writeInto(sawSheets, work);
+        Path page = Files.writeString(work.resolve(PlanFiles.REPORT_HTML), picture, StandardCharsets.UTF_8);
         HeadlessChromium chromium = HeadlessChromium.find(work)
                 .orElseThrow(() -> new IllegalStateException("chromium is not installed"));
         Files.createDirectories(png.toAbsolutePath().getParent());
-        chromium.screenshot(page, png, 1100, 1500, 0.7);
+        chromium.screenshot(page, png, 1100, 1900, 0.6);
         System.out.println(png.toAbsolutePath() + ": " + Files.size(png) + " bytes");
     }
 }

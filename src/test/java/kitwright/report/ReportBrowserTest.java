@@ -13,7 +13,9 @@ import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
+import kitwright.cli.CliRun;
 import kitwright.cutting.CutPlan;
+import kitwright.io.KitReader;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
 import org.junit.jupiter.api.Assumptions;
@@ -43,6 +45,38 @@ class ReportBrowserTest {
     private static String unescape(String attribute) {
         return attribute.replace("&quot;", "\"").replace("&#39;", "'").replace("&lt;", "<").replace("&gt;", ">")
                 .replace("&amp;", "&");
+    }
+
+    /** The text from the first match of {@code startRegex} to the next {@code end}, inclusive. */
+    private static String element(String dom, String startRegex, String end) {
+        Matcher m = Pattern.compile(startRegex).matcher(dom);
+        assertThat(m.find()).as(startRegex).isTrue();
+        int close = dom.indexOf(end, m.start());
+        assertThat(close).as(end + " after " + startRegex).isPositive();
+        return dom.substring(m.start(), close + end.length());
+    }
+
+    private static double inkedShare(BufferedImage image) {
+        long inked = 0;
+        for (int y = 0; y < image.getHeight(); y++) {
+            for (int x = 0; x < image.getWidth(); x++) {
+                int rgb = image.getRGB(x, y);
+                if ((rgb >> 16 & 0xFF) < 235 || (rgb >> 8 & 0xFF) < 235 || (rgb & 0xFF) < 235) {
+                    inked++;
+                }
+            }
+        }
+        return inked / (double) (image.getWidth() * image.getHeight());
+    }
+
+    private static int colours(BufferedImage image) {
+        Set<Integer> colours = new HashSet<>();
+        for (int y = 0; y < image.getHeight(); y++) {
+            for (int x = 0; x < image.getWidth(); x++) {
+                colours.add(image.getRGB(x, y) & 0xFFFFFF);
+            }
+        }
+        return colours.size();
     }
 
     private static List<String> attributes(String dom, String regex) {
@@ -105,6 +139,54 @@ class ReportBrowserTest {
         assertThat(attributes(dom, "<tr class=\"legend-mark\" data-mark=\"([^\"]*)\""))
                 .containsExactlyInAnyOrderElementsOf(kit.bars().stream().map(Bar::mark).toList());
         assertThat(attributes(dom, "<td class=\"mark\">([^<]*)</td>")).contains(ReportFixtures.HOSTILE);
+    }
+
+    @Test
+    @DisplayName("the real plan report of cinema-12 in Chromium: every pattern, mark, bundle, crate type and vehicle"
+            + " drawn, the cautions say material and logistics only, not blank, nesting and logistics on new pages")
+    void rendersTheRealPlanReport(@TempDir Path dir) throws Exception {
+        HeadlessChromium chromium = chromiumOrSkip(dir);
+        Path out = dir.resolve("cinema-12");
+        CliRun run = CliRun.of("plan", "sample-kits/cinema-12", "--out", out.toString(), "--date", "2026-12-01");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        Path page = out.resolve("report.html");
+        PlanFolder plan = PlanFolder.read(out);
+
+        Path png = dir.resolve("report.png");
+        chromium.screenshot(page, png, 1280, 2400);
+        BufferedImage image = ImageIO.read(png.toFile());
+        assertThat(inkedShare(image)).as("share of non-white pixels").isBetween(0.03, 0.6);
+        assertThat(colours(image)).as("distinct colours").isGreaterThan(40);
+
+        String dom = chromium.dumpDom(page);
+        assertThat(dom).contains("<h1>cinema-12</h1>").doesNotContain("<script");
+        assertThat(attributes(dom, "<figure [^>]*data-pattern=\"([^\"]+)\"")).containsExactlyElementsOf(plan.patternIds());
+        assertThat(attributes(dom, "<svg [^>]*data-pattern=\"([^\"]+)\"")).containsExactlyElementsOf(plan.patternIds());
+        assertThat(attributes(dom, "<tr class=\"legend-mark\" data-mark=\"([^\"]*)\""))
+                .containsExactlyInAnyOrderElementsOf(KitReader.read(Path.of("sample-kits", "cinema-12")).bars()
+                        .stream().map(Bar::mark).toList());
+        assertThat(attributes(dom, "<figure [^>]*data-bundle=\"([^\"]+)\"")).containsExactlyElementsOf(plan.bundleLayouts());
+        for (String bundle : plan.bundleLayouts()) {
+            String figure = element(dom, "<figure [^>]*data-bundle=\"" + Pattern.quote(bundle) + "\"", "</figure>");
+            assertThat(figure).as(bundle).containsPattern("<svg [^>]*class=\"bundle-drawing\" data-bundle=\""
+                    + Pattern.quote(bundle) + "\"").contains("<g class=\"side-view\">").contains("<g class=\"cross-section\"");
+        }
+        Set<String> crateTypes = new HashSet<>(attributes(dom, "<figure [^>]*data-crate-type=\"([^\"]+)\""));
+        assertThat(crateTypes).containsExactlyInAnyOrderElementsOf(plan.crateTypes());
+        assertThat(attributes(dom, "<svg [^>]*class=\"crate-section\" data-crate=\"([^\"]+)\"")).isNotEmpty();
+        assertThat(attributes(dom, "<figure [^>]*data-vehicle=\"([^\"]+)\"")).containsExactlyElementsOf(plan.vehicles());
+        assertThat(attributes(dom, "<svg [^>]*class=\"deck-plan\" data-vehicle=\"([^\"]+)\""))
+                .containsExactlyElementsOf(plan.vehicles());
+        String cautions = element(dom, "<section id=\"cautions\"", "</section>");
+        assertThat(cautions).contains("Material and logistics planning only")
+                .contains("It does not check structural capacity").contains("EN 12195-1");
+
+        Path pdf = dir.resolve("report.pdf");
+        chromium.printToPdf(page, pdf);
+        String raw = new String(java.nio.file.Files.readAllBytes(pdf), java.nio.charset.StandardCharsets.ISO_8859_1);
+        long pages = Pattern.compile("/Type\\s*/Page\\b").matcher(raw).results().count();
+        // summary and order, a page per saw-sheet section, nested bundles, crates and trucks, cautions, inputs
+        assertThat(pages).isGreaterThanOrEqualTo(1 + plan.sections() + 4);
     }
 
     @Test
