@@ -28,7 +28,7 @@ public record SearchLimits(double timeLimitSeconds, int columnIterations, int di
 
     /** The default work limits with the given safety-net time limit. */
     public static SearchLimits defaults(double timeLimitSeconds) {
-        return new SearchLimits(timeLimitSeconds, 4000, 60, 1.0, 1.0, 10_000);
+        return new SearchLimits(timeLimitSeconds, 4000, 60, 1.0, 2.0, 40_000);
     }
 
     public SearchLimits withTimeLimitSeconds(double seconds) {
