@@ -29,6 +29,7 @@ import kitwright.model.Origin;
 import kitwright.plan.PlanProgress;
 import kitwright.plan.PlanResult;
 import kitwright.plan.Planner;
+import kitwright.spares.SparesKits;
 import kitwright.validate.CratePlanValidator;
 import kitwright.validate.CutPlanValidator;
 import kitwright.validate.LoadPlanValidator;
@@ -63,34 +64,17 @@ class PlanFiguresJsonTest {
     private static Kit plainKit;
     private static PlanResult plainResult;
 
+    /** The kit of {@link SparesKits#write}: A 10 and B 6 bars on CHS 48.3x3.2, C 12 (10 needed) on CHS 33.7x2.6. */
     @BeforeAll
     static void planBothKits() throws Exception {
-        kit = KitReader.read(writeKit(tmp, "with-policy", "{\"lossRatePerCycle\": " + P + ", \"cycles\": " + CYCLES
+        kit = KitReader.read(SparesKits.write(tmp, "with-policy", "{\"lossRatePerCycle\": " + P + ", \"cycles\": " + CYCLES
                 + ", \"serviceLevel\": " + LEVEL + "}"));
         result = Planner.run(kit, Planner.Options.DEFAULT, PlanProgress.NONE);
         validate(kit, result);
         json = PrettyJson.mapper().readTree(PlanFiles.of(result, DATE).get(PlanFiles.PLAN_JSON));
-        plainKit = KitReader.read(writeKit(tmp, "no-policy", null));
+        plainKit = KitReader.read(SparesKits.write(tmp, "no-policy", null));
         plainResult = Planner.run(plainKit, Planner.Options.DEFAULT, PlanProgress.NONE);
         validate(plainKit, plainResult);
-    }
-
-    /**
-     * Marks A and B on CHS 48.3x3.2, C on CHS 33.7x2.6 (12 bars, 2 more than the structures need); two structures
-     * that do not stand together, so the kit holds A 10, B 6, C 12 = 28 bars for 10+6+10 + 8+6+4 = 44 members.
-     */
-    static Path writeKit(Path dir, String name, String sparesJson) throws IOException {
-        Path kitDir = Files.createDirectories(dir.resolve(name));
-        String catalog = Path.of("stock-catalogs", "steel-chs.csv").toAbsolutePath().toString().replace('\\', '/');
-        Files.writeString(kitDir.resolve("kit.json"), "{\n  \"name\": \"" + name + "\",\n  \"stockCatalog\": \""
-                + catalog + "\",\n  \"timeLimitSeconds\": 5" + (sparesJson == null ? "" : ",\n  \"spares\": "
-                + sparesJson) + "\n}\n");
-        Files.writeString(kitDir.resolve("bars.csv"), "mark,section,length_mm,quantity\n"
-                + "A,CHS 48.3x3.2,1450,\nB,CHS 48.3x3.2,2400,\nC,CHS 33.7x2.6,950,12\n");
-        Files.writeString(kitDir.resolve("structures.csv"), "structure,mark,count\n"
-                + "kiosk,A,10\nkiosk,B,6\nkiosk,C,10\nshelter,A,8\nshelter,B,6\nshelter,C,4\n");
-        Files.writeString(kitDir.resolve("joints.csv"), "mark,diameter_mm,mass_kg,quantity\nN60,60,0.8,14\n");
-        return kitDir;
     }
 
     /** Every stage's plan through the validators before any other assertion. */
