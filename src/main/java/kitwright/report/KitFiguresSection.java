@@ -61,10 +61,12 @@ public final class KitFiguresSection {
      */
     public static ReportSection of(Kit kit, KitMetrics figures, SparesOutcome spares) {
         List<Figure> top = new ArrayList<>();
-        top.add(new Figure("Embodied carbon", ReportFormat.kg(figures.co2eKg()) + "\u00A0CO\u2082e",
+        top.add(new Figure("Embodied carbon", figures.co2eKg() == null ? ShopFormat.UNKNOWN
+                : ReportFormat.kg(figures.co2eKg()) + "\u00A0CO\u2082e",
                 figures.co2eKg() == null ? "no materials file" : "stock bought \u00D7 the material's factor"));
-        top.add(new Figure("Stock bought", ReportFormat.kg(figures.boughtMassKg()), ShopFormat.count(figures.boughtPieces())
-                + " mill pieces, " + ShopFormat.metres(figures.boughtLengthMm()) + "\u00A0m"));
+        top.add(new Figure("Stock bought", ReportFormat.kg(figures.boughtMassKg()),
+                ShopFormat.count(figures.boughtPieces()) + " mill pieces, "
+                        + ShopFormat.metres(figures.boughtLengthMm()) + "\u00A0m"));
         top.add(new Figure("Kit mass with joints", ReportFormat.kg(figures.kitMassKg()),
                 "bars in the quantities of bars.csv, and joints"));
         top.add(new Figure("Reuse ratio", ShopFormat.decimal(figures.reuseRatio(), 2, true),

@@ -165,6 +165,7 @@ class KitFiguresSectionTest {
                 .contains("<code>&quot;spares&quot;: {&quot;lossRatePerCycle&quot;: 0.01, &quot;cycles&quot;: 10,"
                         + " &quot;serviceLevel&quot;: 0.95}</code>")
                 .doesNotContain("kit-figures-spares").doesNotContain("kit-figures-carbon")
-                .contains("Not known: the kit has no materials file");
+                .contains("Not known: the kit has no materials file")
+                .contains("<div class=\"figure-value\">" + ShopFormat.UNKNOWN + "</div>");
     }
 }

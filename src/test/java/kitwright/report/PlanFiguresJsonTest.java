@@ -67,7 +67,8 @@ class PlanFiguresJsonTest {
     /** The kit of {@link SparesKits#write}: A 10 and B 6 bars on CHS 48.3x3.2, C 12 (10 needed) on CHS 33.7x2.6. */
     @BeforeAll
     static void planBothKits() throws Exception {
-        kit = KitReader.read(SparesKits.write(tmp, "with-policy", "{\"lossRatePerCycle\": " + P + ", \"cycles\": " + CYCLES
+        kit = KitReader.read(SparesKits.write(tmp, "with-policy", "{\"lossRatePerCycle\": " + P
+                + ", \"cycles\": " + CYCLES
                 + ", \"serviceLevel\": " + LEVEL + "}"));
         result = Planner.run(kit, Planner.Options.DEFAULT, PlanProgress.NONE);
         validate(kit, result);
