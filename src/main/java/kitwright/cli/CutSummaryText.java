@@ -82,7 +82,7 @@ final class CutSummaryText {
                 sb.append(s.section()).append(": INFEASIBLE: ").append(s.reason()).append('\n');
             }
             if (!s.spares().isEmpty()) {
-                sb.append(s.section()).append(": spares cut from offcuts: ").append(s.spares().stream()
+                sb.append(s.section()).append(": spares cut: ").append(s.spares().stream()
                         .map(x -> x.mark() + " " + x.count()).collect(Collectors.joining(", "))).append('\n');
             }
         }

@@ -3,12 +3,11 @@ package kitwright.compare;
 import java.util.ArrayList;
 import java.util.List;
 import kitwright.cutting.SectionCutPlan;
-import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Status;
 import kitwright.plan.PlanResult;
 
 /**
- * Sums up a whole-chain plan as an {@link OptionSummary}: the kit metrics of its cutting plan, the counts of
+ * Sums up a whole-chain plan as an {@link OptionSummary}: the kit figures the plan carries, the counts of
  * bundles, crates and vehicles with the trip cost, and the worst status of all stages. A stage that did not run
  * (no crate or vehicle catalog) or found no plan leaves its figures null. Pure function.
  */
@@ -42,7 +41,7 @@ public final class OptionSummaries {
                 tripCost = result.loads().tripCost();
             }
         }
-        return OptionSummary.of(result.kit().name(), KitMetricsCalculator.of(result.kit(), result.cutting()),
+        return OptionSummary.of(result.kit().name(), result.figures(),
                 new Logistics(bundles, crates, vehicles, tripCost), statuses);
     }
 }

@@ -4,21 +4,35 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import kitwright.cutting.CutPlan;
 import kitwright.loading.LoadPlan;
+import kitwright.metrics.KitMetrics;
+import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Kit;
 import kitwright.model.Status;
 import kitwright.nesting.NestResult;
 import kitwright.packing.CratePlan;
+import kitwright.spares.SparesOutcome;
 
 /**
  * Everything the chain planned for one kit. {@code crates} and {@code loads} are null when the kit has no crate or
  * vehicle catalog (the report then says logistics were not planned).
  *
+ * @param spares       the service-life spares (sizing, where they came from, extra cost), or null when the kit has
+ *                     no {@code spares} policy
+ * @param figures      the kit's figures over the cutting plan (reuse ratio, stock, waste, masses, embodied carbon)
  * @param stageSeconds wall-clock seconds per stage, for stderr and timing.json only (never in plan.json)
  */
-public record PlanResult(Kit kit, KitSummary summary, CutPlan cutting, NestResult nesting, CratePlan crates,
-                         LoadPlan loads, Map<String, Double> stageSeconds) {
+public record PlanResult(Kit kit, KitSummary summary, CutPlan cutting, SparesOutcome spares, KitMetrics figures,
+                         NestResult nesting, CratePlan crates, LoadPlan loads, Map<String, Double> stageSeconds) {
     public PlanResult {
+        java.util.Objects.requireNonNull(figures, "figures");
         stageSeconds = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(stageSeconds));
+    }
+
+    /** A plan without service-life spares, its figures computed from the kit and the cutting plan. */
+    public PlanResult(Kit kit, KitSummary summary, CutPlan cutting, NestResult nesting, CratePlan crates,
+                      LoadPlan loads, Map<String, Double> stageSeconds) {
+        this(kit, summary, cutting, null, KitMetricsCalculator.of(kit, cutting), nesting, crates, loads,
+                stageSeconds);
     }
 
     public boolean logisticsPlanned() {

@@ -7,6 +7,8 @@ import java.util.function.Supplier;
 import kitwright.cutting.CutPlan;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.Shipping;
+import kitwright.metrics.KitMetrics;
+import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Kit;
 import kitwright.nesting.NestResult;
 import kitwright.nesting.Nester;
@@ -16,7 +18,9 @@ import kitwright.spares.SparesStage;
 
 /**
  * The whole chain for one kit, as one pure function: cutting, then nesting of every cut piece, then crating of
- * the bundles and joint boxes and loading of the crates onto vehicles. Each stage sees only the records of the
+ * the bundles and joint boxes and loading of the crates onto vehicles. The cutting step sizes and cuts the kit's
+ * service-life spares when kit.json has a policy; the kit's figures (reuse ratio, stock, waste, masses, embodied
+ * carbon) are computed once, from the final cutting plan. Each stage sees only the records of the
  * stage before it. Deterministic: the stages use one solver worker and work limits, so the plan does not depend
  * on machine speed; only {@link PlanResult#stageSeconds()} does.
  */
@@ -34,8 +38,10 @@ public final class Planner {
         KitSummary summary = KitSummary.of(kit);
 
         progress.stage("cutting", kit.usedSections().size() + " sections");
-        CutPlan cutting = timed(seconds, "cutting", () -> SparesStage.cut(kit, options.sparesFromOffcuts(), null,
-                progress).plan());
+        SparesStage.Result cut = timed(seconds, "cutting", () -> SparesStage.cut(kit, options.sparesFromOffcuts(),
+                null, progress));
+        CutPlan cutting = cut.plan();
+        KitMetrics figures = KitMetricsCalculator.of(kit, cutting);
 
         progress.stage("nesting", "every cut piece into bundles");
         NestResult nesting = timed(seconds, "nesting", () -> Nester.run(kit, cutting,
@@ -52,7 +58,7 @@ public final class Planner {
         } else {
             progress.stage("crating and loading", "skipped: no crate or vehicle catalog");
         }
-        return new PlanResult(kit, summary, cutting, nesting, crates, loads, seconds);
+        return new PlanResult(kit, summary, cutting, cut.outcome(), figures, nesting, crates, loads, seconds);
     }
 
     private static <T> T timed(Map<String, Double> seconds, String stage, Supplier<T> work) {

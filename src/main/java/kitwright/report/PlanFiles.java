@@ -50,6 +50,9 @@ public final class PlanFiles {
         root.put("nesting", result.nesting().plan());
         root.put("crates", result.crates());
         root.put("loads", result.loads());
+        // Issue 7: service-life spares (null without a policy in kit.json) and the kit's figures.
+        root.put("spares", PlanFiguresJson.spares(result.spares()));
+        root.put("figures", PlanFiguresJson.figures(result.figures()));
         return root;
     }
 
@@ -66,6 +69,7 @@ public final class PlanFiles {
                     + " crating and loading were skipped. Add crates.csv and vehicles.csv beside the tube catalog"
                     + " or name them in kit.json.");
         }
+        builder.section(KitFiguresSection.of(result.kit(), result.figures(), result.spares()));
         return builder.build();
     }
 }

@@ -22,6 +22,10 @@ public final class SparesStage {
      * @param supply null without a spares policy
      */
     public record Result(CutPlan plan, SparesPlan sizing, SparesCuttingResult supply) {
+        /** The spares' sizing, supply and extra cost without the plan, or null without a spares policy. */
+        public SparesOutcome outcome() {
+            return sizing == null || supply == null ? null : SparesOutcome.of(sizing, supply);
+        }
     }
 
     /**

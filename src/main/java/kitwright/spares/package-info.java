@@ -10,6 +10,9 @@
  * {@code P(losses <= s) >= L^(1/m)}.
  *
  * <p>The functions here are pure (records in, records out). {@link kitwright.spares.ServiceLifeSpares} sizes the
- * spares; cutting them from offcuts before buying stock is done over the cutting stage's API.
+ * spares; cutting them from offcuts before buying stock is done over the cutting stage's API
+ * ({@link kitwright.spares.SparesCutting}, {@link kitwright.spares.SparesStage}). The plan of a kit carries the
+ * outcome ({@link kitwright.spares.SparesOutcome}: sizing, where the spares came from, extra cost) into plan.json's
+ * {@code "spares"} and the report's "Kit figures and service-life spares".
  */
 package kitwright.spares;
