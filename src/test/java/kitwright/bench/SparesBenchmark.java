@@ -29,7 +29,7 @@ import kitwright.validate.CutPlanValidator;
  * mvn -q -B -o test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt
  * java -cp target/classes:target/test-classes:$(cat target/cp.txt) kitwright.bench.SparesBenchmark [KIT_DIR] [RUNS]
  * </pre>
- * KIT_DIR defaults to {@code sample-kits/cinema-12} (its kit.json sets a spares policy), RUNS to 3. Per run: the
+ * KIT_DIR defaults to {@code sample-kits/alu-kiosk} (its kit.json sets a spares policy), RUNS to 3. Per run: the
  * whole chain without the policy, the whole chain with it, and the spares cutting alone with re-plans that solve
  * every section again (as before the per-section memory of {@link KitCuttingSteps}), to show what the memory
  * saves. Prints the median seconds of each and checks every cutting plan with the shared validator. The plans use
@@ -41,7 +41,7 @@ public final class SparesBenchmark {
     }
 
     public static void main(String[] args) throws Exception {
-        Path dir = Path.of(args.length > 0 ? args[0] : "sample-kits/cinema-12");
+        Path dir = Path.of(args.length > 0 ? args[0] : "sample-kits/alu-kiosk");
         int runs = args.length > 1 ? Integer.parseInt(args[1]) : 3;
         Kit kit = KitReader.read(dir);
         if (kit.settings().spares() == null) {

@@ -77,7 +77,7 @@ class PlannerTest {
 
         JsonNode plan = PrettyJson.mapper().readTree(files.get("plan.json"));
         assertThat(iterate(plan.fieldNames())).containsExactly("kit", "date", "summary", "cutting", "nesting",
-                "crates", "loads");
+                "crates", "loads", "spares", "figures");
         assertThat(plan.get("date").asText()).isEqualTo("2026-12-01");
         assertThat(plan.get("nesting").get("bundles")).hasSize(nesting.bundles().size());
         assertThat(plan.get("loads").get("vehicles")).hasSize(result.loads().vehicles().size());

@@ -11,19 +11,19 @@ import org.apache.commons.math3.distribution.BinomialDistribution;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
-/** The demo's spares policy (sample-kits/cinema-12, invented data) is read and sized as the report shows it. */
+/** The demo's spares policy (sample-kits/alu-kiosk, invented data) is read and sized as the report shows it. */
 class SampleKitSparesTest {
 
     @Test
-    @DisplayName("cinema-12 sets p = 0.01, c = 10, level 0.95; its spares per mark agree with commons-math3")
-    void cinema12SizesItsSpares() throws Exception {
-        Kit kit = KitReader.read(Path.of("sample-kits", "cinema-12"));
-        assertThat(kit.settings().spares()).isEqualTo(new SparesPolicy(0.01, 10, 0.95));
+    @DisplayName("alu-kiosk sets p = 0.02, c = 20, level 0.95; its spares per mark agree with commons-math3")
+    void aluKioskSizesItsSpares() throws Exception {
+        Kit kit = KitReader.read(Path.of("sample-kits", "alu-kiosk"));
+        assertThat(kit.settings().spares()).isEqualTo(new SparesPolicy(0.02, 20, 0.95));
         SparesPlan plan = ServiceLifeSpares.plan(kit.bars(), kit.settings().spares());
 
-        double q = 1 - Math.pow(0.99, 10); // 0.0956179..., by hand
+        double q = 1 - Math.pow(0.98, 20); // 0.3323920..., by hand
         long inService = kit.bars().stream().filter(b -> b.requiredQuantity() > 0).count();
-        assertThat(inService).isEqualTo(12);
+        assertThat(inService).isEqualTo(5);
         double perMark = Math.pow(0.95, 1.0 / inService);
         double kitLevel = 1;
         for (Bar bar : kit.bars()) {
