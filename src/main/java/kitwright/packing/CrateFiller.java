@@ -3,6 +3,7 @@ package kitwright.packing;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.TreeSet;
 import kitwright.model.CrateType;
 
 /**
@@ -38,22 +39,25 @@ final class CrateFiller {
      * first with lanes above. The caller keeps the one that suits it.
      */
     List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        CrateLayout lanesFirst = build(crateIndex, crate, types, available, false);
+        CrateLayout lanesFirst = build(crateIndex, crate, types, available, Start.LANES);
         boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
         boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
         if (!boxes || !bundles) {
             return List.of(lanesFirst);
         }
-        return List.of(lanesFirst, build(crateIndex, crate, types, available, true));
+        return List.of(lanesFirst, build(crateIndex, crate, types, available, Start.BOX_TIERS),
+                build(crateIndex, crate, types, available, Start.BOX_COLUMN));
     }
 
     /** The lanes-first layout (see {@link #fills}). */
     CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        return build(crateIndex, crate, types, available, false);
+        return build(crateIndex, crate, types, available, Start.LANES);
     }
 
-    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available,
-                              boolean boxesFirst) {
+    /** What goes in first: lanes from the floor; boxes in floor tiers; boxes in a column along one side wall. */
+    private enum Start { LANES, BOX_TIERS, BOX_COLUMN }
+
+    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available, Start start) {
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
@@ -62,12 +66,51 @@ final class CrateFiller {
         List<CrateLayout.Slot> slots = new ArrayList<>();
         double[] mass = {0};
         int[] left = available.clone();
-        double floor = boxesFirst ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
-        List<LaneBuilder.Lane> lanes = new LaneBuilder().build(offeredBundles(crate, types, left, net - mass[0]),
-                length);
-        double[] used = placeLanes(lanes, width, floor, height, net, mass, counts, slots);
-        placeBoxes(crate, types, left, net, floor, used[0], used[1], mass, counts, slots);
-        return new CrateLayout(crateIndex, counts, slots, mass[0]);
+        double floor = start == Start.BOX_TIERS ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
+        double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
+        List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
+                offeredBundles(crate, types, left, net - mass[0]), length));
+        // widest cells first, and the longest lanes of a cell lowest, so that upper lanes lie over lower ones
+        lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
+                .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
+        double[] used = placeLanes(lanes, types, side, width - side, floor, height, net, mass, counts, slots);
+        placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
+        List<CrateLayout.Slot> standing = Support.settle(slots, types);
+        int[] kept = new int[types.size()];
+        double keptMass = 0;
+        for (CrateLayout.Slot s : standing) {
+            kept[s.itemType()]++;
+            keptMass += types.get(s.itemType()).massKg();
+        }
+        return new CrateLayout(crateIndex, kept, standing, keptMass);
+    }
+
+    /**
+     * Boxes in full-height stacks in the narrowest strip along the left wall (y from 0) that holds every box on
+     * offer (or the whole width); returns the strip's width, where the lanes begin.
+     */
+    private static double boxColumn(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
+                                    int[] counts, List<CrateLayout.Slot> slots) {
+        List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
+        ItemType box = boxes.get(0);
+        double width = crate.innerWidthMm();
+        TreeSet<Double> strips = new TreeSet<>();
+        for (double dim : new double[] {box.lengthMm(), box.widthMm(), box.heightMm()}) {
+            for (int k = 1; k * dim <= width + EPS; k++) {
+                strips.add(k * dim);
+            }
+        }
+        double strip = width;
+        for (double w : strips) {
+            if (BoxGrid.capacity(crate.innerLengthMm(), w, crate.innerHeightMm(), box) >= wanted) {
+                strip = w;
+                break;
+            }
+        }
+        BoxGrid.fill(0, 0, 0, crate.innerLengthMm(), strip, crate.innerHeightMm(), boxes, left, net, mass, counts,
+                slots);
+        return strip;
     }
 
     /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
@@ -128,8 +171,12 @@ final class CrateFiller {
     /**
      * Places lanes into row groups; returns {end of the longest lane, top of the rows}.
      */
-    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double floor, double height,
-                                       double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
+    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, List<ItemType> types, double y0, double width, double floor,
+                                       double height, double net, double[] mass, int[] counts,
+                                       List<CrateLayout.Slot> slots) {
+        if (width <= EPS) {
+            return new double[] {0, floor};
+        }
         double base = floor;
         RowGroup current = null;
         List<RowGroup.Cell> free = new ArrayList<>();
@@ -170,7 +217,10 @@ final class CrateFiller {
                 mass[0] += t.massKg();
                 counts[t.index()]++;
                 double r = t.diameterMm() / 2;
-                slots.add(new CrateLayout.Slot(t.index(), x, cell.y() - r, cell.z() - r, t.lengthMm(),
+                double z = t.diameterMm() < cell.d() - EPS
+                        ? settle(x, t.lengthMm(), y0 + cell.y(), r, cell.z() - cell.d() / 2 + r, slots, types)
+                        : cell.z();
+                slots.add(new CrateLayout.Slot(t.index(), x, y0 + cell.y() - r, z - r, t.lengthMm(),
                         t.diameterMm(), t.diameterMm()));
                 x += t.lengthMm();
             }
@@ -178,6 +228,34 @@ final class CrateFiller {
         }
         double top = base + (current == null ? 0 : current.heightUsed());
         return new double[] {endX, top};
+    }
+
+    /**
+     * Centre height at which a bundle thinner than its cell comes to rest when let down from the bottom of its
+     * cell (centre {@code from}) onto the items already placed under it, or onto the floor.
+     */
+    private static double settle(double x, double length, double axisY, double r, double from,
+                                 List<CrateLayout.Slot> slots, List<ItemType> types) {
+        double rest = r;
+        for (CrateLayout.Slot s : slots) {
+            if (s.x() >= x + length - EPS || x >= s.x() + s.length() - EPS) {
+                continue;
+            }
+            boolean bundle = types.get(s.itemType()).kind() == ItemKind.BUNDLE;
+            double sy = s.y() + s.width() / 2;
+            double sz = s.z() + s.height() / 2;
+            if (bundle && sz < from - EPS) {
+                double reach = r + s.width() / 2;
+                double dy = Math.abs(sy - axisY);
+                if (dy < reach) {
+                    rest = Math.max(rest, sz + Math.sqrt(reach * reach - dy * dy));
+                }
+            } else if (!bundle && s.z() + s.height() <= from - r + EPS && s.y() < axisY + r
+                    && axisY - r < s.y() + s.width()) {
+                rest = Math.max(rest, s.z() + s.height() + r);
+            }
+        }
+        return Math.min(rest, from);
     }
 
     /** The free cell with the smallest diameter that takes a lane of cell d, removed from the list. */
@@ -192,7 +270,7 @@ final class CrateFiller {
     }
 
     private static void placeBoxes(CrateType crate, List<ItemType> types, int[] left, double net, double floor,
-                                   double endX, double top, double[] mass, int[] counts,
+                                   double side, double endX, double top, double[] mass, int[] counts,
                                    List<CrateLayout.Slot> slots) {
         List<ItemType> boxes = types.stream()
                 .filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
@@ -203,10 +281,11 @@ final class CrateFiller {
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
         // the end of the crate behind the longest lane, full width, from the floor tiers up
-        BoxGrid.fill(endX, 0, floor, length - endX, width, height - floor, boxes, left, net, mass, counts, slots);
+        BoxGrid.fill(endX, side, floor, length - endX, width - side, height - floor, boxes, left, net, mass, counts,
+                slots);
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
-            BoxGrid.fill(0, 0, top, endX, width, height - top, boxes, left, net, mass, counts, slots);
+            BoxGrid.fill(0, side, top, endX, width - side, height - top, boxes, left, net, mass, counts, slots);
         }
     }
 }

@@ -128,20 +128,28 @@ public final class LaneCratePacker implements CratePacker {
             surplus[t.index()] -= t.demand();
         }
         List<CrateLayout> result = new ArrayList<>(layouts);
-        for (int k = result.size() - 1; k >= 0; k--) {
-            CrateLayout l = result.get(k);
-            List<CrateLayout.Slot> kept = new ArrayList<>(l.slots());
-            boolean changed = false;
-            for (int s = kept.size() - 1; s >= 0; s--) {
-                int type = kept.get(s).itemType();
-                if (surplus[type] > 0) {
-                    surplus[type]--;
-                    kept.remove(s);
-                    changed = true;
+        // first only places that nothing rests on, so that what stays keeps its support; then any, from the end
+        for (boolean anyPlace : new boolean[] {false, true}) {
+            for (int k = result.size() - 1; k >= 0; k--) {
+                CrateLayout l = result.get(k);
+                List<CrateLayout.Slot> kept = new ArrayList<>(l.slots());
+                boolean changed = false;
+                boolean again = true;
+                while (again) {
+                    again = false;
+                    for (int s = kept.size() - 1; s >= 0; s--) {
+                        int type = kept.get(s).itemType();
+                        if (surplus[type] > 0 && (anyPlace || Support.bearsNothing(kept, s, types))) {
+                            surplus[type]--;
+                            kept.remove(s);
+                            changed = true;
+                            again = !anyPlace;
+                        }
+                    }
                 }
-            }
-            if (changed) {
-                result.set(k, relayout(l.crateType(), kept, types));
+                if (changed) {
+                    result.set(k, relayout(l.crateType(), kept, types));
+                }
             }
         }
         result.removeIf(CrateLayout::isEmpty);
