@@ -75,7 +75,7 @@ final class CrateFiller {
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
         double[] used = placeLanes(lanes, types, side, width - side, floor, height, net, mass, counts, slots);
         placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
-        List<CrateLayout.Slot> standing = Support.settle(slots, types);
+        List<CrateLayout.Slot> standing = Support.settle(slots, types, width);
         int[] kept = new int[types.size()];
         double keptMass = 0;
         for (CrateLayout.Slot s : standing) {

@@ -74,7 +74,7 @@ public final class LaneCratePacker implements CratePacker {
         if (layouts.isEmpty()) {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
-        layouts = downsize(dropSurplus(layouts, items.types()), crates, cost, items.types());
+        layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
         List<Crate> result = realise(layouts, crates, items);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
         CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);
@@ -117,7 +117,9 @@ public final class LaneCratePacker implements CratePacker {
     }
 
     /** Leaves empty the places beyond each item type's demand, from the last crates back. */
-    private static List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types) {
+    private static List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types,
+                                                 List<CrateType> crates) {
+        double[] widths = crates.stream().mapToDouble(CrateType::innerWidthMm).toArray();
         int[] surplus = new int[types.size()];
         for (CrateLayout l : layouts) {
             for (int i = 0; i < surplus.length; i++) {
@@ -139,7 +141,8 @@ public final class LaneCratePacker implements CratePacker {
                     again = false;
                     for (int s = kept.size() - 1; s >= 0; s--) {
                         int type = kept.get(s).itemType();
-                        if (surplus[type] > 0 && (anyPlace || Support.bearsNothing(kept, s, types))) {
+                        boolean free = anyPlace || Support.bearsNothing(kept, s, types, widths[l.crateType()]);
+                        if (surplus[type] > 0 && free) {
                             surplus[type]--;
                             kept.remove(s);
                             changed = true;

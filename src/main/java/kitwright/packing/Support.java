@@ -11,7 +11,8 @@ import java.util.TreeSet;
  * bearing items under the centre of its footprint and under at least half its footprint area. A bundle (a
  * cylinder lying along x) needs support at every x along its length: a bearing item whose y range overlaps its
  * axis band (axis y &plusmn; d/4), or a cradle of bundles below that its circle touches, one on each side of its
- * axis or one right under it (square and staggered rows).
+ * axis or one right under it (square and staggered rows); on one side only when the side wall on the open side
+ * is nearer than the contact's slack, so that the wall catches the bundle before it rolls off.
  *
  * <p>{@link #settle} keeps, from the floor up, only the items so supported by the items kept: the guarantee
  * {@link CrateFiller} gives every layout.
@@ -26,12 +27,12 @@ final class Support {
     }
 
     /** The slots that stand, from the floor up, in build order; the others are left out. */
-    static List<CrateLayout.Slot> settle(List<CrateLayout.Slot> slots, List<ItemType> types) {
+    static List<CrateLayout.Slot> settle(List<CrateLayout.Slot> slots, List<ItemType> types, double width) {
         List<CrateLayout.Slot> byHeight = new ArrayList<>(slots);
         byHeight.sort(Comparator.comparingDouble(CrateLayout.Slot::z));
         List<CrateLayout.Slot> kept = new ArrayList<>();
         for (CrateLayout.Slot s : byHeight) {
-            if (s.z() <= TOUCH || supported(s, kept, types)) {
+            if (s.z() <= TOUCH || supported(s, kept, types, width)) {
                 kept.add(s);
             }
         }
@@ -39,24 +40,25 @@ final class Support {
     }
 
     /** Whether every slot above the floor is supported by the others. */
-    static boolean holds(List<CrateLayout.Slot> slots, List<ItemType> types) {
-        return slots.stream().allMatch(s -> s.z() <= TOUCH || supported(s, slots, types));
+    static boolean holds(List<CrateLayout.Slot> slots, List<ItemType> types, double width) {
+        return slots.stream().allMatch(s -> s.z() <= TOUCH || supported(s, slots, types, width));
     }
 
     /** Whether the slot at {@code index} can be taken out without leaving another slot unsupported. */
-    static boolean bearsNothing(List<CrateLayout.Slot> slots, int index, List<ItemType> types) {
+    static boolean bearsNothing(List<CrateLayout.Slot> slots, int index, List<ItemType> types, double width) {
         CrateLayout.Slot gone = slots.get(index);
         List<CrateLayout.Slot> rest = new ArrayList<>(slots);
         rest.remove(index);
         for (CrateLayout.Slot o : rest) {
-            if (o.z() > gone.z() + TOUCH && o.x() < end(gone) && gone.x() < end(o) && !supported(o, rest, types)) {
+            if (o.z() > gone.z() + TOUCH && o.x() < end(gone) && gone.x() < end(o) && !supported(o, rest, types, width)) {
                 return false;
             }
         }
         return true;
     }
 
-    static boolean supported(CrateLayout.Slot s, List<CrateLayout.Slot> others, List<ItemType> types) {
+    static boolean supported(CrateLayout.Slot s, List<CrateLayout.Slot> others, List<ItemType> types,
+                             double width) {
         List<CrateLayout.Slot> bearing = new ArrayList<>();
         for (CrateLayout.Slot o : others) {
             if (o != s && Math.abs(o.z() + o.height() - s.z()) <= TOUCH && o.x() < end(s) - TOUCH
@@ -74,6 +76,12 @@ final class Support {
                 .filter(o -> o.y() < axisY + d / 4 && axisY - d / 4 < o.y() + o.width()).toList();
         List<CrateLayout.Slot> left = new ArrayList<>();
         List<CrateLayout.Slot> right = new ArrayList<>();
+        // a bundle held on one side only rolls towards the open side; the wall there catches it while it still
+        // rests on the bundle below, if the gap to the wall is less than the contact's slack (reach - |dy|)
+        double gapLeft = s.y();
+        double gapRight = width - s.y() - d;
+        List<CrateLayout.Slot> caughtLeft = new ArrayList<>();
+        List<CrateLayout.Slot> caughtRight = new ArrayList<>();
         for (CrateLayout.Slot o : others) {
             if (o == s || types.get(o.itemType()).kind() != ItemKind.BUNDLE) {
                 continue;
@@ -81,11 +89,18 @@ final class Support {
             double dy = o.y() + o.width() / 2 - axisY;
             double dz = o.z() + o.height() / 2 - axisZ;
             if (dz < 0 && Math.abs(Math.hypot(dy, dz) - (d + o.width()) / 2) <= TOUCH / 2) {
+                double slack = (d + o.width()) / 2 - Math.abs(dy);
                 if (dy <= TOUCH / 2) {
                     left.add(o);
+                    if (slack > gapRight + TOUCH) {
+                        caughtRight.add(o);
+                    }
                 }
                 if (dy >= -TOUCH / 2) {
                     right.add(o);
+                    if (slack > gapLeft + TOUCH) {
+                        caughtLeft.add(o);
+                    }
                 }
             }
         }
@@ -97,7 +112,9 @@ final class Support {
         Double[] x = cuts.toArray(Double[]::new);
         for (int a = 0; a + 1 < x.length; a++) {
             double mx = (x[a] + x[a + 1]) / 2;
-            if (x[a + 1] - x[a] > TOUCH / 2 && !covers(flat, mx) && !(covers(left, mx) && covers(right, mx))) {
+            boolean held = covers(flat, mx) || (covers(left, mx) && covers(right, mx)) || covers(caughtLeft, mx)
+                    || covers(caughtRight, mx);
+            if (x[a + 1] - x[a] > TOUCH / 2 && !held) {
                 return false;
             }
         }

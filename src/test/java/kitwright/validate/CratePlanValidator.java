@@ -35,7 +35,9 @@ import kitwright.packing.JointCount;
  *   along x, needs support at every x along its length: a bearing item whose y range overlaps its axis band
  *   (axis y &plusmn; d/4), or bundles of the row below that its circle touches (centres the sum of the radii
  *   apart within {@value #TOUCH} mm, lower than its own), one on each side of its axis or one right under it,
- *   as a bundle lies in a square or staggered row;</li>
+ *   as a bundle lies in a square or staggered row; or on one side only when the side wall on the other side is
+ *   nearer than the contact's slack (sum of radii - lateral offset), so the wall catches it before it rolls
+ *   off;</li>
  *   <li>the lower bound does not exceed the number of crates.</li>
  * </ul>
  * Throws AssertionError listing every violation found.
@@ -164,7 +166,7 @@ public final class CratePlanValidator {
         }
         checkOverlaps(c, errors);
         for (CrateItem i : c.items()) {
-            if (i.zMm() > TOUCH && !SupportRule.supported(i, c.items(), TOUCH, BOX_SHARE)) {
+            if (i.zMm() > TOUCH && !SupportRule.supported(i, c.items(), type.innerWidthMm(), TOUCH, BOX_SHARE)) {
                 errors.add(c.id() + ": " + i.ref() + " is not supported (floats at z = "
                         + Math.round(i.zMm()) + " mm)");
             }

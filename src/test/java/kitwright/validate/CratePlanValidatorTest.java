@@ -106,7 +106,7 @@ class CratePlanValidatorTest {
     private static boolean stands(CrateItem item, CrateItem... below) {
         List<CrateItem> all = new ArrayList<>(List.of(below));
         all.add(item);
-        return SupportRule.supported(item, all, CratePlanValidator.TOUCH, CratePlanValidator.BOX_SHARE);
+        return SupportRule.supported(item, all, 1000, CratePlanValidator.TOUCH, CratePlanValidator.BOX_SHARE);
     }
 
     @Test
@@ -140,6 +140,12 @@ class CratePlanValidatorTest {
         assertThat(stands(dip, bundle("A", 0, 50, 50, 1000, 100), bundle("B", 0, 150, 50, 1000, 100)))
                 .as("staggered row on row").isTrue();
         assertThat(stands(dip, bundle("A", 0, 50, 50, 1000, 100))).as("one side only: it would roll").isFalse();
+        // against the left wall (y = 0) on one bundle of the row below: the wall holds the other side
+        CrateItem atWall = bundle("W", 0, 50, 50 + 2 * pitch, 1000, 100);
+        assertThat(stands(atWall, bundle("A", 0, 100, 50 + pitch, 1000, 100))).as("wall and one bundle").isTrue();
+        CrateItem offWall = bundle("W", 0, 110, 50 + 2 * pitch, 1000, 100);
+        assertThat(stands(offWall, bundle("A", 0, 160, 50 + pitch, 1000, 100))).as("60 mm from the wall: rolls off")
+                .isFalse();
         // on the top of a box (300 mm high), the axis band (y 200 +- 25) over the box or not
         assertThat(stands(bundle("T", 0, 200, 350, 600, 100), box("L", 0, 0, 0))).isTrue();
         assertThat(stands(bundle("T", 0, 450, 350, 600, 100), box("L", 0, 0, 0))).as("beside the box").isFalse();

@@ -15,7 +15,7 @@ final class SupportRule {
     }
 
     /** Whether item i (above the floor) is supported by the other items of its crate. */
-    static boolean supported(CrateItem i, List<CrateItem> items, double touch, double boxShare) {
+    static boolean supported(CrateItem i, List<CrateItem> items, double width, double touch, double boxShare) {
         List<CrateItem> bearing = new ArrayList<>();
         for (CrateItem j : items) {
             if (j != i && Math.abs(j.zMm() + j.heightMm() - i.zMm()) <= touch
@@ -24,7 +24,7 @@ final class SupportRule {
             }
         }
         return i.kind() == ItemKind.BOX ? boxSupported(i, bearing, boxShare) : bundleSupported(i, items, bearing,
-                touch);
+                width, touch);
     }
 
     private static boolean boxSupported(CrateItem box, List<CrateItem> bearing, double share) {
@@ -67,7 +67,7 @@ final class SupportRule {
 
     /** Every stretch of the bundle's length has a bearing item under its axis band or a cradle of bundles. */
     private static boolean bundleSupported(CrateItem b, List<CrateItem> items, List<CrateItem> bearing,
-                                           double touch) {
+                                           double width, double touch) {
         double d = b.widthMm();
         double axisY = b.yMm() + d / 2;
         double axisZ = b.zMm() + d / 2;
@@ -75,6 +75,9 @@ final class SupportRule {
                 < j.yMm() + j.widthMm()).toList();
         List<CrateItem> left = new ArrayList<>();
         List<CrateItem> right = new ArrayList<>();
+        double gapLeft = b.yMm();
+        double gapRight = width - b.yMm() - d;
+        List<CrateItem> caught = new ArrayList<>();
         for (CrateItem j : items) {
             if (j == b || j.kind() != ItemKind.BUNDLE) {
                 continue;
@@ -83,11 +86,16 @@ final class SupportRule {
             double dz = j.zMm() + j.heightMm() / 2 - axisZ;
             double reach = (d + j.widthMm()) / 2;
             if (dz < 0 && Math.abs(Math.hypot(dy, dz) - reach) <= touch) {
+                double slack = reach - Math.abs(dy);
                 if (dy <= touch) {
                     left.add(j);
                 }
                 if (dy >= -touch) {
                     right.add(j);
+                }
+                // held on one side: it rolls towards the other, where a wall nearer than the slack catches it
+                if ((dy <= touch && slack > gapRight) || (dy >= -touch && slack > gapLeft)) {
+                    caught.add(j);
                 }
             }
         }
@@ -102,7 +110,7 @@ final class SupportRule {
                 continue;
             }
             double mx = (x[a] + x[a + 1]) / 2;
-            boolean held = covers(flat, mx) || (covers(left, mx) && covers(right, mx));
+            boolean held = covers(flat, mx) || (covers(left, mx) && covers(right, mx)) || covers(caught, mx);
             if (!held) {
                 return false;
             }
