@@ -70,8 +70,9 @@ final class CrateFiller {
         double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
         List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
                 offeredBundles(crate, types, left, net - mass[0]), length));
-        // widest cells first, and the longest lanes of a cell lowest, so that upper lanes lie over lower ones
+        // widest cells first, and of a cell the lanes that bear longest lowest, so that upper lanes lie on lower ones
         lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
+                .thenComparing(Comparator.comparingDouble(CrateFiller::bearingLength).reversed())
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
         double[] used = placeLanes(lanes, types, side, width - side, floor, height, net, mass, counts, slots);
         placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
@@ -83,6 +84,18 @@ final class CrateFiller {
             keptMass += types.get(s.itemType()).massKg();
         }
         return new CrateLayout(crateIndex, kept, standing, keptMass);
+    }
+
+    /** Length from x = 0 over which a lane is as wide as its cell (thinner bundles at its far end bear less). */
+    private static double bearingLength(LaneBuilder.Lane lane) {
+        double length = 0;
+        for (ItemType t : lane.items()) {
+            if (t.diameterMm() < lane.cellMm() - Support.TOUCH / 2) {
+                break;
+            }
+            length += t.lengthMm();
+        }
+        return length;
     }
 
     /**

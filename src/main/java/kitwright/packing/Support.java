@@ -12,7 +12,8 @@ import java.util.TreeSet;
  * cylinder lying along x) needs support at every x along its length: a bearing item whose y range overlaps its
  * axis band (axis y &plusmn; d/4), or a cradle of bundles below that its circle touches, one on each side of its
  * axis or one right under it (square and staggered rows); on one side only when the side wall on the open side
- * is nearer than the contact's slack, so that the wall catches the bundle before it rolls off.
+ * (or the side of a box there) is nearer than the contact's slack, so that it catches the bundle before it
+ * rolls off.
  *
  * <p>{@link #settle} keeps, from the floor up, only the items so supported by the items kept: the guarantee
  * {@link CrateFiller} gives every layout.
@@ -76,14 +77,17 @@ final class Support {
                 .filter(o -> o.y() < axisY + d / 4 && axisY - d / 4 < o.y() + o.width()).toList();
         List<CrateLayout.Slot> left = new ArrayList<>();
         List<CrateLayout.Slot> right = new ArrayList<>();
-        // a bundle held on one side only rolls towards the open side; the wall there catches it while it still
-        // rests on the bundle below, if the gap to the wall is less than the contact's slack (reach - |dy|)
-        double gapLeft = s.y();
-        double gapRight = width - s.y() - d;
-        List<CrateLayout.Slot> caughtLeft = new ArrayList<>();
-        List<CrateLayout.Slot> caughtRight = new ArrayList<>();
+        List<Double> leftSlack = new ArrayList<>();
+        List<Double> rightSlack = new ArrayList<>();
+        List<CrateLayout.Slot> faces = new ArrayList<>();
         for (CrateLayout.Slot o : others) {
-            if (o == s || types.get(o.itemType()).kind() != ItemKind.BUNDLE) {
+            if (o == s) {
+                continue;
+            }
+            if (types.get(o.itemType()).kind() == ItemKind.BOX) {
+                if (o.z() <= axisZ && axisZ <= o.z() + o.height()) {
+                    faces.add(o);
+                }
                 continue;
             }
             double dy = o.y() + o.width() / 2 - axisY;
@@ -92,15 +96,11 @@ final class Support {
                 double slack = (d + o.width()) / 2 - Math.abs(dy);
                 if (dy <= TOUCH / 2) {
                     left.add(o);
-                    if (slack > gapRight + TOUCH) {
-                        caughtRight.add(o);
-                    }
+                    leftSlack.add(slack);
                 }
                 if (dy >= -TOUCH / 2) {
                     right.add(o);
-                    if (slack > gapLeft + TOUCH) {
-                        caughtLeft.add(o);
-                    }
+                    rightSlack.add(slack);
                 }
             }
         }
@@ -112,13 +112,37 @@ final class Support {
         Double[] x = cuts.toArray(Double[]::new);
         for (int a = 0; a + 1 < x.length; a++) {
             double mx = (x[a] + x[a + 1]) / 2;
-            boolean held = covers(flat, mx) || (covers(left, mx) && covers(right, mx)) || covers(caughtLeft, mx)
-                    || covers(caughtRight, mx);
-            if (x[a + 1] - x[a] > TOUCH / 2 && !held) {
+            if (x[a + 1] - x[a] <= TOUCH / 2 || covers(flat, mx) || (covers(left, mx) && covers(right, mx))) {
+                continue;
+            }
+            // held on one side only, it rolls towards the other, where a side wall or the side of a box nearer
+            // than the contact's slack (sum of radii - lateral offset) catches it while it still rests below
+            double gapLeft = s.y();
+            double gapRight = width - s.y() - d;
+            for (CrateLayout.Slot f : faces) {
+                if (f.x() <= mx && mx <= end(f)) {
+                    if (f.y() + f.width() <= s.y() + TOUCH) {
+                        gapLeft = Math.min(gapLeft, Math.max(0, s.y() - f.y() - f.width()));
+                    } else if (f.y() >= s.y() + d - TOUCH) {
+                        gapRight = Math.min(gapRight, Math.max(0, f.y() - s.y() - d));
+                    }
+                }
+            }
+            if (!caught(left, leftSlack, mx, gapRight) && !caught(right, rightSlack, mx, gapLeft)) {
                 return false;
             }
         }
         return true;
+    }
+
+    private static boolean caught(List<CrateLayout.Slot> holders, List<Double> slack, double x, double gap) {
+        for (int k = 0; k < holders.size(); k++) {
+            CrateLayout.Slot o = holders.get(k);
+            if (o.x() <= x && x <= end(o) && slack.get(k) > gap + TOUCH) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean box(CrateLayout.Slot s, List<CrateLayout.Slot> bearing) {

@@ -35,9 +35,9 @@ import kitwright.packing.JointCount;
  *   along x, needs support at every x along its length: a bearing item whose y range overlaps its axis band
  *   (axis y &plusmn; d/4), or bundles of the row below that its circle touches (centres the sum of the radii
  *   apart within {@value #TOUCH} mm, lower than its own), one on each side of its axis or one right under it,
- *   as a bundle lies in a square or staggered row; or on one side only when the side wall on the other side is
- *   nearer than the contact's slack (sum of radii - lateral offset), so the wall catches it before it rolls
- *   off;</li>
+ *   as a bundle lies in a square or staggered row; or on one side only when the crate wall or the side of a
+ *   box on the other side is nearer than the contact's slack (sum of radii - lateral offset), so that it
+ *   catches the bundle before it rolls off;</li>
  *   <li>the lower bound does not exceed the number of crates.</li>
  * </ul>
  * Throws AssertionError listing every violation found.

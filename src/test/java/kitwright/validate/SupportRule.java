@@ -1,7 +1,9 @@
 package kitwright.validate;
 
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.TreeSet;
 import kitwright.packing.CrateItem;
 import kitwright.packing.ItemKind;
@@ -75,9 +77,7 @@ final class SupportRule {
                 < j.yMm() + j.widthMm()).toList();
         List<CrateItem> left = new ArrayList<>();
         List<CrateItem> right = new ArrayList<>();
-        double gapLeft = b.yMm();
-        double gapRight = width - b.yMm() - d;
-        List<CrateItem> caught = new ArrayList<>();
+        Map<CrateItem, Double> slack = new IdentityHashMap<>();
         for (CrateItem j : items) {
             if (j == b || j.kind() != ItemKind.BUNDLE) {
                 continue;
@@ -86,16 +86,12 @@ final class SupportRule {
             double dz = j.zMm() + j.heightMm() / 2 - axisZ;
             double reach = (d + j.widthMm()) / 2;
             if (dz < 0 && Math.abs(Math.hypot(dy, dz) - reach) <= touch) {
-                double slack = reach - Math.abs(dy);
+                slack.put(j, reach - Math.abs(dy));
                 if (dy <= touch) {
                     left.add(j);
                 }
                 if (dy >= -touch) {
                     right.add(j);
-                }
-                // held on one side: it rolls towards the other, where a wall nearer than the slack catches it
-                if ((dy <= touch && slack > gapRight) || (dy >= -touch && slack > gapLeft)) {
-                    caught.add(j);
                 }
             }
         }
@@ -110,8 +106,28 @@ final class SupportRule {
                 continue;
             }
             double mx = (x[a] + x[a + 1]) / 2;
-            boolean held = covers(flat, mx) || (covers(left, mx) && covers(right, mx)) || covers(caught, mx);
-            if (!held) {
+            if (covers(flat, mx) || (covers(left, mx) && covers(right, mx))) {
+                continue;
+            }
+            // held on one side only: it rolls towards the other side, where the crate wall or the side of a box
+            // (spanning the bundle's axis height) nearer than the contact's slack catches it
+            double gapLeft = b.yMm();
+            double gapRight = width - b.yMm() - d;
+            for (CrateItem f : items) {
+                if (f.kind() == ItemKind.BOX && f.xMm() <= mx && mx <= f.endXMm() && f.zMm() <= axisZ
+                        && axisZ <= f.zMm() + f.heightMm()) {
+                    if (f.yMm() + f.widthMm() <= b.yMm() + touch) {
+                        gapLeft = Math.min(gapLeft, Math.max(0, b.yMm() - f.yMm() - f.widthMm()));
+                    } else if (f.yMm() >= b.yMm() + d - touch) {
+                        gapRight = Math.min(gapRight, Math.max(0, f.yMm() - b.yMm() - d));
+                    }
+                }
+            }
+            double gl = gapLeft;
+            double gr = gapRight;
+            boolean caught = left.stream().anyMatch(j -> j.xMm() <= mx && mx <= j.endXMm() && slack.get(j) > gr)
+                    || right.stream().anyMatch(j -> j.xMm() <= mx && mx <= j.endXMm() && slack.get(j) > gl);
+            if (!caught) {
                 return false;
             }
         }
