@@ -117,7 +117,7 @@ public final class LaneCratePacker implements CratePacker {
     }
 
     /** Leaves empty the places beyond each item type's demand, from the last crates back. */
-    private static List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types,
+    private List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types,
                                                  List<CrateType> crates) {
         double[] widths = crates.stream().mapToDouble(CrateType::innerWidthMm).toArray();
         int[] surplus = new int[types.size()];
@@ -141,8 +141,8 @@ public final class LaneCratePacker implements CratePacker {
                     again = false;
                     for (int s = kept.size() - 1; s >= 0; s--) {
                         int type = kept.get(s).itemType();
-                        boolean free = anyPlace || Support.bearsNothing(kept, s, types, widths[l.crateType()]);
-                        if (surplus[type] > 0 && free) {
+                        if (surplus[type] > 0
+                                && (anyPlace || Support.bearsNothing(kept, s, types, widths[l.crateType()]))) {
                             surplus[type]--;
                             kept.remove(s);
                             changed = true;
@@ -151,11 +151,58 @@ public final class LaneCratePacker implements CratePacker {
                     }
                 }
                 if (changed) {
-                    result.set(k, relayout(l.crateType(), kept, types));
+                    CrateLayout next = relayout(l.crateType(), kept, types);
+                    if (anyPlace && !Support.holds(kept, types, widths[l.crateType()])) {
+                        next = refit(next, crates, types);
+                    }
+                    result.set(k, next);
                 }
             }
         }
         result.removeIf(CrateLayout::isEmpty);
+        return addCratesForMissing(result, crates, types);
+    }
+
+    /**
+     * A crate whose surplus could only be taken from under other items: filled again with exactly its contents if
+     * the filler manages, else what stands of it (the rest goes to {@link #addCratesForMissing}).
+     */
+    private CrateLayout refit(CrateLayout layout, List<CrateType> crates, List<ItemType> types) {
+        int t = layout.crateType();
+        for (CrateLayout again : filler.fills(t, crates.get(t), types, layout.counts())) {
+            if (java.util.Arrays.equals(again.counts(), layout.counts())) {
+                return again;
+            }
+        }
+        return relayout(t, Support.settle(layout.slots(), types, crates.get(t).innerWidthMm()), types);
+    }
+
+    /** Items that no layout holds any more (see {@link #refit}) go into further crates, most items per crate. */
+    private List<CrateLayout> addCratesForMissing(List<CrateLayout> layouts, List<CrateType> crates,
+                                                  List<ItemType> types) {
+        int[] missing = types.stream().mapToInt(ItemType::demand).toArray();
+        for (CrateLayout l : layouts) {
+            for (int i = 0; i < missing.length; i++) {
+                missing[i] -= l.counts()[i];
+            }
+        }
+        List<CrateLayout> result = new ArrayList<>(layouts);
+        while (java.util.Arrays.stream(missing).anyMatch(n -> n > 0)) {
+            CrateLayout best = null;
+            for (int t = 0; t < crates.size(); t++) {
+                CrateLayout l = filler.fill(t, crates.get(t), types, missing);
+                if (!l.isEmpty() && (best == null || l.slots().size() > best.slots().size())) {
+                    best = l;
+                }
+            }
+            if (best == null) {
+                break;
+            }
+            for (int i = 0; i < missing.length; i++) {
+                missing[i] -= best.counts()[i];
+            }
+            result.add(best);
+        }
         return result;
     }
 

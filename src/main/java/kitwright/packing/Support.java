@@ -51,7 +51,7 @@ final class Support {
         List<CrateLayout.Slot> rest = new ArrayList<>(slots);
         rest.remove(index);
         for (CrateLayout.Slot o : rest) {
-            if (o.z() > gone.z() + TOUCH && o.x() < end(gone) && gone.x() < end(o) && !supported(o, rest, types, width)) {
+            if (o.z() > TOUCH && o.x() < end(gone) && gone.x() < end(o) && !supported(o, rest, types, width)) {
                 return false;
             }
         }
