@@ -17,15 +17,18 @@ import kitwright.model.CrateType;
  *   <li>Lanes go into the cross-section in row groups, largest cells first. A group has one cell diameter and the
  *   better of {@link RowPattern#SQUARE} and {@link RowPattern#STAGGERED} for the lanes it is to hold (fewest rows
  *   for all of them, or most lanes when they do not all fit); lanes at least {@value #MERGE} of the group's cell
- *   join it, thinner ones start a group on top or take a free cell left in a row below. A lane that would pass
- *   the crate's net capacity (max gross - tare) is cut short.</li>
+ *   join it, thinner ones start a group on top or take a free cell left in a row below. Of one cell, the lanes
+ *   that bear longest go lowest; a bundle thinner than its cell is let down onto what is under it. A lane that
+ *   would pass the crate's net capacity (max gross - tare) is cut short.</li>
  *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
- *   box orientation that holds most. When both bundles and boxes are on offer, a second layout puts the boxes
- *   first, in as few full tiers on the floor as hold them, with the lanes above; the caller chooses.</li>
+ *   box orientation that holds most. When both bundles and boxes are on offer, two more layouts put the boxes
+ *   first: in as few full tiers on the floor as hold them, with the lanes above; or in stacks in the narrowest
+ *   strip along the left wall that holds them, with the lanes from the floor beside it. The caller chooses.</li>
+ *   <li>{@link Support#settle} keeps, from the floor up, only the items that rest on items below.</li>
  * </ol>
  * Guarantee: every item lies inside the inner walls, circles of bundles that share a stretch of length do not
- * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, and the contents' mass is within
- * the net capacity. Not a proof of the best filling: a constructive heuristic, fast enough to be called for every
+ * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, every item above the floor is
+ * supported ({@link Support}), and the contents' mass is within the net capacity. Not a proof of the best filling: a constructive heuristic, fast enough to be called for every
  * crate type at every step of the crate choice.
  */
 final class CrateFiller {

@@ -146,6 +146,11 @@ class CratePlanValidatorTest {
         CrateItem offWall = bundle("W", 0, 110, 50 + 2 * pitch, 1000, 100);
         assertThat(stands(offWall, bundle("A", 0, 160, 50 + pitch, 1000, 100))).as("60 mm from the wall: rolls off")
                 .isFalse();
+        // the side of a box (y 0-400, 300 high, spanning the bundle's axis height) catches it like a wall
+        CrateItem byBox = bundle("F", 0, 450, 50 + 2 * pitch, 600, 100);
+        CrateItem below = bundle("A", 0, 500, 50 + pitch, 600, 100);
+        assertThat(stands(byBox, below, box("L", 0, 0, 0))).as("box side and one bundle").isTrue();
+        assertThat(stands(byBox, below)).as("same without the box").isFalse();
         // on the top of a box (300 mm high), the axis band (y 200 +- 25) over the box or not
         assertThat(stands(bundle("T", 0, 200, 350, 600, 100), box("L", 0, 0, 0))).isTrue();
         assertThat(stands(bundle("T", 0, 450, 350, 600, 100), box("L", 0, 0, 0))).as("beside the box").isFalse();
