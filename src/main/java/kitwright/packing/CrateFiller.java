@@ -3,6 +3,7 @@ package kitwright.packing;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.TreeSet;
 import kitwright.model.CrateType;
 
 /**
@@ -16,15 +17,18 @@ import kitwright.model.CrateType;
  *   <li>Lanes go into the cross-section in row groups, largest cells first. A group has one cell diameter and the
  *   better of {@link RowPattern#SQUARE} and {@link RowPattern#STAGGERED} for the lanes it is to hold (fewest rows
  *   for all of them, or most lanes when they do not all fit); lanes at least {@value #MERGE} of the group's cell
- *   join it, thinner ones start a group on top or take a free cell left in a row below. A lane that would pass
- *   the crate's net capacity (max gross - tare) is cut short.</li>
+ *   join it, thinner ones start a group on top or take a free cell left in a row below. Of one cell, the lanes
+ *   that bear longest go lowest; a bundle thinner than its cell is let down onto what is under it. A lane that
+ *   would pass the crate's net capacity (max gross - tare) is cut short.</li>
  *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
- *   box orientation that holds most. When both bundles and boxes are on offer, a second layout puts the boxes
- *   first, in as few full tiers on the floor as hold them, with the lanes above; the caller chooses.</li>
+ *   box orientation that holds most. When both bundles and boxes are on offer, two more layouts put the boxes
+ *   first: in as few full tiers on the floor as hold them, with the lanes above; or in stacks in the narrowest
+ *   strip along the left wall that holds them, with the lanes from the floor beside it. The caller chooses.</li>
+ *   <li>{@link Support#settle} keeps, from the floor up, only the items that rest on items below.</li>
  * </ol>
  * Guarantee: every item lies inside the inner walls, circles of bundles that share a stretch of length do not
- * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, and the contents' mass is within
- * the net capacity. Not a proof of the best filling: a constructive heuristic, fast enough to be called for every
+ * overlap (they sit on separate cells), boxes and lanes occupy disjoint regions, every item above the floor is
+ * supported ({@link Support}), and the contents' mass is within the net capacity. Not a proof of the best filling: a constructive heuristic, fast enough to be called for every
  * crate type at every step of the crate choice.
  */
 final class CrateFiller {
@@ -38,22 +42,25 @@ final class CrateFiller {
      * first with lanes above. The caller keeps the one that suits it.
      */
     List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        CrateLayout lanesFirst = build(crateIndex, crate, types, available, false);
+        CrateLayout lanesFirst = build(crateIndex, crate, types, available, Start.LANES);
         boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
         boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
         if (!boxes || !bundles) {
             return List.of(lanesFirst);
         }
-        return List.of(lanesFirst, build(crateIndex, crate, types, available, true));
+        return List.of(lanesFirst, build(crateIndex, crate, types, available, Start.BOX_TIERS),
+                build(crateIndex, crate, types, available, Start.BOX_COLUMN));
     }
 
     /** The lanes-first layout (see {@link #fills}). */
     CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        return build(crateIndex, crate, types, available, false);
+        return build(crateIndex, crate, types, available, Start.LANES);
     }
 
-    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available,
-                              boolean boxesFirst) {
+    /** What goes in first: lanes from the floor; boxes in floor tiers; boxes in a column along one side wall. */
+    private enum Start { LANES, BOX_TIERS, BOX_COLUMN }
+
+    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available, Start start) {
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
@@ -62,12 +69,64 @@ final class CrateFiller {
         List<CrateLayout.Slot> slots = new ArrayList<>();
         double[] mass = {0};
         int[] left = available.clone();
-        double floor = boxesFirst ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
-        List<LaneBuilder.Lane> lanes = new LaneBuilder().build(offeredBundles(crate, types, left, net - mass[0]),
-                length);
-        double[] used = placeLanes(lanes, width, floor, height, net, mass, counts, slots);
-        placeBoxes(crate, types, left, net, floor, used[0], used[1], mass, counts, slots);
-        return new CrateLayout(crateIndex, counts, slots, mass[0]);
+        double floor = start == Start.BOX_TIERS ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
+        double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
+        List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
+                offeredBundles(crate, types, left, net - mass[0]), length));
+        // widest cells first, and of a cell the lanes that bear longest lowest, so that upper lanes lie on lower ones
+        lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
+                .thenComparing(Comparator.comparingDouble(CrateFiller::bearingLength).reversed())
+                .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
+        double[] used = placeLanes(lanes, types, side, width - side, floor, height, net, mass, counts, slots);
+        placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
+        List<CrateLayout.Slot> standing = Support.settle(slots, types, width);
+        int[] kept = new int[types.size()];
+        double keptMass = 0;
+        for (CrateLayout.Slot s : standing) {
+            kept[s.itemType()]++;
+            keptMass += types.get(s.itemType()).massKg();
+        }
+        return new CrateLayout(crateIndex, kept, standing, keptMass);
+    }
+
+    /** Length from x = 0 over which a lane is as wide as its cell (thinner bundles at its far end bear less). */
+    private static double bearingLength(LaneBuilder.Lane lane) {
+        double length = 0;
+        for (ItemType t : lane.items()) {
+            if (t.diameterMm() < lane.cellMm() - Support.TOUCH / 2) {
+                break;
+            }
+            length += t.lengthMm();
+        }
+        return length;
+    }
+
+    /**
+     * Boxes in full-height stacks in the narrowest strip along the left wall (y from 0) that holds every box on
+     * offer (or the whole width); returns the strip's width, where the lanes begin.
+     */
+    private static double boxColumn(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
+                                    int[] counts, List<CrateLayout.Slot> slots) {
+        List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
+        ItemType box = boxes.get(0);
+        double width = crate.innerWidthMm();
+        TreeSet<Double> strips = new TreeSet<>();
+        for (double dim : new double[] {box.lengthMm(), box.widthMm(), box.heightMm()}) {
+            for (int k = 1; k * dim <= width + EPS; k++) {
+                strips.add(k * dim);
+            }
+        }
+        double strip = width;
+        for (double w : strips) {
+            if (BoxGrid.capacity(crate.innerLengthMm(), w, crate.innerHeightMm(), box) >= wanted) {
+                strip = w;
+                break;
+            }
+        }
+        BoxGrid.fill(0, 0, 0, crate.innerLengthMm(), strip, crate.innerHeightMm(), boxes, left, net, mass, counts,
+                slots);
+        return strip;
     }
 
     /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
@@ -128,8 +187,12 @@ final class CrateFiller {
     /**
      * Places lanes into row groups; returns {end of the longest lane, top of the rows}.
      */
-    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, double width, double floor, double height,
-                                       double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
+    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, List<ItemType> types, double y0, double width, double floor,
+                                       double height, double net, double[] mass, int[] counts,
+                                       List<CrateLayout.Slot> slots) {
+        if (width <= EPS) {
+            return new double[] {0, floor};
+        }
         double base = floor;
         RowGroup current = null;
         List<RowGroup.Cell> free = new ArrayList<>();
@@ -170,7 +233,10 @@ final class CrateFiller {
                 mass[0] += t.massKg();
                 counts[t.index()]++;
                 double r = t.diameterMm() / 2;
-                slots.add(new CrateLayout.Slot(t.index(), x, cell.y() - r, cell.z() - r, t.lengthMm(),
+                double z = t.diameterMm() < cell.d() - EPS
+                        ? settle(x, t.lengthMm(), y0 + cell.y(), r, cell.z() - cell.d() / 2 + r, slots, types)
+                        : cell.z();
+                slots.add(new CrateLayout.Slot(t.index(), x, y0 + cell.y() - r, z - r, t.lengthMm(),
                         t.diameterMm(), t.diameterMm()));
                 x += t.lengthMm();
             }
@@ -178,6 +244,34 @@ final class CrateFiller {
         }
         double top = base + (current == null ? 0 : current.heightUsed());
         return new double[] {endX, top};
+    }
+
+    /**
+     * Centre height at which a bundle thinner than its cell comes to rest when let down from the bottom of its
+     * cell (centre {@code from}) onto the items already placed under it, or onto the floor.
+     */
+    private static double settle(double x, double length, double axisY, double r, double from,
+                                 List<CrateLayout.Slot> slots, List<ItemType> types) {
+        double rest = r;
+        for (CrateLayout.Slot s : slots) {
+            if (s.x() >= x + length - EPS || x >= s.x() + s.length() - EPS) {
+                continue;
+            }
+            boolean bundle = types.get(s.itemType()).kind() == ItemKind.BUNDLE;
+            double sy = s.y() + s.width() / 2;
+            double sz = s.z() + s.height() / 2;
+            if (bundle && sz < from - EPS) {
+                double reach = r + s.width() / 2;
+                double dy = Math.abs(sy - axisY);
+                if (dy < reach) {
+                    rest = Math.max(rest, sz + Math.sqrt(reach * reach - dy * dy));
+                }
+            } else if (!bundle && s.z() + s.height() <= from - r + EPS && s.y() < axisY + r
+                    && axisY - r < s.y() + s.width()) {
+                rest = Math.max(rest, s.z() + s.height() + r);
+            }
+        }
+        return Math.min(rest, from);
     }
 
     /** The free cell with the smallest diameter that takes a lane of cell d, removed from the list. */
@@ -192,7 +286,7 @@ final class CrateFiller {
     }
 
     private static void placeBoxes(CrateType crate, List<ItemType> types, int[] left, double net, double floor,
-                                   double endX, double top, double[] mass, int[] counts,
+                                   double side, double endX, double top, double[] mass, int[] counts,
                                    List<CrateLayout.Slot> slots) {
         List<ItemType> boxes = types.stream()
                 .filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
@@ -203,10 +297,11 @@ final class CrateFiller {
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
         // the end of the crate behind the longest lane, full width, from the floor tiers up
-        BoxGrid.fill(endX, 0, floor, length - endX, width, height - floor, boxes, left, net, mass, counts, slots);
+        BoxGrid.fill(endX, side, floor, length - endX, width - side, height - floor, boxes, left, net, mass, counts,
+                slots);
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
-            BoxGrid.fill(0, 0, top, endX, width, height - top, boxes, left, net, mass, counts, slots);
+            BoxGrid.fill(0, side, top, endX, width - side, height - top, boxes, left, net, mass, counts, slots);
         }
     }
 }

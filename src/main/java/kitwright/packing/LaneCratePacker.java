@@ -74,7 +74,7 @@ public final class LaneCratePacker implements CratePacker {
         if (layouts.isEmpty()) {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
-        layouts = downsize(dropSurplus(layouts, items.types()), crates, cost, items.types());
+        layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
         List<Crate> result = realise(layouts, crates, items);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
         CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);
@@ -117,7 +117,9 @@ public final class LaneCratePacker implements CratePacker {
     }
 
     /** Leaves empty the places beyond each item type's demand, from the last crates back. */
-    private static List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types) {
+    private List<CrateLayout> dropSurplus(List<CrateLayout> layouts, List<ItemType> types,
+                                                 List<CrateType> crates) {
+        double[] widths = crates.stream().mapToDouble(CrateType::innerWidthMm).toArray();
         int[] surplus = new int[types.size()];
         for (CrateLayout l : layouts) {
             for (int i = 0; i < surplus.length; i++) {
@@ -128,23 +130,79 @@ public final class LaneCratePacker implements CratePacker {
             surplus[t.index()] -= t.demand();
         }
         List<CrateLayout> result = new ArrayList<>(layouts);
-        for (int k = result.size() - 1; k >= 0; k--) {
-            CrateLayout l = result.get(k);
-            List<CrateLayout.Slot> kept = new ArrayList<>(l.slots());
-            boolean changed = false;
-            for (int s = kept.size() - 1; s >= 0; s--) {
-                int type = kept.get(s).itemType();
-                if (surplus[type] > 0) {
-                    surplus[type]--;
-                    kept.remove(s);
-                    changed = true;
+        // first only places that nothing rests on, so that what stays keeps its support; then any, from the end
+        for (boolean anyPlace : new boolean[] {false, true}) {
+            for (int k = result.size() - 1; k >= 0; k--) {
+                CrateLayout l = result.get(k);
+                List<CrateLayout.Slot> kept = new ArrayList<>(l.slots());
+                boolean changed = false;
+                boolean again = true;
+                while (again) {
+                    again = false;
+                    for (int s = kept.size() - 1; s >= 0; s--) {
+                        int type = kept.get(s).itemType();
+                        if (surplus[type] > 0
+                                && (anyPlace || Support.bearsNothing(kept, s, types, widths[l.crateType()]))) {
+                            surplus[type]--;
+                            kept.remove(s);
+                            changed = true;
+                            again = !anyPlace;
+                        }
+                    }
                 }
-            }
-            if (changed) {
-                result.set(k, relayout(l.crateType(), kept, types));
+                if (changed) {
+                    CrateLayout next = relayout(l.crateType(), kept, types);
+                    if (anyPlace && !Support.holds(kept, types, widths[l.crateType()])) {
+                        next = refit(next, crates, types);
+                    }
+                    result.set(k, next);
+                }
             }
         }
         result.removeIf(CrateLayout::isEmpty);
+        return addCratesForMissing(result, crates, types);
+    }
+
+    /**
+     * A crate whose surplus could only be taken from under other items: filled again with exactly its contents if
+     * the filler manages, else what stands of it (the rest goes to {@link #addCratesForMissing}).
+     */
+    private CrateLayout refit(CrateLayout layout, List<CrateType> crates, List<ItemType> types) {
+        int t = layout.crateType();
+        for (CrateLayout again : filler.fills(t, crates.get(t), types, layout.counts())) {
+            if (java.util.Arrays.equals(again.counts(), layout.counts())) {
+                return again;
+            }
+        }
+        return relayout(t, Support.settle(layout.slots(), types, crates.get(t).innerWidthMm()), types);
+    }
+
+    /** Items that no layout holds any more (see {@link #refit}) go into further crates, most items per crate. */
+    private List<CrateLayout> addCratesForMissing(List<CrateLayout> layouts, List<CrateType> crates,
+                                                  List<ItemType> types) {
+        int[] missing = types.stream().mapToInt(ItemType::demand).toArray();
+        for (CrateLayout l : layouts) {
+            for (int i = 0; i < missing.length; i++) {
+                missing[i] -= l.counts()[i];
+            }
+        }
+        List<CrateLayout> result = new ArrayList<>(layouts);
+        while (java.util.Arrays.stream(missing).anyMatch(n -> n > 0)) {
+            CrateLayout best = null;
+            for (int t = 0; t < crates.size(); t++) {
+                CrateLayout l = filler.fill(t, crates.get(t), types, missing);
+                if (!l.isEmpty() && (best == null || l.slots().size() > best.slots().size())) {
+                    best = l;
+                }
+            }
+            if (best == null) {
+                break;
+            }
+            for (int i = 0; i < missing.length; i++) {
+                missing[i] -= best.counts()[i];
+            }
+            result.add(best);
+        }
         return result;
     }
 

@@ -28,12 +28,26 @@ import kitwright.packing.JointCount;
  *   <li>every item lies inside the inner walls (length, width and height);</li>
  *   <li>no two items overlap where their lengths overlap: bundles by their circles (centres at least the sum of
  *   the radii apart), anything with a box by bounding boxes;</li>
+ *   <li>support (dunnage is not modelled, so it comes from the floor or from items): every item whose bottom
+ *   is above the crate floor (z &gt; 1 mm) rests on items below. The bearing items of an item are those whose top
+ *   is at its bottom (within {@value #TOUCH} mm). A box needs bearing items under the centre of its footprint and
+ *   under at least {@value #BOX_SHARE} of its footprint area (bounding rectangles). A bundle, a cylinder lying
+ *   along x, needs support at every x along its length: a bearing item whose y range overlaps its axis band
+ *   (axis y &plusmn; d/4), or bundles of the row below that its circle touches (centres the sum of the radii
+ *   apart within {@value #TOUCH} mm, lower than its own), one on each side of its axis or one right under it,
+ *   as a bundle lies in a square or staggered row; or on one side only when the crate wall or the side of a
+ *   box on the other side is nearer than the contact's slack (sum of radii - lateral offset), so that it
+ *   catches the bundle before it rolls off;</li>
  *   <li>the lower bound does not exceed the number of crates.</li>
  * </ul>
  * Throws AssertionError listing every violation found.
  */
 public final class CratePlanValidator {
     private static final double EPS = 1e-6;
+    /** Tolerance of contact, mm: a top within this of a bottom bears it. */
+    static final double TOUCH = 1.0;
+    /** Least share of a box's footprint that must rest on bearing items. */
+    static final double BOX_SHARE = 0.5;
 
     private CratePlanValidator() {
     }
@@ -151,6 +165,12 @@ public final class CratePlanValidator {
             errors.add(c.id() + ": gross " + (type.tareKg() + contents) + " kg over max " + type.maxGrossKg());
         }
         checkOverlaps(c, errors);
+        for (CrateItem i : c.items()) {
+            if (i.zMm() > TOUCH && !SupportRule.supported(i, c.items(), type.innerWidthMm(), TOUCH, BOX_SHARE)) {
+                errors.add(c.id() + ": " + i.ref() + " is not supported (floats at z = "
+                        + Math.round(i.zMm()) + " mm)");
+            }
+        }
     }
 
     private static void checkItemSource(Crate c, CrateItem i, Map<String, Bundle> bundles,
