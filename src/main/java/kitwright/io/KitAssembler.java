@@ -47,6 +47,9 @@ final class KitAssembler {
             }
             Need need = needs.get(line.mark());
             Integer quantity = line.quantity();
+            if (need != null && need.count > Limits.MAX_COUNT) {
+                continue; // reported on the structures.csv row where the sum passed the limit
+            }
             if (quantity == null && need != null) {
                 quantity = need.count;
             } else if (quantity == null) {
@@ -84,8 +87,18 @@ final class KitAssembler {
             }
             Need need = needs.get(count.mark());
             if (settings.structuresStandTogether()) {
-                int total = (need == null ? 0 : need.count) + count.count();
-                needs.put(count.mark(), new Need(total, "the structures standing together need"));
+                int before = need == null ? 0 : need.count;
+                if (before > Limits.MAX_COUNT) {
+                    continue;
+                }
+                long total = (long) before + count.count();
+                if (total > Limits.MAX_COUNT) {
+                    problems.add(row.problem("count", "the structures standing together need " + total
+                            + " bars of mark " + count.mark() + " up to this row (expected at most " + Limits.MAX_COUNT
+                            + " bars of a mark in the kit)"));
+                }
+                needs.put(count.mark(), new Need((int) Math.min(total, Limits.MAX_COUNT + 1L),
+                        "the structures standing together need"));
             } else if (need == null || count.count() > need.count) {
                 needs.put(count.mark(), new Need(count.count(), "structure " + count.structure() + " needs"));
             }
