@@ -62,11 +62,16 @@ public final class CsvRow {
         return text(column).isEmpty();
     }
 
-    /** The text of a column that must not be blank, or null after reporting it. */
+    /** The text of a column that names something: not blank, no control characters; or null after reporting it. */
     public String required(String column, String expected) {
         String text = text(column);
         if (text.isEmpty()) {
             problem(column, "the value is blank (expected " + expected + ")");
+            return null;
+        }
+        if (text.chars().anyMatch(Character::isISOControl)) {
+            problem(column, "the name '" + text + "' holds a line break, tab or other control character (expected "
+                    + expected + ", on one line)");
             return null;
         }
         return text;

@@ -62,9 +62,12 @@ public final class KitJsonReader {
     public static Optional<KitJson> read(Path file, Path kitDir, Problems problems) {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            bytes = InputBytes.read(file);
         } catch (NoSuchFileException e) {
             problems.add(Problem.ofFile(file, "file not found (expected the kit's settings as a JSON object)"));
+            return Optional.empty();
+        } catch (InputBytes.TooLargeException e) {
+            problems.add(InputBytes.tooLarge(file, "the kit's settings as a JSON object of a few lines"));
             return Optional.empty();
         } catch (IOException e) {
             problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()

@@ -13,6 +13,8 @@ public final class Limits {
     public static final int MAX_COUNT = 100_000;
     /** Largest other number: prices, masses, densities, costs, seconds. */
     public static final double MAX_NUMBER = 1e9;
+    /** Largest input file, in bytes (64 MiB); also stops a device such as /dev/zero from being read forever. */
+    public static final int MAX_FILE_BYTES = 64 << 20;
 
     private Limits() {
     }
