@@ -156,7 +156,8 @@ public final class CsvRow {
     }
 
     private static String tooLarge(String text, String expected, double maximum) {
-        String wrong = maximum >= Integer.MAX_VALUE ? "is too large" : "is above the limit of " + Figures.plain(maximum);
+        String wrong = maximum >= Integer.MAX_VALUE ? "is too large"
+                : "is above the limit of " + Figures.plain(maximum);
         return text + " " + wrong + " (expected " + expected + ")";
     }
 

@@ -3,13 +3,11 @@ package kitwright.io;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Optional;
-import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * A single result file (e.g. {@code --json FILE}) that appears whole or not at all: the text is written to a
@@ -45,7 +43,7 @@ public final class OutputFile {
         Path temporary;
         try {
             Files.createDirectories(absolute.getParent());
-            temporary = newFile(absolute.getParent(), "." + absolute.getFileName() + ".partial-");
+            temporary = OutputFolder.newEntry(absolute.getParent(), "." + absolute.getFileName() + ".partial-", false);
         } catch (FileSystemException e) {
             throw new InvalidInputException(OutputFolder.cannotWrite(file, e));
         }
@@ -58,20 +56,6 @@ public final class OutputFile {
             }
         } finally {
             Files.deleteIfExists(temporary);
-        }
-    }
-
-    /** A new empty file with a unique name; unlike a temp file it gets the usual permissions (umask). */
-    private static Path newFile(Path folder, String prefix) throws IOException {
-        for (int attempt = 0; ; attempt++) {
-            Path file = folder.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
-            try {
-                return Files.createFile(file);
-            } catch (FileAlreadyExistsException e) {
-                if (attempt > 100) {
-                    throw e;
-                }
-            }
         }
     }
 }

@@ -184,10 +184,18 @@ public final class OutputFolder implements AutoCloseable {
 
     /** A new folder with a unique name; unlike a temp directory it gets the usual permissions (umask). */
     private static Path newFolder(Path parent, String prefix) throws IOException {
+        return newEntry(parent, prefix, true);
+    }
+
+    /**
+     * A new empty folder or file in {@code parent}, named {@code prefix} and a random suffix; unlike a temporary
+     * file or folder of the JDK it gets the usual permissions (umask), so the result is readable as any other file.
+     */
+    static Path newEntry(Path parent, String prefix, boolean folder) throws IOException {
         for (int attempt = 0; ; attempt++) {
-            Path folder = parent.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
+            Path entry = parent.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
             try {
-                return Files.createDirectory(folder);
+                return folder ? Files.createDirectory(entry) : Files.createFile(entry);
             } catch (FileAlreadyExistsException e) {
                 if (attempt > 100) {
                     throw e;
