@@ -3,6 +3,7 @@ package kitwright.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.function.Consumer;
@@ -11,7 +12,9 @@ import kitwright.compare.OptionPlanner;
 import kitwright.compare.OptionRunner;
 import kitwright.compare.OptionSummary;
 import kitwright.io.InvalidInputException;
+import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
+import kitwright.io.Problem;
 import kitwright.model.Status;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -79,6 +82,9 @@ public final class CompareCommand implements Callable<Integer> {
             err.flush();
             return ExitCode.INVALID_INPUT.code();
         }
+        if (planner == null) {
+            checkKits(); // the whole chain reads kit folders; another planner reads what it likes
+        }
         Consumer<String> progress = line -> {
             synchronized (err) {
                 err.println(line);
@@ -107,5 +113,20 @@ public final class CompareCommand implements Callable<Integer> {
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
         return ExitCode.OK.code();
+    }
+
+    /** Reads every option before planning any, so that bad input in the last one costs no planning time. */
+    private void checkKits() throws InvalidInputException {
+        List<Problem> problems = new ArrayList<>();
+        for (Path kitDir : kitDirs) {
+            try {
+                KitReader.read(kitDir);
+            } catch (InvalidInputException e) {
+                problems.addAll(e.problems());
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new InvalidInputException(problems);
+        }
     }
 }

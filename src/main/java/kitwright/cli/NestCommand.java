@@ -2,11 +2,7 @@ package kitwright.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
@@ -18,6 +14,7 @@ import kitwright.cutting.KitCutter;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
+import kitwright.io.OutputFile;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
@@ -106,6 +103,12 @@ public final class NestCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
+        if (out != null) {
+            OutputFolder.check(out);
+        }
+        if (json != null) {
+            OutputFile.check(json);
+        }
         if (tolerance != null) {
             kit = kit.withSettings(kit.settings().withNestTolerance(tolerance));
         }
@@ -143,7 +146,7 @@ public final class NestCommand implements Callable<Integer> {
             }
         }
         if (json != null) {
-            writeAtomically(json, PrettyJson.write(plan));
+            OutputFile.write(json, PrettyJson.write(plan));
         }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(summary(kit, result));
@@ -178,22 +181,5 @@ public final class NestCommand implements Callable<Integer> {
                 Handling.TWO_PEOPLE_OR_HOIST));
         sb.append("Fit rule: ").append(result.rule()).append('\n');
         return sb.toString();
-    }
-
-    private static void writeAtomically(Path file, String text) throws IOException {
-        Path absolute = file.toAbsolutePath();
-        Path dir = absolute.getParent();
-        Files.createDirectories(dir);
-        Path temporary = dir.resolve("." + absolute.getFileName() + ".part");
-        try {
-            Files.writeString(temporary, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temporary);
-        }
     }
 }

@@ -2,11 +2,7 @@ package kitwright.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
@@ -14,6 +10,7 @@ import java.util.function.Function;
 import java.util.stream.Collectors;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
+import kitwright.io.OutputFile;
 import kitwright.io.OutputFolder;
 import kitwright.io.Problem;
 import kitwright.loading.LoadPlan;
@@ -58,7 +55,8 @@ import picocli.CommandLine.Spec;
             "",
             "Lifting and load securing are not checked (EN 12195-1; local rules",
             "decide). Exit codes: 0 ok, 2 invalid input, 3 when an item fits no",
-            "crate or a crate no vehicle."
+            "crate or a crate no vehicle, or when a section cannot be cut or a bar",
+            "is heavier than maxBundleMassKg (what can be packed still is)."
         })
 public final class PackCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
@@ -103,19 +101,31 @@ public final class PackCommand implements Callable<Integer> {
         PrintWriter stderr = spec.commandLine().getErr();
         Kit kit = KitReader.read(kitDir);
         checkCatalogs(kit);
+        checkStructure(kit);
+        if (out != null) {
+            OutputFolder.check(out);
+        }
+        if (json != null) {
+            OutputFile.check(json);
+        }
         long start = System.nanoTime();
         stderr.println("pack: cutting and nesting " + kit.bars().stream().mapToInt(b -> b.quantity()).sum()
                 + " bars");
         stderr.flush();
-        NestPlan nest = upstream.bundles(kit);
-        List<Bundle> bundles = nest.bundles();
+        PackUpstream.Bundles upstreamBundles = upstream.bundles(kit);
+        List<String> shortfalls = upstreamBundles.shortfalls();
+        List<Bundle> bundles = upstreamBundles.plan().bundles();
         List<Joint> joints = kit.joints();
         StructureShare share = null;
         if (structure != null) {
             try {
                 share = StructureShare.of(structure, bundles, joints, kit.structures());
             } catch (IllegalArgumentException e) {
-                throw new InvalidInputException(new Problem(null, 0, "--for", e.getMessage()));
+                // the structure is known (checked above), so its tubes are missing: some section was not cut
+                stderr.println("pack: no plan for " + structure + ": " + e.getMessage());
+                shortfalls.forEach(reason -> stderr.println("pack: " + reason));
+                stderr.flush();
+                return ExitCode.NO_FEASIBLE_PLAN.code();
             }
             bundles = share.bundles();
             joints = share.joints();
@@ -140,10 +150,10 @@ public final class PackCommand implements Callable<Integer> {
                 (System.nanoTime() - start) / 1e9);
         stderr.flush();
         if (out != null) {
-            writeFolder(crates, loads, nest.bundles());
+            writeFolder(crates, loads, upstreamBundles.plan().bundles());
         }
         if (json != null) {
-            writeAtomically(json, LogisticsJson.write(crates, loads));
+            OutputFile.write(json, LogisticsJson.write(crates, loads));
         }
         stdout.print(PackSummary.text(kit.name(), share, crates, loads, kit.crates()));
         LogisticsCautions.all().forEach(c -> stdout.println("Caution, " + c.heading().toLowerCase(java.util.Locale.ROOT)
@@ -156,7 +166,24 @@ public final class PackCommand implements Callable<Integer> {
             stdout.println("Wrote " + json);
         }
         stdout.flush();
+        if (!shortfalls.isEmpty()) {
+            shortfalls.forEach(reason -> stderr.println("kitwright: the pack plan is incomplete: " + reason));
+            stderr.flush();
+            return ExitCode.NO_FEASIBLE_PLAN.code();
+        }
         return ExitCode.OK.code();
+    }
+
+    /** An unknown {@code --for} structure is bad input, told before any planning. */
+    private void checkStructure(Kit kit) throws InvalidInputException {
+        if (structure == null || kit.structures().stream().anyMatch(c -> c.structure().equals(structure))) {
+            return;
+        }
+        try {
+            StructureShare.of(structure, List.of(), List.of(), kit.structures());
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException(new Problem(null, 0, "--for", e.getMessage()));
+        }
     }
 
     private void checkCatalogs(Kit kit) throws InvalidInputException {
@@ -186,23 +213,6 @@ public final class PackCommand implements Callable<Integer> {
                         + "\n");
             }
             folder.commit();
-        }
-    }
-
-    /** Writes a file beside its target and moves it into place, so a failed run leaves no half file. */
-    private static void writeAtomically(Path file, String text) throws IOException {
-        Path absolute = file.toAbsolutePath();
-        Files.createDirectories(absolute.getParent());
-        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".partial");
-        try {
-            Files.writeString(temporary, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temporary);
         }
     }
 }

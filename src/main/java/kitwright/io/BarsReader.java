@@ -42,7 +42,7 @@ public final class BarsReader {
             String mark = row.required("mark", "the mark, the name of the bar type");
             String section = row.required("section", "a section of the tube catalog, e.g. CHS 48.3x3.2");
             Double length = row.length("length_mm", "a cut length in millimetres above 0");
-            Integer quantity = row.whole("quantity", 1,
+            Integer quantity = row.count("quantity", 1,
                     "a whole number of bars, at least 1; delete the row if the mark is not in the kit");
             Double nodeToNode = row.length("node_to_node_mm", "a node-to-node length in millimetres above 0");
             Double tolerance = row.number("tolerance_mm", 0, true, "a cut tolerance in millimetres, 0 or more");

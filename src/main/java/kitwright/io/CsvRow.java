@@ -62,11 +62,16 @@ public final class CsvRow {
         return text(column).isEmpty();
     }
 
-    /** The text of a column that must not be blank, or null after reporting it. */
+    /** The text of a column that names something: not blank, no control characters; or null after reporting it. */
     public String required(String column, String expected) {
         String text = text(column);
         if (text.isEmpty()) {
             problem(column, "the value is blank (expected " + expected + ")");
+            return null;
+        }
+        if (text.chars().anyMatch(Character::isISOControl)) {
+            problem(column, "the name '" + text + "' holds a line break, tab or other control character (expected "
+                    + expected + ", on one line)");
             return null;
         }
         return text;
@@ -77,6 +82,14 @@ public final class CsvRow {
      * wrong.
      */
     public Double number(String column, double minimum, boolean minimumAllowed, String expected) {
+        return number(column, minimum, minimumAllowed, Limits.MAX_NUMBER, expected);
+    }
+
+    /**
+     * A number at least {@code minimum} (above it when {@code minimumAllowed} is false) and at most {@code maximum},
+     * or null when blank or wrong.
+     */
+    public Double number(String column, double minimum, boolean minimumAllowed, double maximum, String expected) {
         String text = text(column);
         if (text.isEmpty()) {
             return null;
@@ -92,16 +105,30 @@ public final class CsvRow {
             problem(column, text + " " + wrong + " (expected " + expected + ")");
             return null;
         }
+        if (!(value <= maximum)) {
+            problem(column, tooLarge(text, expected, maximum));
+            return null;
+        }
         return value;
     }
 
-    /** A length in millimetres above zero, or null when blank or wrong. */
+    /** A length in millimetres above zero and at most {@link Limits#MAX_LENGTH_MM}, or null when blank or wrong. */
     public Double length(String column, String expected) {
-        return number(column, 0, false, expected);
+        return number(column, 0, false, Limits.MAX_LENGTH_MM, expected);
     }
 
     /** A whole number at least {@code minimum}, or null when blank or wrong. */
     public Integer whole(String column, int minimum, String expected) {
+        return whole(column, minimum, Integer.MAX_VALUE, expected);
+    }
+
+    /** A count of items, at least {@code minimum} and at most {@link Limits#MAX_COUNT}, or null when blank or wrong. */
+    public Integer count(String column, int minimum, String expected) {
+        return whole(column, minimum, Limits.MAX_COUNT, expected);
+    }
+
+    /** A whole number from {@code minimum} to {@code maximum}, or null when blank or wrong. */
+    public Integer whole(String column, int minimum, int maximum, String expected) {
         String text = text(column);
         if (text.isEmpty()) {
             return null;
@@ -115,8 +142,8 @@ public final class CsvRow {
             problem(column, text + " is not a whole number (expected " + expected + ")");
             return null;
         }
-        if (value.compareTo(BigDecimal.valueOf(Integer.MAX_VALUE)) > 0) {
-            problem(column, text + " is too large (expected " + expected + ")");
+        if (value.compareTo(BigDecimal.valueOf(maximum)) > 0) {
+            problem(column, tooLarge(text, expected, maximum));
             return null;
         }
         int whole = value.intValueExact();
@@ -126,6 +153,12 @@ public final class CsvRow {
             return null;
         }
         return whole;
+    }
+
+    private static String tooLarge(String text, String expected, double maximum) {
+        String wrong = maximum >= Integer.MAX_VALUE ? "is too large"
+                : "is above the limit of " + Figures.plain(maximum);
+        return text + " " + wrong + " (expected " + expected + ")";
     }
 
     /** A yes/no flag ({@code yes}, {@code no}, {@code true}, {@code false}), or null when blank or wrong. */

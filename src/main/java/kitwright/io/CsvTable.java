@@ -68,10 +68,13 @@ public final class CsvTable {
     public static Optional<CsvTable> read(Path file, CsvColumns columns, String what, Problems problems) {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            bytes = InputBytes.read(file);
         } catch (NoSuchFileException e) {
             problems.add(Problem.ofFile(file, "file not found (expected " + what + ", columns "
                     + columns.header() + ")"));
+            return Optional.empty();
+        } catch (InputBytes.TooLargeException e) {
+            problems.add(InputBytes.tooLarge(file, what + ", a CSV file with the columns " + columns.header()));
             return Optional.empty();
         } catch (IOException e) {
             problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()

@@ -38,7 +38,7 @@ public final class JointsReader {
             String mark = row.required("mark", "the joint's mark");
             Double diameter = row.length("diameter_mm", "the joint's outside diameter in millimetres above 0");
             Double mass = row.number("mass_kg", 0, false, "the mass of one joint in kilograms above 0");
-            Integer quantity = row.whole("quantity", 1, "a whole number of joints, at least 1");
+            Integer quantity = row.count("quantity", 1, "a whole number of joints, at least 1");
             row.requireValues("diameter_mm", "mass_kg", "quantity");
             if (mark != null) {
                 Integer earlier = firstLine.putIfAbsent(mark, row.line());

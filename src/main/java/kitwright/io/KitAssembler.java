@@ -33,6 +33,15 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
+        return marks(settings, lines, structures, true, catalog, problems);
+    }
+
+    /**
+     * As above; when {@code structuresReadable} is false, structures.csv has problems of its own (already
+     * reported), so a blank quantity is not judged against its rows, which would blame bars.csv for them.
+     */
+    static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
+                           boolean structuresReadable, TubeCatalog catalog, Problems problems) {
         Map<String, Need> needs = needs(settings, lines, structures, problems);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
@@ -47,9 +56,12 @@ final class KitAssembler {
             }
             Need need = needs.get(line.mark());
             Integer quantity = line.quantity();
+            if (need != null && need.count > Limits.MAX_COUNT) {
+                continue; // reported on the structures.csv row where the sum passed the limit
+            }
             if (quantity == null && need != null) {
                 quantity = need.count;
-            } else if (quantity == null) {
+            } else if (quantity == null && structuresReadable) {
                 String why = structures.isEmpty() ? "a whole number of bars; without structures.csv the quantity"
                         + " must be given" : "a whole number of bars; structures.csv does not use mark " + line.mark();
                 problems.add(sourced.problem("quantity", "the value is blank (expected " + why + ")"));
@@ -58,7 +70,7 @@ final class KitAssembler {
                         + need.who + " " + need.count + " (expected at least " + need.count
                         + ", or a blank quantity to take it from structures.csv)"));
             }
-            if (problems.count() == before) {
+            if (problems.count() == before && quantity != null) {
                 int required = structures.isEmpty() ? quantity : need == null ? 0 : need.count;
                 bars.add(new Bar(line.mark(), line.section(), length, quantity, required, line.nodeToNodeMm(),
                         line.toleranceMm(), line.note()));
@@ -84,8 +96,18 @@ final class KitAssembler {
             }
             Need need = needs.get(count.mark());
             if (settings.structuresStandTogether()) {
-                int total = (need == null ? 0 : need.count) + count.count();
-                needs.put(count.mark(), new Need(total, "the structures standing together need"));
+                int before = need == null ? 0 : need.count;
+                if (before > Limits.MAX_COUNT) {
+                    continue;
+                }
+                long total = (long) before + count.count();
+                if (total > Limits.MAX_COUNT) {
+                    problems.add(row.problem("count", "the structures standing together need " + total
+                            + " bars of mark " + count.mark() + " up to this row (expected at most " + Limits.MAX_COUNT
+                            + " bars of a mark in the kit)"));
+                }
+                needs.put(count.mark(), new Need((int) Math.min(total, Limits.MAX_COUNT + 1L),
+                        "the structures standing together need"));
             } else if (need == null || count.count() > need.count) {
                 needs.put(count.mark(), new Need(count.count(), "structure " + count.structure() + " needs"));
             }

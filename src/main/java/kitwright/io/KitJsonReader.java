@@ -62,9 +62,12 @@ public final class KitJsonReader {
     public static Optional<KitJson> read(Path file, Path kitDir, Problems problems) {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            bytes = InputBytes.read(file);
         } catch (NoSuchFileException e) {
             problems.add(Problem.ofFile(file, "file not found (expected the kit's settings as a JSON object)"));
+            return Optional.empty();
+        } catch (InputBytes.TooLargeException e) {
+            problems.add(InputBytes.tooLarge(file, "the kit's settings as a JSON object of a few lines"));
             return Optional.empty();
         } catch (IOException e) {
             problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()
@@ -111,21 +114,21 @@ public final class KitJsonReader {
         Path materials = json.path(root, "materials", kitDir).orElse(null);
         Path crates = json.path(root, "crateCatalog", kitDir).orElse(null);
         Path vehicles = json.path(root, "vehicleCatalog", kitDir).orElse(null);
-        double kerf = json.number(root, "", "kerfMm", 0, true, "the saw kerf in millimetres, 0 or more, e.g. 2.0")
+        double kerf = json.length(root, "", "kerfMm", true, "the saw kerf in millimetres, 0 or more, e.g. 2.0")
                 .orElse(defaults.kerfMm());
-        double trim = json.number(root, "", "trimMm", 0, true, "the end trim per end in millimetres, 0 or more")
+        double trim = json.length(root, "", "trimMm", true, "the end trim per end in millimetres, 0 or more")
                 .orElse(defaults.trimMm());
-        double minRemnant = json.number(root, "", "minRemnantMm", 0, true,
+        double minRemnant = json.length(root, "", "minRemnantMm", true,
                 "the shortest remnant in millimetres, 0 or more").orElse(defaults.minRemnantMm());
         double timeLimit = json.number(root, "", "timeLimitSeconds", 0, false,
                 "a time limit in seconds above 0").orElse(defaults.timeLimitSeconds());
         boolean together = json.flag(root, "structuresStandTogether").orElse(false);
-        double endDeduction = json.number(root, "", "endDeductionMm", 0, true,
+        double endDeduction = json.length(root, "", "endDeductionMm", true,
                 "the deduction per end in millimetres, 0 or more").orElse(0.0);
         NestTolerance tolerance = json.nestTolerance(root).orElse(defaults.nestTolerance());
-        double clearance = json.number(root, "", "nestClearanceMm", 0, true,
+        double clearance = json.length(root, "", "nestClearanceMm", true,
                 "a diametral clearance in millimetres, 0 or more").orElse(defaults.nestClearanceMm());
-        double endAllowance = json.number(root, "", "nestEndAllowanceMm", 0, true,
+        double endAllowance = json.length(root, "", "nestEndAllowanceMm", true,
                 "an allowance per end in millimetres, 0 or more").orElse(defaults.nestEndAllowanceMm());
         Double maxBundle = json.number(root, "", "maxBundleMassKg", 0, false,
                 "a mass in kilograms above 0, or leave the key out for no limit").orElse(null);
@@ -145,9 +148,9 @@ public final class KitJsonReader {
         JointBox d = JointBox.DEFAULT;
         String size = "a size in millimetres above 0";
         return new JointBox(
-                json.number(box, "jointBox.", "lengthMm", 0, false, size).orElse(d.lengthMm()),
-                json.number(box, "jointBox.", "widthMm", 0, false, size).orElse(d.widthMm()),
-                json.number(box, "jointBox.", "heightMm", 0, false, size).orElse(d.heightMm()),
+                json.length(box, "jointBox.", "lengthMm", false, size).orElse(d.lengthMm()),
+                json.length(box, "jointBox.", "widthMm", false, size).orElse(d.widthMm()),
+                json.length(box, "jointBox.", "heightMm", false, size).orElse(d.heightMm()),
                 json.number(box, "jointBox.", "maxMassKg", 0, false, "a mass in kilograms above 0")
                         .orElse(d.maxMassKg()));
     }

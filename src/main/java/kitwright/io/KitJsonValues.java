@@ -79,6 +79,20 @@ final class KitJsonValues {
 
     Optional<Double> number(JsonNode object, String prefix, String key, double minimum, boolean minimumAllowed,
                             String expected) {
+        return number(object, prefix, key, minimum, minimumAllowed, Limits.MAX_NUMBER, expected);
+    }
+
+    /** A length in millimetres from 0 (or above 0) up to {@link Limits#MAX_LENGTH_MM}. */
+    Optional<Double> length(JsonNode object, String prefix, String key, boolean zeroAllowed, String expected) {
+        return number(object, prefix, key, 0, zeroAllowed, Limits.MAX_LENGTH_MM, expected);
+    }
+
+    /**
+     * A number at least {@code minimum} (above it when {@code minimumAllowed} is false) and at most {@code maximum};
+     * a number too large for a double (e.g. 1e400) reads as infinite and is above the limit.
+     */
+    Optional<Double> number(JsonNode object, String prefix, String key, double minimum, boolean minimumAllowed,
+                            double maximum, String expected) {
         JsonNode value = value(object, key);
         if (value == null) {
             return Optional.empty();
@@ -91,6 +105,12 @@ final class KitJsonValues {
         if (number < minimum || (!minimumAllowed && number == minimum)) {
             String wrong = number < 0 ? "is negative" : number == 0 ? "is zero" : "is too small";
             report(prefix, key, value.asText() + " " + wrong + " (expected " + expected + ")");
+            return Optional.empty();
+        }
+        if (!(number <= maximum)) {
+            String shown = Double.isInfinite(number) ? "the number" : value.asText();
+            report(prefix, key, shown + " is above the limit of " + Figures.plain(maximum) + " (expected " + expected
+                    + ")");
             return Optional.empty();
         }
         return Optional.of(number);

@@ -60,11 +60,13 @@ public final class KitReader {
         }
         List<Sourced<BarLine>> lines = BarsReader.read(kitDir.resolve(BARS), problems);
         Path structuresFile = kitDir.resolve(STRUCTURES);
+        int beforeStructures = problems.count();
         List<Sourced<StructureCount>> structures = Files.exists(structuresFile)
                 ? StructuresReader.read(structuresFile, problems) : List.of();
+        boolean structuresReadable = problems.count() == beforeStructures;
         Path jointsFile = kitDir.resolve(JOINTS);
         List<Joint> joints = Files.exists(jointsFile) ? JointsReader.read(jointsFile, problems) : List.of();
-        List<Bar> bars = KitAssembler.marks(settings, lines, structures, catalog, problems);
+        List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, catalog, problems);
         problems.throwIfAny();
         return new Kit(kitDir, settings, bars, structures.stream().map(Sourced::value).toList(), joints, catalog,
                 materials == null ? Map.of() : materials, crates, vehicles);

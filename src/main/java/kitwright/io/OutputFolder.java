@@ -2,15 +2,19 @@ package kitwright.io;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.SimpleFileVisitor;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.BasicFileAttributes;
+import java.util.Optional;
 import java.util.concurrent.ThreadLocalRandom;
 
 /**
@@ -43,22 +47,83 @@ public final class OutputFolder implements AutoCloseable {
     }
 
     /**
-     * Starts a result folder for {@code target}; throws InvalidInputException when the target is a file or a
-     * folder kitwright did not write.
+     * Starts a result folder for {@code target}; throws InvalidInputException when the target is a file, a folder
+     * kitwright did not write, or a place that cannot be written (see {@link #check}).
      */
     public static OutputFolder create(Path target) throws InvalidInputException, IOException {
+        check(target);
         Path absolute = target.toAbsolutePath().normalize();
+        Path parent = absolute.getParent();
+        Path temporary;
+        try {
+            Files.createDirectories(parent);
+            temporary = newFolder(parent, "." + absolute.getFileName() + ".partial-");
+        } catch (FileSystemException e) {
+            throw new InvalidInputException(cannotWrite(target, e));
+        }
+        OutputFolder folder = new OutputFolder(absolute, temporary);
+        try {
+            Files.writeString(temporary.resolve(MARKER), MARKER_TEXT, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            folder.close(); // leave no empty temporary folder behind
+            throw e;
+        }
+        return folder;
+    }
+
+    /**
+     * Throws when {@code target} cannot become a result folder: it is a file, a folder kitwright did not write, the
+     * file system root, under a file, or under a folder that is not writable. Commands call it before planning so
+     * that a bad {@code --out} costs no work; {@link #create} checks again.
+     */
+    public static void check(Path target) throws InvalidInputException, IOException {
+        Path absolute = target.toAbsolutePath().normalize();
+        if (absolute.getParent() == null) {
+            throw new InvalidInputException(Problem.ofFile(target, "the root of the file system cannot be replaced"
+                    + " (expected a new or empty folder, or one kitwright wrote before)"));
+        }
         if (Files.exists(absolute) && !replaceable(absolute)) {
             String why = Files.isDirectory(absolute) ? "the folder exists and was not written by kitwright"
                     : "this is a file, not a folder";
             throw new InvalidInputException(Problem.ofFile(target, why + " (expected a new or empty folder, or"
                     + " one kitwright wrote before, which is then replaced)"));
         }
-        Path parent = absolute.getParent();
-        Files.createDirectories(parent);
-        Path temporary = newFolder(parent, "." + absolute.getFileName() + ".partial-");
-        Files.writeString(temporary.resolve(MARKER), MARKER_TEXT, StandardCharsets.UTF_8);
-        return new OutputFolder(absolute, temporary);
+        Optional<Problem> parent = parentProblem(target, absolute);
+        if (parent.isPresent()) {
+            throw new InvalidInputException(parent.get());
+        }
+    }
+
+    /** What stops a file or folder being made at {@code absolute}: a file where a folder should be, or no rights. */
+    static Optional<Problem> parentProblem(Path shown, Path absolute) {
+        Path existing = absolute.getParent();
+        while (existing != null && !Files.exists(existing)) {
+            existing = existing.getParent();
+        }
+        if (existing == null) {
+            return Optional.empty();
+        }
+        if (!Files.isDirectory(existing)) {
+            return Optional.of(Problem.ofFile(shown, existing + " is a file, so nothing can be written under it"
+                    + " (expected a path under a folder)"));
+        }
+        if (!Files.isWritable(existing)) {
+            return Optional.of(Problem.ofFile(shown, "the folder " + existing + " is not writable (expected a place"
+                    + " you may write to)"));
+        }
+        return Optional.empty();
+    }
+
+    /** The problem to show when the file system refuses to make a result's folder. */
+    static Problem cannotWrite(Path shown, FileSystemException e) {
+        String reason = e.getReason() != null ? e.getReason()
+                : e instanceof FileAlreadyExistsException ? "a file is in the way"
+                : e instanceof AccessDeniedException ? "permission denied"
+                : e instanceof NoSuchFileException ? "no such folder, and it cannot be made"
+                : "the file system refused";
+        String where = e.getFile() != null ? e.getFile() : shown.toString();
+        return Problem.ofFile(shown, "cannot write " + where + ": " + reason + " (expected a place you may write"
+                + " to)");
     }
 
     /** The final location. */
@@ -119,10 +184,18 @@ public final class OutputFolder implements AutoCloseable {
 
     /** A new folder with a unique name; unlike a temp directory it gets the usual permissions (umask). */
     private static Path newFolder(Path parent, String prefix) throws IOException {
+        return newEntry(parent, prefix, true);
+    }
+
+    /**
+     * A new empty folder or file in {@code parent}, named {@code prefix} and a random suffix; unlike a temporary
+     * file or folder of the JDK it gets the usual permissions (umask), so the result is readable as any other file.
+     */
+    static Path newEntry(Path parent, String prefix, boolean folder) throws IOException {
         for (int attempt = 0; ; attempt++) {
-            Path folder = parent.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
+            Path entry = parent.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong(), 36));
             try {
-                return Files.createDirectory(folder);
+                return folder ? Files.createDirectory(entry) : Files.createFile(entry);
             } catch (FileAlreadyExistsException e) {
                 if (attempt > 100) {
                     throw e;

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 /**
  * One thing wrong with the input, printed as {@code FILE:LINE: COLUMN: what is wrong (what was expected)}.
  * LINE counts a CSV header as line 1; 0 means the whole file. COLUMN is a CSV column or a kit.json key, or empty.
+ * Control characters quoted from the input are printed escaped ({@code \n}, {@code \t}), so each problem is one line.
  */
 public record Problem(Path file, int line, String column, String message) {
 
@@ -22,6 +23,29 @@ public record Problem(Path file, int line, String column, String message) {
         if (column != null && !column.isEmpty()) {
             sb.append(column).append(": ");
         }
-        return sb.append(message).toString();
+        return oneLine(sb.append(message).toString());
+    }
+
+    /** Control characters from the input (a line break in a header, a tab in a name) shown escaped: one line each. */
+    private static String oneLine(String text) {
+        if (text.chars().noneMatch(Character::isISOControl)) {
+            return text;
+        }
+        StringBuilder sb = new StringBuilder(text.length() + 8);
+        for (char c : text.toCharArray()) {
+            switch (c) {
+                case '\n' -> sb.append("\\n");
+                case '\r' -> sb.append("\\r");
+                case '\t' -> sb.append("\\t");
+                default -> {
+                    if (Character.isISOControl(c)) {
+                        sb.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
+                    } else {
+                        sb.append(c);
+                    }
+                }
+            }
+        }
+        return sb.toString();
     }
 }

@@ -39,7 +39,7 @@ public final class StructuresReader {
         for (CsvRow row : table.rows()) {
             String structure = row.required("structure", "the name of a structure, e.g. screen-frame");
             String mark = row.required("mark", "a mark of bars.csv");
-            Integer count = row.whole("count", 1,
+            Integer count = row.count("count", 1,
                     "a whole number of bars, at least 1; delete the row if the structure does not use the mark");
             if (row.blank("count")) {
                 row.problem("count", "the value is blank (expected how many bars of the mark the structure uses)");

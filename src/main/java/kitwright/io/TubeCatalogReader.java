@@ -104,6 +104,21 @@ public final class TubeCatalogReader {
         if (diameter != null && wall != null && 2 * wall >= diameter) {
             row.problem("wall_mm", "the wall " + Figures.plain(wall) + " mm is at least half the outside diameter "
                     + Figures.plain(diameter) + " mm (expected a wall below " + Figures.plain(diameter / 2) + " mm)");
+        } else if (diameter != null && wall != null) {
+            double bore = diameter - 2 * wall;
+            if (weldBead != null && weldBead >= bore) {
+                row.problem("weld_bead_mm", "the weld bead " + Figures.plain(weldBead) + " mm fills the bore "
+                        + Figures.plain(bore) + " mm (expected a bead height below the bore, usually 0 to 2 mm)");
+            }
+            if (odTolerance != null && odTolerance >= diameter) {
+                row.problem("od_tolerance_mm", "the tolerance " + Figures.plain(odTolerance) + " mm is not below the"
+                        + " outside diameter " + Figures.plain(diameter) + " mm (expected plus or minus a small"
+                        + " fraction of the diameter, e.g. 0.5)");
+            }
+        }
+        if (wallTolerance != null && wallTolerance >= 100) {
+            row.problem("wall_tolerance_pct", Figures.plain(wallTolerance) + " % would allow no wall at all (expected"
+                    + " a tolerance below 100 %, e.g. 10)");
         }
         if (!row.clean()) {
             return null;

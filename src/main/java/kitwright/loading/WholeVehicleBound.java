@@ -27,7 +27,10 @@ import kitwright.model.VehicleType;
  * into that many lanes, each a set of crates end to end ({@link LanePatterns}).
  */
 final class WholeVehicleBound {
+    /** Wall-clock safety net only; the node limit below ends the search the same way on every machine. */
     private static final double SECONDS = 5;
+    /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
+    private static final int MAX_NODES = 10_000;
     private static final int MAX_LANE_PATTERNS = 2000;
 
     private WholeVehicleBound() {
@@ -139,6 +142,7 @@ final class WholeVehicleBound {
                     }
                 }
             }
+            solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
             solver.setTimeLimit((long) (SECONDS * 1000));
             MPSolver.ResultStatus status = solver.solve();
             if (status != MPSolver.ResultStatus.OPTIMAL && status != MPSolver.ResultStatus.FEASIBLE) {

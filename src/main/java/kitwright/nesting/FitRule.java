@@ -66,10 +66,9 @@ public final class FitRule {
             bead = section.weldBeadMm() != null ? section.weldBeadMm() : 0;
         }
         double largestOuter = d + outerTolerance;
-        double smallestBore = (d - outerTolerance) - 2 * (t + wallTolerance) - bead;
-        if (!(smallestBore > 0)) {
-            throw new IllegalArgumentException("section " + section.name() + " has no bore left after tolerances");
-        }
+        // A thick wall with its tolerances (e.g. steel 10 x 4: 9.5 - 2 x 4.4 - 1 < 0) can leave no bore at all:
+        // such a tube is valid stock, it just hosts nothing (bore 0 fits no guest).
+        double smallestBore = Math.max(0, (d - outerTolerance) - 2 * (t + wallTolerance) - bead);
         return new TubeEnvelope(micrometres(largestOuter), micrometres(smallestBore), outerTolerance, wallTolerance,
                 bead);
     }

@@ -26,22 +26,38 @@ final class HostLoad {
         double lengthMm;
         final List<List<Integer>> lanes = new ArrayList<>();
         final List<List<Double>> laneLengths = new ArrayList<>();
+        /** Length taken in each channel, kept up to date so that placing n guests stays O(n), not O(n^2). */
+        private final double[] fills;
 
         Segment(int channels, double channelDiameterMm) {
             this.channels = channels;
             this.channelDiameterMm = channelDiameterMm;
+            this.fills = new double[channels];
             for (int i = 0; i < channels; i++) {
                 lanes.add(new ArrayList<>());
                 laneLengths.add(new ArrayList<>());
             }
         }
 
+        /** The sum of the channel's guest lengths, added in lane order (the same sum a loop over the lane gives). */
         double fill(int channel) {
+            return fills[channel];
+        }
+
+        void add(int channel, int tube, double lengthMm) {
+            lanes.get(channel).add(tube);
+            laneLengths.get(channel).add(lengthMm);
+            fills[channel] += lengthMm;
+        }
+
+        void removeAt(int channel, int index) {
+            lanes.get(channel).remove(index);
+            laneLengths.get(channel).remove(index);
             double sum = 0;
             for (double length : laneLengths.get(channel)) {
                 sum += length;
             }
-            return sum;
+            fills[channel] = sum;
         }
     }
 
@@ -168,8 +184,7 @@ final class HostLoad {
 
     private void append(int segment, int channel, int tube, double lengthMm) {
         Segment seg = segments.get(segment);
-        seg.lanes.get(channel).add(tube);
-        seg.laneLengths.get(channel).add(lengthMm);
+        seg.add(channel, tube, lengthMm);
         seg.lengthMm = Math.max(seg.lengthMm, seg.fill(channel));
     }
 
@@ -180,8 +195,7 @@ final class HostLoad {
                 List<Integer> lane = seg.lanes.get(c);
                 for (int i = 0; i < lane.size(); i++) {
                     if (lane.get(i) == tube) {
-                        lane.remove(i);
-                        seg.laneLengths.get(c).remove(i);
+                        seg.removeAt(c, i);
                         seg.lengthMm = 0;
                         for (int other = 0; other < seg.channels; other++) {
                             seg.lengthMm = Math.max(seg.lengthMm, seg.fill(other));

@@ -33,6 +33,12 @@ final class CrateLowerBounds {
     private static final double EPS = 1e-9;
     /** The LP works in cubic metres to keep its coefficients near 1. */
     private static final double CUBIC_MM_PER_M3 = 1e9;
+    /**
+     * Deterministic work limit of the whole-crate model: SCIP branch-and-bound nodes (the sample kits need 0 or 1);
+     * its proven bound at the limit is the same on every machine. The time limit is only a safety net.
+     */
+    private static final int MAX_NODES = 10_000;
+    private static final long SAFETY_MILLIS = 5000;
 
     private CrateLowerBounds() {
     }
@@ -118,7 +124,8 @@ final class CrateLowerBounds {
                 previous = lengths[k];
             }
             if (whole) {
-                solver.setTimeLimit(5000);
+                solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
+                solver.setTimeLimit(SAFETY_MILLIS);
             }
             MPSolver.ResultStatus status = solver.solve();
             if (whole) {

@@ -68,7 +68,7 @@ public final class PackingBenchmark {
             if (Files.isDirectory(dir)) {
                 Kit kit = KitReader.read(dir);
                 int pieces = kit.bars().stream().mapToInt(b -> b.quantity()).sum();
-                kits.add(new Object[] {name, pieces, PackUpstream.STAGES.bundles(kit).bundles(), kit.joints()});
+                kits.add(new Object[] {name, pieces, PackUpstream.STAGES.bundles(kit).plan().bundles(), kit.joints()});
             }
         }
         for (int n : new int[] {500, 1000, 2000, 5000}) {

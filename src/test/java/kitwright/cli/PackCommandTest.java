@@ -95,6 +95,46 @@ class PackCommandTest {
     }
 
     @Test
+    @DisplayName("a section that cannot be cut: what can be packed is, exit 3 with the reason; --for needing it: exit 3")
+    void sectionNotCut() throws Exception {
+        Path kit = temp.resolve("kit");
+        Files.createDirectories(kit);
+        Files.copy(Path.of("sample-kits/alu-kiosk/bars.csv"), kit.resolve("bars.csv"));
+        // One 6 m length of AL 30x2 for 28 bars of 600 and 900 mm (22.8 m): the section cannot be cut.
+        Files.writeString(kit.resolve("stock.csv"), Files.readString(Path.of("stock-catalogs/aluminium-tube.csv"))
+                .replace("AL 30x2,aluminium,30,2,6000,19.38,,mill", "AL 30x2,aluminium,30,2,6000,19.38,1,mill"));
+        for (String catalog : List.of("materials.csv", "crates.csv", "vehicles.csv")) {
+            Files.copy(Path.of("stock-catalogs", catalog), kit.resolve(catalog));
+        }
+        Run run = run("pack", kit.toString());
+        assertThat(run.code()).as(run.err()).isEqualTo(3);
+        assertThat(run.err()).contains("section AL 30x2 could not be cut");
+        assertThat(run.out()).contains("Crates: ");
+
+        Files.writeString(kit.resolve("structures.csv"), "structure,mark,count\nkiosk,K4,20\nkiosk,K1,8\n"
+                + "kiosk,K2,16\nkiosk,K3,12\nkiosk,K5,8\n");
+        Run share = run("pack", kit.toString(), "--for", "kiosk");
+        assertThat(share.code()).as(share.err()).isEqualTo(3);
+        assertThat(share.err()).contains("no plan for kiosk").contains("section AL 30x2 could not be cut");
+    }
+
+    @Test
+    @DisplayName("bad output paths are refused before any planning: exit 2, nothing written")
+    void badOutputPaths() throws Exception {
+        Path folder = Files.createDirectories(temp.resolve("folder.json"));
+        Run json = run("pack", "sample-kits/alu-kiosk", "--json", folder.toString());
+        assertThat(json.code()).as(json.err()).isEqualTo(2);
+        assertThat(json.err()).contains("this is a folder").doesNotContain("pack: cutting");
+        assertThat(folder).isEmptyDirectory();
+
+        Path file = Files.writeString(temp.resolve("notes.txt"), "mine");
+        Run out = run("pack", "sample-kits/alu-kiosk", "--out", file.resolve("out").toString());
+        assertThat(out.code()).isEqualTo(2);
+        assertThat(out.err()).contains("notes.txt is a file").doesNotContain("pack: cutting");
+        assertThat(file).hasContent("mine");
+    }
+
+    @Test
     @DisplayName("--help teaches: options, defaults, outputs and the caution")
     void help() {
         Run run = run("pack", "--help");

@@ -118,4 +118,21 @@ class FitRuleTest {
         assertThat(result.plan().bundles()).hasSize(2);
         assertThat(result.plan().status()).isEqualTo(Status.OPTIMAL);
     }
+
+    @Test
+    @DisplayName("A thick steel wall can leave no worst-case bore (10x4: 9.5 - 2 x 4.4 - 1 < 0): it hosts nothing")
+    void noBoreLeft() {
+        FitRule rule = NestingFixtures.worstCase();
+        Section thick = steel(10, 4);
+        // EN 10219-1 from memory: OD tolerance max(0.5, 1 % of 10) = 0.5 mm, wall 10 % of 4 = 0.4 mm, bead 1.0 mm.
+        assertThat(rule.envelope(thick).boreMm()).isZero();
+        assertThat(rule.envelope(thick).outerDiameterMm()).isCloseTo(10.5, within(1e-9));
+        Section thin = new Section("wire 1", "aluminium", 1, 0.2, null, null, null);
+        List<Tube> tubes = NestingFixtures.tubes(List.of(), rule, "T", thick, 3000, 2);
+        tubes = NestingFixtures.tubes(tubes, rule, "W", thin, 1000, 2);
+        NestingProblem problem = new NestingProblem(tubes, 0, 10, null);
+        NestResult result = Nester.run(problem, rule, NestingFixtures.quick());
+        NestPlanValidator.validate(problem, result.plan());
+        assertThat(result.plan().bundles()).as("no tube fits a bore of 0").hasSize(4);
+    }
 }

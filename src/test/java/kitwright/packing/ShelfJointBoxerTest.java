@@ -17,9 +17,9 @@ class ShelfJointBoxerTest {
     void squareGridCount() {
         List<JointBoxLoad> boxes = boxer.box(List.of(new Joint("N", 100, 0.2, 150)), JointBox.DEFAULT);
         assertThat(boxes).extracting(JointBoxLoad::jointCount).containsExactly(72, 72, 6);
-        // sphere / cell = pi/6 = 52.4 %
-        assertThat(72 * Math.PI / 6 * 1e6 / (600.0 * 400 * 300)).isCloseTo(0.524, org.assertj.core.data.Offset
-                .offset(0.001));
+        // a full box is the square grid's fill, sphere / cell = pi/6 = 52.4 % (DOMAIN.md 4: 52 %)
+        double fill = boxes.get(0).jointCount() * Math.PI / 6 * Math.pow(100, 3) / (600.0 * 400 * 300);
+        assertThat(fill).isCloseTo(Math.PI / 6, org.assertj.core.data.Offset.offset(1e-12));
     }
 
     @Test

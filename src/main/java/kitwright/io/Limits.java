@@ -1,0 +1,21 @@
+package kitwright.io;
+
+/**
+ * Upper limits on the numbers kitwright reads, far beyond any real kit. They exist so that a typing slip (an extra
+ * run of zeros, a value in micrometres) is reported as bad input instead of overflowing the stages' integer
+ * arithmetic (lengths become whole tenths of a millimetre in {@code int}, prices are scaled into {@code long}) or
+ * running for days. A value above its limit is reported with the limit in the message.
+ */
+public final class Limits {
+    /** Longest length of any kind, in millimetres: 1 km (stock, bars, crates, decks, kerf, trim, allowances). */
+    public static final double MAX_LENGTH_MM = 1_000_000;
+    /** Most items in one row: bars of a mark, joints of a mark, bars of a mark one structure uses. */
+    public static final int MAX_COUNT = 100_000;
+    /** Largest other number: prices, masses, densities, costs, seconds. */
+    public static final double MAX_NUMBER = 1e9;
+    /** Largest input file, in bytes (64 MiB); also stops a device such as /dev/zero from being read forever. */
+    public static final int MAX_FILE_BYTES = 64 << 20;
+
+    private Limits() {
+    }
+}
