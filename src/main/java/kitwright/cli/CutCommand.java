@@ -2,11 +2,7 @@ package kitwright.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import kitwright.cutting.CutPlan;
@@ -15,6 +11,7 @@ import kitwright.cutting.KitCutter;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
+import kitwright.io.OutputFile;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
@@ -107,6 +104,12 @@ public final class CutCommand implements Callable<Integer> {
             err.println("kitwright: warning: no materials, so masses are left out"
                     + (kitDir == null ? " (give --materials FILE)" : ""));
         }
+        if (json != null) {
+            OutputFile.check(json);
+        }
+        if (out != null) {
+            OutputFolder.check(out);
+        }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
             err.printf(Locale.ROOT, "cut %s: %s, lower bound %s, best %s%n", section, stage, figure(bound),
@@ -118,7 +121,7 @@ public final class CutCommand implements Callable<Integer> {
         err.flush();
         String planJson = PrettyJson.write(plan);
         if (json != null) {
-            writeAtomically(json, planJson);
+            OutputFile.write(json, planJson);
         }
         if (out != null) {
             try (OutputFolder folder = OutputFolder.create(out)) {
@@ -181,26 +184,13 @@ public final class CutCommand implements Callable<Integer> {
     }
 
     private void check(Double value, String option, boolean zeroAllowed) {
-        if (value != null && (value.isNaN() || value.isInfinite() || value < 0 || (!zeroAllowed && value == 0))) {
+        double maximum = option.equals("--time-limit") ? kitwright.io.Limits.MAX_NUMBER
+                : kitwright.io.Limits.MAX_LENGTH_MM;
+        if (value != null && (value.isNaN() || value.isInfinite() || value < 0 || (!zeroAllowed && value == 0)
+                || value > maximum)) {
             throw new CommandLine.ParameterException(spec.commandLine(), option + " " + value + " is not allowed"
-                    + " (expected a number " + (zeroAllowed ? "0 or more" : "above 0") + ")");
-        }
-    }
-
-    /** Writes beside the target, then renames it into place, so a failed run leaves no half file. */
-    private static void writeAtomically(Path target, String text) throws IOException {
-        Path absolute = target.toAbsolutePath();
-        Files.createDirectories(absolute.getParent());
-        Path temporary = Files.createTempFile(absolute.getParent(), "." + absolute.getFileName(), ".partial");
-        try {
-            Files.writeString(temporary, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(temporary, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temporary, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temporary);
+                    + " (expected a number " + (zeroAllowed ? "0 or more" : "above 0") + ", at most "
+                    + kitwright.io.Figures.plain(maximum) + ")");
         }
     }
 

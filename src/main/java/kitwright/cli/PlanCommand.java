@@ -72,6 +72,7 @@ public final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
+        OutputFolder.check(out);
         PrintWriter err = spec.commandLine().getErr();
         PlanResult result = Planner.run(kit, new Planner.Options(sparesFromOffcuts), progress(err));
         LocalDate day = date != null ? date : LocalDate.now();
