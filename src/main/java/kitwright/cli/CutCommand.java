@@ -7,7 +7,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.CutProgress;
-import kitwright.cutting.KitCutter;
+import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
@@ -116,7 +116,7 @@ public final class CutCommand implements Callable<Integer> {
                     best == null ? "-" : figure(best));
             err.flush();
         };
-        CutPlan plan = KitCutter.cut(kit, new KitCutter.Options(sparesFromOffcuts, null), progress);
+        CutPlan plan = SparesStage.cut(kit, sparesFromOffcuts, null, progress).plan();
         err.printf(Locale.ROOT, "cut: %.2f s%n", (System.nanoTime() - start) / 1e9);
         err.flush();
         String planJson = PrettyJson.write(plan);

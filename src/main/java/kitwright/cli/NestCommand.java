@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.CutProgress;
-import kitwright.cutting.KitCutter;
+import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
@@ -123,7 +123,7 @@ public final class NestCommand implements Callable<Integer> {
                     best == null ? "-" : String.format(Locale.ROOT, "%.2f", best));
             err.flush();
         };
-        CutPlan cuts = KitCutter.cut(kit, KitCutter.Options.DEFAULT, progress);
+        CutPlan cuts = SparesStage.cut(kit, false, null, progress).plan();
         err.println("nest: " + kit.name() + ", every cut piece into bundles");
         err.flush();
         long cut = System.nanoTime();

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.CutProgress;
-import kitwright.cutting.KitCutter;
+import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Kit;
 import kitwright.model.Status;
@@ -38,7 +38,7 @@ public interface PackUpstream {
 
     /** Cutting, then nesting, with the kit's settings and time limit. */
     PackUpstream STAGES = kit -> {
-        CutPlan cutting = KitCutter.cut(kit, KitCutter.Options.DEFAULT, CutProgress.NONE);
+        CutPlan cutting = SparesStage.cut(kit, false, null, CutProgress.NONE).plan();
         NestResult nesting = Nester.run(kit, cutting,
                 NestingOptions.DEFAULT.withWallSeconds(kit.settings().timeLimitSeconds()));
         List<String> shortfalls = new ArrayList<>();
