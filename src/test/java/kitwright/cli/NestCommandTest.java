@@ -9,7 +9,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.CutProgress;
-import kitwright.cutting.KitCutter;
 import kitwright.io.KitReader;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
@@ -48,7 +47,7 @@ class NestCommandTest {
                 "--date", "2026-12-01");
         assertThat(code).as(err.toString()).isZero();
         Kit kit = KitReader.read(Path.of("sample-kits/alu-kiosk"));
-        CutPlan cuts = KitCutter.cut(kit, KitCutter.Options.DEFAULT, CutProgress.NONE);
+        CutPlan cuts = kitwright.spares.SparesStage.cut(kit, false, null, CutProgress.NONE).plan();
         NestPlan plan = read(json);
         NestPlanValidator.validate(kit, cuts, plan);
         int pieces = cuts.sections().stream().flatMap(s -> s.patterns().stream())
