@@ -74,6 +74,12 @@ public final class CsvRow {
                     + expected + ", on one line)");
             return null;
         }
+        if ("=+@".indexOf(text.charAt(0)) >= 0) {
+            // A cell starting so is run as a formula by spreadsheets that open the CSV outputs (OWASP: CSV injection).
+            problem(column, "the name '" + text + "' starts with '" + text.charAt(0) + "', which a spreadsheet would"
+                    + " run as a formula (expected " + expected + ", starting with a letter or digit)");
+            return null;
+        }
         return text;
     }
 
