@@ -5,7 +5,6 @@ import java.util.Map;
 import kitwright.cutting.CutPlan;
 import kitwright.loading.LoadPlan;
 import kitwright.metrics.KitMetrics;
-import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Kit;
 import kitwright.model.Status;
 import kitwright.nesting.NestResult;
@@ -26,13 +25,6 @@ public record PlanResult(Kit kit, KitSummary summary, CutPlan cutting, SparesOut
     public PlanResult {
         java.util.Objects.requireNonNull(figures, "figures");
         stageSeconds = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(stageSeconds));
-    }
-
-    /** A plan without service-life spares, its figures computed from the kit and the cutting plan. */
-    public PlanResult(Kit kit, KitSummary summary, CutPlan cutting, NestResult nesting, CratePlan crates,
-                      LoadPlan loads, Map<String, Double> stageSeconds) {
-        this(kit, summary, cutting, null, KitMetricsCalculator.of(kit, cutting), nesting, crates, loads,
-                stageSeconds);
     }
 
     public boolean logisticsPlanned() {

@@ -49,8 +49,9 @@ class PlanValidatorTest {
 
     private static PlanResult with(NestPlan nesting, CratePlan crates, LoadPlan loads) {
         NestResult n = good.nesting();
-        return new PlanResult(good.kit(), good.summary(), good.cutting(), new NestResult(nesting, n.reason(), n.rule(),
-                n.pieces(), n.looseVolumeM3(), n.bundledVolumeM3()), crates, loads, good.stageSeconds());
+        return new PlanResult(good.kit(), good.summary(), good.cutting(), good.spares(), good.figures(),
+                new NestResult(nesting, n.reason(), n.rule(), n.pieces(), n.looseVolumeM3(), n.bundledVolumeM3()),
+                crates, loads, good.stageSeconds());
     }
 
     private static Map<String, String> files(PlanResult result) {
