@@ -18,6 +18,7 @@ import kitwright.model.VehicleType;
  *   sum_c m_c x_cv <= payload_v y_v,  sum_c vol_c x_cv <= volume_v y_v
  *   sum_{c in T} l_c w_c x_cv <= L_v W_v y_v                      T: classes that always top their stack
  *   sum_{c in G} l_c w_c x_cv <= L_v W_v y_v                      G: classes that always stand on the floor
+ *   sum_c f(m_c / payload_v) x_cv <= y_v                           f dual feasible (Fekete &amp; Schepers 2001)
  *   x_cv <= sideBySide_cv y_v                                      c in T or G
  *   sum_{c in S} along_cv x_cv <= floor(W_v / minAcross_S) L_v y_v   S = T or G, fixed orientation on v
  *   sum_q z_vq <= floor(W_v / minAcross_S) y_v,  x_cv <= sum_q a_cq z_vq   lanes of S as patterns q, z_vq >= 0
@@ -32,6 +33,8 @@ final class WholeVehicleBound {
     /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
     private static final int MAX_NODES = 10_000;
     private static final int MAX_LANE_PATTERNS = 2000;
+    /** The lambdas of the payload cuts ({@link #massCuts}). */
+    private static final double[] LAMBDAS = {0.5, 0.4, 0.3, 0.2, 0.1};
 
     private WholeVehicleBound() {
     }
@@ -68,6 +71,32 @@ final class WholeVehicleBound {
                 }
             }
         }
+    }
+
+    /**
+     * Bin-packing cuts on the payload of vehicle type v: sum_c f(m_c / payload_v) x_cv <= y_v for the dual feasible
+     * functions f = f_0^lambda of Fekete &amp; Schepers (2001): 1 above 1 - lambda, the share itself from lambda to
+     * 1 - lambda, 0 below lambda. Any vehicle's crates have shares summing to at most 1, so their f values do too;
+     * summed over the vehicles of type v this is at most y_v. With lambda = 1/2 it says that no two crates heavier
+     * than half the payload share a vehicle (the idea behind Martello &amp; Toth's bound L2).
+     */
+    private static void massCuts(MPSolver solver, List<CrateClass> classes, VehicleType t, int v, MPVariable[][] x,
+                                 MPVariable y) {
+        for (double lambda : LAMBDAS) {
+            MPConstraint cut = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "mass_dff_" + v + "_" + lambda);
+            cut.setCoefficient(y, -1);
+            for (CrateClass c : classes) {
+                cut.setCoefficient(x[c.index()][v], dualFeasible(c.massKg() / t.payloadKg(), lambda));
+            }
+        }
+    }
+
+    /** Fekete &amp; Schepers' f_0^lambda, 0 &lt; lambda &lt;= 1/2. */
+    static double dualFeasible(double share, double lambda) {
+        if (share > 1 - lambda + 1e-12) {
+            return 1;
+        }
+        return share < lambda - 1e-12 ? 0 : share;
     }
 
     /** The bound, or NaN when no MIP solver is at hand or it proved nothing. */
@@ -120,6 +149,7 @@ final class WholeVehicleBound {
                         cap.setCoefficient(y[v], -StackingRules.sideBySide(c, t));
                     }
                 }
+                massCuts(solver, classes, t, v, x, y[v]);
                 for (boolean[] set : new boolean[][] {top, floor}) {
                     MPConstraint floorArea = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "area_" + v);
                     floorArea.setCoefficient(y[v], -area);

@@ -77,7 +77,7 @@ final class CrateFiller {
         lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
                 .thenComparing(Comparator.comparingDouble(CrateFiller::bearingLength).reversed())
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
-        double[] used = placeLanes(lanes, types, side, width - side, floor, height, net, mass, counts, slots);
+        double[] used = placeLanes(lanes, types, side, length, width, floor, height, net, mass, counts, slots);
         placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
         List<CrateLayout.Slot> standing = Support.settle(slots, types, width);
         int[] kept = new int[types.size()];
@@ -185,11 +185,17 @@ final class CrateFiller {
     }
 
     /**
-     * Places lanes into row groups; returns {end of the longest lane, top of the rows}.
+     * Places lanes into row groups, from y0 to the crate's inner width; returns {end of the longest lane, top of
+     * the rows}. A lane above the floor goes in only as far along as what is under it bears it ({@link Support});
+     * the rest of it goes back among the lanes still to place, as a lane of its own.
      */
-    private static double[] placeLanes(List<LaneBuilder.Lane> lanes, List<ItemType> types, double y0, double width, double floor,
-                                       double height, double net, double[] mass, int[] counts,
-                                       List<CrateLayout.Slot> slots) {
+    private static double[] placeLanes(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0,
+                                       double length, double crateWidth, double floor, double height, double net, double[] mass,
+                                       int[] counts, List<CrateLayout.Slot> slots) {
+        double width = crateWidth - y0;
+        List<LaneBuilder.Lane> lanes = new ArrayList<>(sorted);
+        // lanes put back and not placed yet, in the order put back
+        List<LaneBuilder.Lane> requeued = new ArrayList<>();
         if (width <= EPS) {
             return new double[] {0, floor};
         }
@@ -199,6 +205,7 @@ final class CrateFiller {
         double endX = 0;
         for (int k = 0; k < lanes.size(); k++) {
             LaneBuilder.Lane lane = lanes.get(k);
+            requeued.removeIf(l -> l == lane);
             double d = lane.cellMm();
             if (mass[0] + lane.lightestKg() > net + EPS) {
                 continue;
@@ -226,18 +233,26 @@ final class CrateFiller {
                 continue;
             }
             double x = 0;
-            for (ItemType t : lane.items()) {
+            List<ItemType> items = lane.items();
+            for (int i = 0; i < items.size(); i++) {
+                ItemType t = items.get(i);
                 if (mass[0] + t.massKg() > net + EPS) {
                     continue;
                 }
-                mass[0] += t.massKg();
-                counts[t.index()]++;
                 double r = t.diameterMm() / 2;
                 double z = t.diameterMm() < cell.d() - EPS
                         ? settle(x, t.lengthMm(), y0 + cell.y(), r, cell.z() - cell.d() / 2 + r, slots, types)
                         : cell.z();
-                slots.add(new CrateLayout.Slot(t.index(), x, y0 + cell.y() - r, z - r, t.lengthMm(),
-                        t.diameterMm(), t.diameterMm()));
+                CrateLayout.Slot slot = new CrateLayout.Slot(t.index(), x, y0 + cell.y() - r, z - r, t.lengthMm(),
+                        t.diameterMm(), t.diameterMm());
+                if (slot.z() > Support.TOUCH && !Support.supported(slot, slots, types, crateWidth)) {
+                    requeue(lanes, k, new LaneBuilder.Lane(items.get(i).diameterMm(),
+                            List.copyOf(items.subList(i, items.size()))), length, requeued);
+                    break;
+                }
+                mass[0] += t.massKg();
+                counts[t.index()]++;
+                slots.add(slot);
                 x += t.lengthMm();
             }
             endX = Math.max(endX, x);
@@ -272,6 +287,39 @@ final class CrateFiller {
             }
         }
         return Math.min(rest, from);
+    }
+
+    /**
+     * Puts what is left of a lane cut short back among the lanes after position k, before the first lane with a
+     * smaller cell, so it keeps the widest-first order; or joins the end of a lane so put back before, of the same
+     * cell, when both fit the crate length together. Every lane placed takes a cell and cells are never given
+     * back, so placing ends.
+     */
+    private static void requeue(List<LaneBuilder.Lane> lanes, int k, LaneBuilder.Lane rest, double length,
+                                List<LaneBuilder.Lane> requeued) {
+        double restLength = rest.lengthMm();
+        for (LaneBuilder.Lane other : requeued) {
+            if (Math.abs(other.cellMm() - rest.cellMm()) > EPS || other.lengthMm() + restLength > length + EPS) {
+                continue;
+            }
+            for (int j = k + 1; j < lanes.size(); j++) {
+                if (lanes.get(j) == other) {
+                    List<ItemType> both = new ArrayList<>(other.items());
+                    both.addAll(rest.items());
+                    LaneBuilder.Lane merged = new LaneBuilder.Lane(other.cellMm(), List.copyOf(both));
+                    lanes.set(j, merged);
+                    requeued.removeIf(l -> l == other);
+                    requeued.add(merged);
+                    return;
+                }
+            }
+        }
+        requeued.add(rest);
+        int at = k + 1;
+        while (at < lanes.size() && lanes.get(at).cellMm() >= rest.cellMm() - EPS) {
+            at++;
+        }
+        lanes.add(at, rest);
     }
 
     /** The free cell with the smallest diameter that takes a lane of cell d, removed from the list. */

@@ -17,10 +17,10 @@ import java.util.TreeMap;
 final class LaneBuilder {
     private static final double EPS = 1e-6;
 
-    /** A lane: its cell diameter and the bundles in it, end to end from x = 0. */
-    record Lane(double cellMm, List<ItemType> items) {
-        double lengthMm() {
-            return items.stream().mapToDouble(ItemType::lengthMm).sum();
+    /** A lane: its cell diameter and the bundles in it, end to end from x = 0, {@code lengthMm} long. */
+    record Lane(double cellMm, List<ItemType> items, double lengthMm) {
+        Lane(double cellMm, List<ItemType> items) {
+            this(cellMm, items, items.stream().mapToDouble(ItemType::lengthMm).sum());
         }
 
         double lightestKg() {

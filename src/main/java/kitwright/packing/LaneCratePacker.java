@@ -14,7 +14,8 @@ import kitwright.nesting.Bundle;
  * Crating by lanes and rows: joints into boxes ({@link ShelfJointBoxer}), then bundles and boxes into crates
  * ({@link CrateFiller} builds each crate, {@link CrateChoice} picks the crate mix of least total price, then fewest
  * crates). Without prices on every crate type the count alone is minimised. Surplus places of the chosen patterns
- * are left empty, and each crate then moves to the cheapest type that still holds exactly its contents.
+ * are left empty, {@link CrateElimination} then empties what crates it can into the others, and each crate moves to
+ * the cheapest type that still holds exactly its contents.
  *
  * <p>Status: OPTIMAL when the count meets the proven count bound and the price meets the price bound
  * ({@link CrateLowerBounds}); else FEASIBLE with the gap. INFEASIBLE when an item fits no crate type, with the
@@ -22,6 +23,8 @@ import kitwright.nesting.Bundle;
  */
 public final class LaneCratePacker implements CratePacker {
     private static final double EPS = 1e-6;
+    /** Crate fillings the elimination of crates may try ({@link CrateElimination}). */
+    private static final int ELIMINATION_BUDGET = 600;
 
     /**
      * Solver limits.
@@ -75,6 +78,8 @@ public final class LaneCratePacker implements CratePacker {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
         layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
+        layouts = downsize(new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, items.types()), crates,
+                cost, items.types());
         List<Crate> result = realise(layouts, crates, items);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
         CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);

@@ -32,12 +32,15 @@ final class Support {
         List<CrateLayout.Slot> byHeight = new ArrayList<>(slots);
         byHeight.sort(Comparator.comparingDouble(CrateLayout.Slot::z));
         List<CrateLayout.Slot> kept = new ArrayList<>();
+        java.util.Set<CrateLayout.Slot> standing = java.util.Collections.newSetFromMap(
+                new java.util.IdentityHashMap<>());
         for (CrateLayout.Slot s : byHeight) {
             if (s.z() <= TOUCH || supported(s, kept, types, width)) {
                 kept.add(s);
+                standing.add(s);
             }
         }
-        return slots.stream().filter(kept::contains).toList();
+        return slots.stream().filter(standing::contains).toList();
     }
 
     /** Whether every slot above the floor is supported by the others. */
@@ -104,10 +107,13 @@ final class Support {
                 }
             }
         }
+        // coverage changes only at the ends of the items that can hold it
         TreeSet<Double> cuts = new TreeSet<>(List.of(s.x(), end(s)));
-        for (CrateLayout.Slot o : others) {
-            cuts.add(Math.max(s.x(), Math.min(end(s), o.x())));
-            cuts.add(Math.max(s.x(), Math.min(end(s), end(o))));
+        for (List<CrateLayout.Slot> holders : List.of(flat, left, right, faces)) {
+            for (CrateLayout.Slot o : holders) {
+                cuts.add(Math.max(s.x(), Math.min(end(s), o.x())));
+                cuts.add(Math.max(s.x(), Math.min(end(s), end(o))));
+            }
         }
         Double[] x = cuts.toArray(Double[]::new);
         for (int a = 0; a + 1 < x.length; a++) {

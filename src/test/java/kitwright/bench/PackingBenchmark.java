@@ -44,6 +44,7 @@ import kitwright.validate.LoadPlanValidator;
  * mvn -q -B -o test-compile dependency:build-classpath -Dmdep.outputFile=target/cp.txt
  * java -cp target/classes:target/test-classes:$(cat target/cp.txt) kitwright.bench.PackingBenchmark
  * </pre>
+ * {@code -Dbench.only=KIT} runs one kit; {@code -Dbench.crates=true} prints each crate's fill by mass and volume.
  * Targets (issue 6): crates within 15 % of the box-volume bound, trip cost within 10 % of the fleet-cost bound,
  * under 10 s.
  */
@@ -82,7 +83,11 @@ public final class PackingBenchmark {
                 + " bound | crates / max bound | price / price bound | trips | trip cost / fleet LP | trip cost /"
                 + " whole-vehicle bound | seconds (wall) | seconds (CPU) |");
         System.out.println("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
+        String only = System.getProperty("bench.only", "");
         for (Object[] kit : kits) {
+            if (!only.isEmpty() && !only.equals(kit[0])) {
+                continue;
+            }
             System.out.println(run(kit, crates, vehicles));
         }
     }
@@ -118,6 +123,9 @@ public final class PackingBenchmark {
         double seconds = wall[RUNS / 2];
         double cpuSeconds = cpuTimes[RUNS / 2];
         CratePlanValidator.check(plan, bundles, joints, crates, JointBox.DEFAULT);
+        if (Boolean.getBoolean("bench.crates")) {
+            printCrates((String) kit[0], plan, crates);
+        }
         LoadPlanValidator.check(load, plan, crates, vehicles);
         int boxBound = plan.bounds().boxVolumeCrates();
         int massBound = plan.bounds().massCrates();
@@ -129,6 +137,20 @@ public final class PackingBenchmark {
                 price / plan.bounds().price(), load.vehicles().size(),
                 load.tripCost() / load.bounds().fleetRelaxation(), load.tripCost() / load.lowerBound(), seconds,
                 cpuSeconds);
+    }
+
+    /** With -Dbench.crates=true: each crate's fill by mass and by bounding-box volume, on standard error. */
+    private static void printCrates(String name, CratePlan plan, List<CrateType> crates) {
+        for (var c : plan.crates()) {
+            CrateType type = crates.stream().filter(x -> x.name().equals(c.type())).findFirst().orElseThrow();
+            double net = type.maxGrossKg() - type.tareKg();
+            double inner = type.innerLengthMm() * type.innerWidthMm() * type.innerHeightMm();
+            double box = c.items().stream().mapToDouble(i -> i.lengthMm() * i.widthMm() * i.heightMm()).sum();
+            System.err.printf(Locale.ROOT, "  %s %s %s: %.0f of %.0f kg (%.0f %%), box volume %.0f %%, %d bundles,"
+                    + " %d boxes%n", name, c.id(), c.type(), c.grossKg() - type.tareKg(), net,
+                    100 * (c.grossKg() - type.tareKg()) / net, 100 * box / inner,
+                    c.items(kitwright.packing.ItemKind.BUNDLE).size(), c.items(kitwright.packing.ItemKind.BOX).size());
+        }
     }
 
     private static double priceOf(List<CrateType> crates, String type) {

@@ -52,4 +52,43 @@ class WholeVehicleBoundTest {
         // two lanes a semi-trailer: 11.5, so 12 trips (the payload would allow 8, the lengths 265 300 / 27 200 = 9.75)
         assertThat(WholeVehicleBound.compute(List.of(a, b), SEMI, COST)).isCloseTo(12_000, within(1e-6));
     }
+
+    @Test
+    @DisplayName("payload cuts: three crates of 2499, 1568 and 1396 kg on 2800 kg trucks, any two heavier than the "
+            + "payload: 3 trucks (Martello & Toth's L2 reasoning), where the summed mass (5463 kg) allows 2")
+    void payloadCuts() {
+        VehicleType truck = new VehicleType("truck", 6200, 2450, 2400, 2800, 420.0, "fixture");
+        List<CrateClass> crates = List.of(new CrateClass(0, 4620, 1120, 840, 2499, true, 1500, 1),
+                new CrateClass(1, 4620, 1120, 840, 1568, true, 1500, 1),
+                new CrateClass(2, 4620, 1120, 840, 1396, true, 1500, 1));
+        assertThat(WholeVehicleBound.compute(crates, List.of(truck), new double[] {420})).isCloseTo(1260,
+                within(1e-6));
+        assertThat(FleetCostBound.compute(crates, List.of(truck), new double[] {420})).isLessThan(840);
+    }
+
+    @Test
+    @DisplayName("f_0^lambda is dual feasible (Fekete & Schepers 2001): shares summing to at most 1 keep f sums <= 1, "
+            + "on 20,000 random sets")
+    void dualFeasibleFunction() {
+        java.util.Random random = new java.util.Random(7);
+        for (int trial = 0; trial < 20_000; trial++) {
+            double lambda = 0.05 + 0.45 * random.nextDouble();
+            int n = 1 + random.nextInt(6);
+            double[] share = new double[n];
+            double sum = 0;
+            for (int i = 0; i < n; i++) {
+                share[i] = random.nextDouble();
+                sum += share[i];
+            }
+            double scale = sum > 1 ? (1 - 1e-9) / sum : 1;
+            double f = 0;
+            for (double x : share) {
+                f += WholeVehicleBound.dualFeasible(x * scale, lambda);
+            }
+            assertThat(f).isLessThanOrEqualTo(1 + 1e-9);
+        }
+        assertThat(WholeVehicleBound.dualFeasible(0.7, 0.4)).isEqualTo(1);
+        assertThat(WholeVehicleBound.dualFeasible(0.45, 0.4)).isEqualTo(0.45);
+        assertThat(WholeVehicleBound.dualFeasible(0.3, 0.4)).isZero();
+    }
 }

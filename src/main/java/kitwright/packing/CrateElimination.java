@@ -1,0 +1,114 @@
+package kitwright.packing;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import kitwright.model.CrateType;
+
+/**
+ * Local search after the crate mix: empties the least filled crates into the others. A crate is picked as the one
+ * to empty, least filled first (the larger of its mass share and its bounding-box volume share); each other
+ * crate, most room first, is filled again ({@link CrateFiller}) from its own items plus what is still to move, and
+ * kept when the new layout holds every one of its own items and takes at least one more. When the crate is empty
+ * it is dropped (every crate has a cost, so the total falls); when it is not, nothing changes. A move repeats
+ * until no crate can be emptied or the budget of crate fillings is spent, so the result depends only on the input.
+ * The same idea as the "eliminate a bin" moves of bin-packing local search (e.g. Fleszar &amp; Hindi 2002).
+ */
+final class CrateElimination {
+    private final CrateFiller filler = new CrateFiller();
+    private final int budget;
+
+    /** @param budget the most crate fillings to try in all */
+    CrateElimination(int budget) {
+        this.budget = budget;
+    }
+
+    List<CrateLayout> improve(List<CrateLayout> layouts, List<CrateType> crates, List<ItemType> types) {
+        List<CrateLayout> current = new ArrayList<>(layouts);
+        int[] spent = {0};
+        boolean emptied = true;
+        while (emptied && spent[0] < budget && current.size() > 1) {
+            emptied = false;
+            List<Integer> order = byFill(current, crates, types);
+            for (int victim : order) {
+                List<CrateLayout> next = empty(current, victim, crates, types, spent);
+                if (next != null) {
+                    current = next;
+                    emptied = true;
+                    break;
+                }
+                if (spent[0] >= budget) {
+                    break;
+                }
+            }
+        }
+        return current;
+    }
+
+    /** The layouts without the victim, its items moved into the others; null when they cannot all move. */
+    private List<CrateLayout> empty(List<CrateLayout> layouts, int victim, List<CrateType> crates,
+                                    List<ItemType> types, int[] spent) {
+        int[] toMove = layouts.get(victim).counts().clone();
+        List<CrateLayout> result = new ArrayList<>(layouts);
+        List<Integer> hosts = new ArrayList<>(byFill(layouts, crates, types));
+        java.util.Collections.reverse(hosts);
+        for (int host : hosts) {
+            if (host == victim || spent[0] >= budget) {
+                continue;
+            }
+            CrateLayout own = result.get(host);
+            int[] offer = own.counts().clone();
+            for (int i = 0; i < offer.length; i++) {
+                offer[i] += toMove[i];
+            }
+            CrateType type = crates.get(own.crateType());
+            CrateLayout best = null;
+            for (CrateLayout layout : filler.fills(own.crateType(), type, types, offer)) {
+                spent[0]++;
+                if (holdsAll(layout, own) && (best == null || gained(layout, own) > gained(best, own))) {
+                    best = layout;
+                }
+            }
+            if (best != null && gained(best, own) > 0) {
+                for (int i = 0; i < toMove.length; i++) {
+                    toMove[i] -= best.counts()[i] - own.counts()[i];
+                }
+                result.set(host, best);
+                if (java.util.Arrays.stream(toMove).allMatch(n -> n == 0)) {
+                    result.remove(victim);
+                    return result;
+                }
+            }
+        }
+        return null;
+    }
+
+    private static boolean holdsAll(CrateLayout layout, CrateLayout own) {
+        for (int i = 0; i < own.counts().length; i++) {
+            if (layout.counts()[i] < own.counts()[i]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int gained(CrateLayout layout, CrateLayout own) {
+        return layout.slots().size() - own.slots().size();
+    }
+
+    /** Indices of the layouts, least filled first (ties by index). */
+    private static List<Integer> byFill(List<CrateLayout> layouts, List<CrateType> crates, List<ItemType> types) {
+        double[] fill = new double[layouts.size()];
+        List<Integer> order = new ArrayList<>();
+        for (int k = 0; k < layouts.size(); k++) {
+            CrateLayout l = layouts.get(k);
+            CrateType c = crates.get(l.crateType());
+            double volume = l.volume(types) / (c.innerLengthMm() * c.innerWidthMm() * c.innerHeightMm());
+            double net = c.maxGrossKg() - c.tareKg();
+            fill[k] = Math.max(volume, net > 0 ? l.massKg() / net : 1);
+            order.add(k);
+        }
+        order.sort(Comparator.<Integer>comparingDouble(k -> fill[k]).thenComparingInt(k -> k));
+        return order;
+    }
+}
