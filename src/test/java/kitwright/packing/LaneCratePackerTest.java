@@ -61,6 +61,28 @@ class LaneCratePackerTest {
     }
 
     @Test
+    @DisplayName("a lane longer than the lanes under it stops where they end and the rest goes elsewhere: 14 bundles "
+            + "of 2400 mm, 12 of 1800 and 20 of 1200 fit one 3300 x 800 x 600 crate, every one resting on the floor "
+            + "or on bundles")
+    void lanesStopWhereTheirSupportEnds() {
+        List<Bundle> bundles = new ArrayList<>();
+        for (int i = 0; i < 14; i++) {
+            bundles.add(bundle("A" + i, "A", 2400, 50.4, 5.3));
+        }
+        for (int i = 0; i < 12; i++) {
+            bundles.add(bundle("B" + i, "B", 1800, 40.35, 1.7));
+        }
+        for (int i = 0; i < 20; i++) {
+            bundles.add(bundle("C" + i, "C", 1200, 40.35, 1.6));
+        }
+        // 800 / 50.4 = 15 cells a row and 800 / 40.35 = 19: three rows of 600 mm hold all 46 lanes' worth
+        List<CrateType> crates = List.of(crate("mid", 3300, 800, 600, 95, 1500, 180.0));
+        CratePlan plan = pack(bundles, List.of(), crates);
+        assertThat(plan.crates()).hasSize(1);
+        assertThat(plan.crates().get(0).items()).hasSize(46);
+    }
+
+    @Test
     @DisplayName("shorter bundles share a lane end to end")
     void shortBundlesEndToEnd() {
         List<CrateType> crates = List.of(crate("long", 6000, 200, 100, 20, 5000, 10.0));
