@@ -78,7 +78,8 @@ public final class LaneCratePacker implements CratePacker {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
         layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
-        layouts = downsize(new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, items.types()), crates,
+        layouts = downsize(new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, cost,
+                items.types()), crates,
                 cost, items.types());
         List<Crate> result = realise(layouts, crates, items);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;

@@ -25,7 +25,7 @@ class CrateEliminationTest {
     @DisplayName("a crate with 1 bundle empties into one with 3 (4 fit, hand count): one crate is left with all 4")
     void emptiesACrate() {
         List<CrateLayout> result = new CrateElimination(100).improve(List.of(holding(3), holding(1)),
-                List.of(CRATE), TYPES);
+                List.of(CRATE), new double[] {10}, TYPES);
         assertThat(result).hasSize(1);
         assertThat(result.get(0).counts()).containsExactly(4);
         assertThat(Support.holds(result.get(0).slots(), TYPES, 200)).isTrue();
@@ -35,7 +35,8 @@ class CrateEliminationTest {
     @DisplayName("3 + 2 bundles do not fit one crate of 4: both crates stay as they were, nothing is lost")
     void keepsWhatCannotMove() {
         List<CrateLayout> before = List.of(holding(3), holding(2));
-        List<CrateLayout> result = new CrateElimination(100).improve(before, List.of(CRATE), TYPES);
+        List<CrateLayout> result = new CrateElimination(100).improve(before, List.of(CRATE), new double[] {10},
+                TYPES);
         assertThat(result).hasSize(2);
         assertThat(result.stream().mapToInt(l -> l.counts()[0]).sum()).isEqualTo(5);
     }
@@ -44,6 +45,18 @@ class CrateEliminationTest {
     @DisplayName("a budget of no fillings changes nothing")
     void budget() {
         List<CrateLayout> before = List.of(holding(3), holding(1));
-        assertThat(new CrateElimination(0).improve(before, List.of(CRATE), TYPES)).isEqualTo(before);
+        assertThat(new CrateElimination(0).improve(before, List.of(CRATE), new double[] {10}, TYPES))
+                .isEqualTo(before);
+    }
+
+    @Test
+    @DisplayName("two half-full small crates (cost 10 each) merge into one large crate that costs 15")
+    void mergesIntoALargerType() {
+        CrateType large = crate("large", 1000, 400, 100, 10, 1000, 15.0);
+        List<CrateLayout> result = new CrateElimination(100).improve(List.of(holding(3), holding(3)),
+                List.of(CRATE, large), new double[] {10, 15}, TYPES);
+        assertThat(result).hasSize(1);
+        assertThat(result.get(0).crateType()).isEqualTo(1);
+        assertThat(result.get(0).counts()).containsExactly(6);
     }
 }
