@@ -254,6 +254,11 @@ final class CrateFiller {
                 counts[t.index()]++;
                 slots.add(slot);
                 x += t.lengthMm();
+                if (z - r < cell.z() - cell.d() / 2 - EPS) {
+                    // it came down through a hole below its cell: the free cells it now fills are taken
+                    double axisY = cell.y();
+                    free.removeIf(f -> Math.hypot(f.y() - axisY, f.z() - z) < (f.d() + t.diameterMm()) / 2 - EPS);
+                }
             }
             endX = Math.max(endX, x);
         }
