@@ -42,25 +42,44 @@ final class CrateFiller {
      * first with lanes above. The caller keeps the one that suits it.
      */
     List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        CrateLayout lanesFirst = build(crateIndex, crate, types, available, Start.LANES);
+        CrateLayout rows = build(crateIndex, crate, types, available, Start.LANES, Placing.ROW_GROUPS);
+        CrateLayout skyline = build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE);
         boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
         boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
-        if (!boxes || !bundles) {
-            return List.of(lanesFirst);
+        List<CrateLayout> result = new ArrayList<>(List.of(rows));
+        if (!java.util.Arrays.equals(skyline.counts(), rows.counts())) {
+            result.add(skyline);
         }
-        return List.of(lanesFirst, build(crateIndex, crate, types, available, Start.BOX_TIERS),
-                build(crateIndex, crate, types, available, Start.BOX_COLUMN));
+        if (boxes && bundles) {
+            result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS, Placing.ROW_GROUPS));
+            result.add(build(crateIndex, crate, types, available, Start.BOX_COLUMN, Placing.ROW_GROUPS));
+        }
+        return List.copyOf(result);
     }
 
-    /** The lanes-first layout (see {@link #fills}). */
+    /**
+     * The lanes-first layout (see {@link #fills}), lanes in row groups or on the skyline, whichever holds more
+     * bounding-box volume (then more mass).
+     */
     CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        return build(crateIndex, crate, types, available, Start.LANES);
+        CrateLayout rows = build(crateIndex, crate, types, available, Start.LANES, Placing.ROW_GROUPS);
+        CrateLayout skyline = build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE);
+        double gain = skyline.volume(types) - rows.volume(types);
+        return gain > EPS || (Math.abs(gain) <= EPS && skyline.massKg() > rows.massKg() + EPS) ? skyline : rows;
     }
 
     /** What goes in first: lanes from the floor; boxes in floor tiers; boxes in a column along one side wall. */
     private enum Start { LANES, BOX_TIERS, BOX_COLUMN }
 
-    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available, Start start) {
+    /**
+     * How lanes go into the cross-section: in row groups of one diameter, square or staggered, thinner lanes taking
+     * cells left free; or square on the skyline of what is already placed ({@link SkylineLanes}), which holds
+     * mixed diameters and lengths better where the row groups leave holes.
+     */
+    private enum Placing { ROW_GROUPS, SKYLINE }
+
+    private CrateLayout build(int crateIndex, CrateType crate, List<ItemType> types, int[] available, Start start,
+                              Placing placing) {
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
@@ -77,7 +96,9 @@ final class CrateFiller {
         lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
                 .thenComparing(Comparator.comparingDouble(CrateFiller::bearingLength).reversed())
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
-        double[] used = placeLanes(lanes, types, side, length, width, floor, height, net, mass, counts, slots);
+        double[] used = placing == Placing.SKYLINE && floor <= EPS
+                ? SkylineLanes.place(lanes, types, side, length, width, height, net, mass, counts, slots)
+                : placeLanes(lanes, types, side, length, width, floor, height, net, mass, counts, slots);
         placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
         List<CrateLayout.Slot> standing = Support.settle(slots, types, width);
         int[] kept = new int[types.size()];
