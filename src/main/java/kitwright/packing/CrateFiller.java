@@ -92,9 +92,11 @@ final class CrateFiller {
         double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
         List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
                 offeredBundles(crate, types, left, net - mass[0]), length));
-        // widest cells first, and of a cell the lanes that bear longest lowest, so that upper lanes lie on lower ones
-        lanes.sort(Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed()
-                .thenComparing(Comparator.comparingDouble(CrateFiller::bearingLength).reversed())
+        // widest cells first, and of a cell the lanes that bear longest lowest, so that upper lanes lie on lower
+        // ones; on the skyline the lanes that bear longest go first whatever their cell
+        Comparator<LaneBuilder.Lane> widest = Comparator.comparingDouble(LaneBuilder.Lane::cellMm).reversed();
+        Comparator<LaneBuilder.Lane> bearing = Comparator.comparingDouble(CrateFiller::bearingLength).reversed();
+        lanes.sort((placing == Placing.SKYLINE ? bearing.thenComparing(widest) : widest.thenComparing(bearing))
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
         double[] used = placing == Placing.SKYLINE && floor <= EPS
                 ? SkylineLanes.place(lanes, types, side, length, width, height, net, mass, counts, slots)
