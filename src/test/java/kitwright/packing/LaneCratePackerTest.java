@@ -83,6 +83,21 @@ class LaneCratePackerTest {
     }
 
     @Test
+    @DisplayName("long thin bundles go under short thick ones: 10 of 3000 x 50 and 10 of 2000 x 100 fill one 3000 x "
+            + "500 x 250 crate (one row of 10 thin on the floor, two rows of 5 thick above: hand count)")
+    void longThinUnderShortThick() {
+        List<Bundle> bundles = new ArrayList<>();
+        for (int i = 0; i < 10; i++) {
+            bundles.add(bundle("T" + i, "T", 3000, 50, 5));
+            bundles.add(bundle("K" + i, "K", 2000, 100, 20));
+        }
+        List<CrateType> crates = List.of(crate("flat", 3000, 500, 250, 30, 1000, 50.0));
+        CratePlan plan = pack(bundles, List.of(), crates);
+        assertThat(plan.crates()).hasSize(1);
+        assertThat(plan.crates().get(0).items()).hasSize(20);
+    }
+
+    @Test
     @DisplayName("shorter bundles share a lane end to end")
     void shortBundlesEndToEnd() {
         List<CrateType> crates = List.of(crate("long", 6000, 200, 100, 20, 5000, 10.0));
