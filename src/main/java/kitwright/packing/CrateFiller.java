@@ -99,7 +99,7 @@ final class CrateFiller {
         lanes.sort((placing == Placing.SKYLINE ? bearing.thenComparing(widest) : widest.thenComparing(bearing))
                 .thenComparing(Comparator.comparingDouble(LaneBuilder.Lane::lengthMm).reversed()));
         double[] used = placing == Placing.SKYLINE && floor <= EPS
-                ? SkylineLanes.place(lanes, types, side, length, width, height, net, mass, counts, slots)
+                ? SkylineLanes.place(lanes, types, side, length, width, height, net, mass, counts, slots, left)
                 : placeLanes(lanes, types, side, length, width, floor, height, net, mass, counts, slots);
         placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
         List<CrateLayout.Slot> standing = Support.settle(slots, types, width);

@@ -30,6 +30,17 @@ final class SkylineLanes {
     static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
                           double crateWidth, double height, double net, double[] mass, int[] counts,
                           List<CrateLayout.Slot> slots) {
+        return place(sorted, types, y0, length, crateWidth, height, net, mass, counts, slots, new int[types.size()]);
+    }
+
+    /**
+     * As {@link #place(List, List, double, double, double, double, double, double[], int[], List)}, then joint
+     * boxes from {@code left} (taken from it as they go in) in rows along the crate on the skyline, upright, each
+     * where it rests lowest and on items under its centre and half its footprint ({@link Support}).
+     */
+    static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
+                          double crateWidth, double height, double net, double[] mass, int[] counts,
+                          List<CrateLayout.Slot> slots, int[] left) {
         List<Segment> sky = new ArrayList<>(List.of(new Segment(y0, crateWidth, 0, Double.POSITIVE_INFINITY)));
         List<LaneBuilder.Lane> lanes = new ArrayList<>(sorted);
         double endX = 0;
@@ -40,7 +51,7 @@ final class SkylineLanes {
             if (mass[0] + lane.lightestKg() > net + EPS) {
                 continue;
             }
-            Spot spot = bestSpot(sky, d, height, lane);
+            Spot spot = bestSpot(sky, d, d, height, lane.items().get(0).lengthMm(), lane.lengthMm());
             if (spot == null) {
                 continue;
             }
@@ -83,6 +94,63 @@ final class SkylineLanes {
             top = Math.max(top, spot.h + d);
             raise(sky, spot.y, spot.y + d, spot.h + d, bearing);
         }
+        double[] boxes = placeBoxes(sky, types, length, crateWidth, height, net, mass, counts, slots, left);
+        return new double[] {Math.max(endX, boxes[0]), Math.max(top, boxes[1])};
+    }
+
+    /** Joint boxes in rows along the crate on the skyline; returns {end of the longest row, top of the highest}. */
+    private static double[] placeBoxes(List<Segment> sky, List<ItemType> types, double length, double crateWidth,
+                                       double height, double net, double[] mass, int[] counts,
+                                       List<CrateLayout.Slot> slots, int[] left) {
+        double endX = 0;
+        double top = 0;
+        while (true) {
+            ItemType size = null;
+            int wanted = 0;
+            for (ItemType t : types) {
+                if (t.kind() == ItemKind.BOX && left[t.index()] > 0) {
+                    size = size == null ? t : size;
+                    wanted += left[t.index()];
+                }
+            }
+            if (size == null) {
+                break;
+            }
+            double rowLength = Math.min(length, wanted * size.lengthMm());
+            Spot spot = bestSpot(sky, size.widthMm(), size.heightMm(), height, size.lengthMm(), rowLength);
+            if (spot == null) {
+                break;
+            }
+            double x = 0;
+            while (x + size.lengthMm() <= Math.min(length, spot.bearing) + EPS) {
+                ItemType box = null;
+                for (ItemType t : types) {
+                    if (t.kind() == ItemKind.BOX && left[t.index()] > 0 && mass[0] + t.massKg() <= net + EPS) {
+                        box = t;
+                        break;
+                    }
+                }
+                if (box == null) {
+                    break;
+                }
+                CrateLayout.Slot slot = new CrateLayout.Slot(box.index(), x, spot.y, spot.h, box.lengthMm(),
+                        box.widthMm(), box.heightMm());
+                if (slot.z() > Support.TOUCH && !Support.supported(slot, slots, types, crateWidth)) {
+                    break;
+                }
+                left[box.index()]--;
+                counts[box.index()]++;
+                mass[0] += box.massKg();
+                slots.add(slot);
+                x += box.lengthMm();
+            }
+            if (x <= EPS) {
+                break;
+            }
+            endX = Math.max(endX, x);
+            top = Math.max(top, spot.h + size.heightMm());
+            raise(sky, spot.y, spot.y + size.widthMm(), spot.h + size.heightMm(), x);
+        }
         return new double[] {endX, top};
     }
 
@@ -91,12 +159,13 @@ final class SkylineLanes {
     }
 
     /**
-     * The lowest (then leftmost) spot at a segment's left end where a lane of diameter d fits between the walls
-     * and under the lid; of those that bear the whole lane, else the one that bears most of it.
+     * The lowest (then leftmost) spot at a segment's left end where a row d wide and {@code up} high fits between
+     * the walls and under the lid, borne at least {@code first} along; of those that bear it {@code whole} along,
+     * else the one that bears most.
      */
-    private static Spot bestSpot(List<Segment> sky, double d, double height, LaneBuilder.Lane lane) {
+    private static Spot bestSpot(List<Segment> sky, double d, double up, double height, double first,
+                                 double whole) {
         double wall = sky.get(sky.size() - 1).y1();
-        double first = lane.items().get(0).lengthMm();
         Spot best = null;
         boolean bestWhole = false;
         for (Segment s : sky) {
@@ -110,7 +179,7 @@ final class SkylineLanes {
                     h = Math.max(h, o.h());
                 }
             }
-            if (h + d > height + EPS) {
+            if (h + up > height + EPS) {
                 continue;
             }
             // bears where a segment at the resting height lies under the axis band (axis +- d/4)
@@ -123,14 +192,14 @@ final class SkylineLanes {
             if (bearing < first - EPS) {
                 continue;
             }
-            boolean whole = bearing >= lane.lengthMm() - EPS;
+            boolean holdsAll = bearing >= whole - EPS;
             boolean better = best == null
-                    || (whole && !bestWhole)
-                    || (whole == bestWhole && (h < best.h - EPS
-                        || (!whole && Math.abs(h - best.h) <= EPS && bearing > best.bearing + EPS)));
+                    || (holdsAll && !bestWhole)
+                    || (holdsAll == bestWhole && (h < best.h - EPS
+                        || (!holdsAll && Math.abs(h - best.h) <= EPS && bearing > best.bearing + EPS)));
             if (better) {
                 best = new Spot(y, h, bearing);
-                bestWhole = whole;
+                bestWhole = holdsAll;
             }
         }
         return best;

@@ -67,4 +67,22 @@ class SkylineLanesTest {
         assertThat(counts).containsExactly(5, 10);
         assertThat(slots.stream().filter(s -> s.itemType() == 1)).allSatisfy(s -> assertThat(s.x()).isZero());
     }
+
+    @Test
+    @DisplayName("joint boxes go on a full row of lanes: 600 x 400 x 300 boxes on 10 lanes of d = 100 in a 1200 x "
+            + "1000 x 400 crate, floor(1200/600) * floor(1000/400) = 4 (hand count), the fifth has no room")
+    void boxesOnTheLanes() {
+        ItemType lane = new ItemType(0, ItemKind.BUNDLE, 1200, 100, 100, 10, 10);
+        ItemType box = new ItemType(1, ItemKind.BOX, 600, 400, 300, 20, 5);
+        List<ItemType> types = List.of(lane, box);
+        List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(Collections.nCopies(10, lane), 1200));
+        int[] counts = new int[2];
+        int[] left = {0, 5};
+        List<CrateLayout.Slot> slots = new ArrayList<>();
+        SkylineLanes.place(lanes, types, 0, 1200, 1000, 400, 1e9, new double[] {0}, counts, slots, left);
+        assertThat(Support.holds(slots, types, 1000)).isTrue();
+        assertThat(counts).containsExactly(10, 4);
+        assertThat(left).containsExactly(0, 1);
+        assertThat(slots.stream().filter(s -> s.itemType() == 1)).allSatisfy(s -> assertThat(s.z()).isEqualTo(100.0));
+    }
 }
