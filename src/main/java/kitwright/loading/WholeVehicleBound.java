@@ -33,6 +33,11 @@ final class WholeVehicleBound {
     /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
     private static final int MAX_NODES = 10_000;
     private static final int MAX_LANE_PATTERNS = 2000;
+    /**
+     * The loader accepts a vehicle's load up to its payload plus this (as {@code DeckFiller} does), so the shares
+     * of the payload cuts are taken of payload + this: any load it makes has shares summing to at most 1.
+     */
+    private static final double LOAD_TOLERANCE_KG = 1e-6;
     /** The lambdas of the payload cuts ({@link #massCuts}). */
     private static final double[] LAMBDAS = {0.5, 0.4, 0.3, 0.2, 0.1};
 
@@ -86,7 +91,8 @@ final class WholeVehicleBound {
             MPConstraint cut = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "mass_dff_" + v + "_" + lambda);
             cut.setCoefficient(y, -1);
             for (CrateClass c : classes) {
-                cut.setCoefficient(x[c.index()][v], dualFeasible(c.massKg() / t.payloadKg(), lambda));
+                cut.setCoefficient(x[c.index()][v], dualFeasible(c.massKg() / (t.payloadKg() + LOAD_TOLERANCE_KG),
+                        lambda));
             }
         }
     }

@@ -1,18 +1,21 @@
 package kitwright.packing;
 
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
 import java.util.Comparator;
 import java.util.List;
 import kitwright.model.CrateType;
 
 /**
- * Local search after the crate mix: empties the least filled crates into the others. First it tries to merge the
- * crate with another into one crate of a type that costs less than both; else a crate is picked as the one
- * to empty, least filled first (the larger of its mass share and its bounding-box volume share); each other
- * crate, most room first, is filled again ({@link CrateFiller}) from its own items plus what is still to move, and
- * kept when the new layout holds every one of its own items and takes at least one more. When the crate is empty
- * it is dropped (every crate has a cost, so the total falls); when it is not, nothing changes. A move repeats
- * until no crate can be emptied or the budget of crate fillings is spent, so the result depends only on the input.
+ * Local search after the crate mix: empties the least filled crates into the others. Crates are taken least filled
+ * first (the larger of the contents' mass share and bounding-box volume share). Such a crate is first merged with
+ * another, the most filled first, into one crate of a type that costs less than the two, when the filler
+ * ({@link CrateFiller}) holds exactly their items; else the other crates, most filled first (best fit), are filled
+ * again from their own items plus what is still to move, each kept when the new layout holds every one of its own
+ * items and takes at least one more. The crate is dropped only when all its items moved (the total price does not
+ * rise and the count falls); otherwise nothing changes. A move repeats until no crate can be emptied or the budget
+ * of crate fillings is spent (half of it at most for merges), so the result depends only on the input.
  * The same idea as the "eliminate a bin" moves of bin-packing local search (e.g. Fleszar &amp; Hindi 2002).
  */
 final class CrateElimination {
@@ -24,15 +27,21 @@ final class CrateElimination {
     private final CrateFiller filler = new CrateFiller();
     private final int budget;
 
-    /** @param budget the most crate fillings to try in all */
+    /** @param budget the most crate fillings ({@link CrateFiller#fills} calls) to try in all */
     CrateElimination(int budget) {
         this.budget = budget;
     }
 
+    /**
+     * The layouts with what crates could be emptied gone, the others refilled; each item type's count is kept.
+     *
+     * @param cost price of each crate type (1 each when the catalog has no prices)
+     */
     List<CrateLayout> improve(List<CrateLayout> layouts, List<CrateType> crates, double[] cost,
                               List<ItemType> types) {
         List<CrateLayout> current = new ArrayList<>(layouts);
-        int[] spent = {0};
+        // fillings spent: in all, and on merges
+        int[] spent = {0, 0};
         boolean emptied = true;
         while (emptied && spent[0] < budget && current.size() > 1) {
             emptied = false;
@@ -63,7 +72,7 @@ final class CrateElimination {
                                     List<ItemType> types, int[] spent) {
         CrateLayout gone = layouts.get(victim);
         List<Integer> hosts = new ArrayList<>(byFill(layouts, crates, types));
-        java.util.Collections.reverse(hosts);
+        Collections.reverse(hosts);
         for (int host : hosts) {
             if (host == victim) {
                 continue;
@@ -78,11 +87,13 @@ final class CrateElimination {
                 if (cost[t] >= pair - 1e-9 || !mayHold(crates.get(t), gone, other, types)) {
                     continue;
                 }
+                if (spent[0] >= budget || spent[1] >= budget / 2) {
+                    return null;
+                }
+                spent[0]++;
+                spent[1]++;
                 for (CrateLayout layout : filler.fills(t, crates.get(t), types, both)) {
-                    if (++spent[0] > budget) {
-                        return null;
-                    }
-                    if (java.util.Arrays.equals(layout.counts(), both)) {
+                    if (Arrays.equals(layout.counts(), both)) {
                         List<CrateLayout> result = new ArrayList<>(layouts);
                         result.set(host, layout);
                         result.remove(victim);
@@ -107,7 +118,7 @@ final class CrateElimination {
         int[] toMove = layouts.get(victim).counts().clone();
         List<CrateLayout> result = new ArrayList<>(layouts);
         List<Integer> hosts = new ArrayList<>(byFill(layouts, crates, types));
-        java.util.Collections.reverse(hosts);
+        Collections.reverse(hosts);
         for (int host : hosts) {
             if (host == victim || spent[0] >= budget) {
                 continue;
@@ -119,8 +130,8 @@ final class CrateElimination {
             }
             CrateType type = crates.get(own.crateType());
             CrateLayout best = null;
+            spent[0]++;
             for (CrateLayout layout : filler.fills(own.crateType(), type, types, offer)) {
-                spent[0]++;
                 if (holdsAll(layout, own) && (best == null || gained(layout, own) > gained(best, own))) {
                     best = layout;
                 }
@@ -130,7 +141,7 @@ final class CrateElimination {
                     toMove[i] -= best.counts()[i] - own.counts()[i];
                 }
                 result.set(host, best);
-                if (java.util.Arrays.stream(toMove).allMatch(n -> n == 0)) {
+                if (Arrays.stream(toMove).allMatch(n -> n == 0)) {
                     result.remove(victim);
                     return result;
                 }

@@ -19,6 +19,13 @@ final class LaneBuilder {
 
     /** A lane: its cell diameter and the bundles in it, end to end from x = 0, {@code lengthMm} long. */
     record Lane(double cellMm, List<ItemType> items, double lengthMm) {
+        Lane {
+            double sum = items.stream().mapToDouble(ItemType::lengthMm).sum();
+            if (Math.abs(lengthMm - sum) > EPS * Math.max(1, sum)) {
+                throw new IllegalArgumentException("a lane's length is the sum of its bundles' lengths");
+            }
+        }
+
         Lane(double cellMm, List<ItemType> items) {
             this(cellMm, items, items.stream().mapToDouble(ItemType::lengthMm).sum());
         }

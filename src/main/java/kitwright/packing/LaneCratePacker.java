@@ -24,7 +24,7 @@ import kitwright.nesting.Bundle;
 public final class LaneCratePacker implements CratePacker {
     private static final double EPS = 1e-6;
     /** Crate fillings the elimination of crates may try ({@link CrateElimination}). */
-    private static final int ELIMINATION_BUDGET = 600;
+    private static final int ELIMINATION_BUDGET = 200;
 
     /**
      * Solver limits.
@@ -78,9 +78,9 @@ public final class LaneCratePacker implements CratePacker {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
         layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
-        layouts = downsize(new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, cost,
-                items.types()), crates,
-                cost, items.types());
+        List<CrateLayout> fewer = new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, cost,
+                items.types());
+        layouts = downsize(fewer, crates, cost, items.types());
         List<Crate> result = realise(layouts, crates, items);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
         CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);

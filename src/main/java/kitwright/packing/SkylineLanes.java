@@ -6,12 +6,13 @@ import java.util.List;
 /**
  * Lanes into a crate's cross-section on a skyline: the top of what is placed so far, as segments across the width,
  * each with its height and the length from the crate's front end over which it bears (its lane's full-diameter
- * length). Each lane, widest first and longest first, goes at the left end of the segment where it comes to rest
- * lowest (then leftmost); it rests on the highest segments under its width, and it may go only as far along as the
- * segments under its axis band bear ({@link Support}): what goes further is cut off and placed later as a lane of
- * its own. Square rows only, but every row starts on what is really there, so lanes of several diameters and
- * lengths stack without the holes a fixed grid of rows leaves (the skyline of 2D strip packing, Burke, Kendall
- * &amp; Whitwell 2004, here across the crate with bearing lengths added).
+ * length; the floor bears the crate length). Each lane, in the order given (the caller puts the lanes that bear
+ * longest first), goes at the left end of the segment where it comes to rest lowest (then leftmost); it rests on
+ * the highest segments under its width, and it may go only as far along as the segments under its axis band bear
+ * ({@link Support}): what goes further is cut off and placed later as a lane of its own. Then joint boxes go on
+ * top in the same way. Square rows only, but every row starts on what is really there, so lanes of several
+ * diameters and lengths stack without the holes a fixed grid of rows leaves (the skyline of 2D strip packing,
+ * Burke, Kendall &amp; Whitwell 2004, here across the crate with bearing lengths added).
  */
 final class SkylineLanes {
     private static final double EPS = 1e-6;
@@ -41,7 +42,7 @@ final class SkylineLanes {
     static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
                           double crateWidth, double height, double net, double[] mass, int[] counts,
                           List<CrateLayout.Slot> slots, int[] left) {
-        List<Segment> sky = new ArrayList<>(List.of(new Segment(y0, crateWidth, 0, Double.POSITIVE_INFINITY)));
+        List<Segment> sky = new ArrayList<>(List.of(new Segment(y0, crateWidth, 0, length)));
         List<LaneBuilder.Lane> lanes = new ArrayList<>(sorted);
         double endX = 0;
         double top = 0;
@@ -51,7 +52,7 @@ final class SkylineLanes {
             if (mass[0] + lane.lightestKg() > net + EPS) {
                 continue;
             }
-            Spot spot = bestSpot(sky, d, d, height, lane.items().get(0).lengthMm(), lane.lengthMm());
+            Spot spot = bestSpot(sky, crateWidth, d, d, height, lane.items().get(0).lengthMm(), lane.lengthMm());
             if (spot == null) {
                 continue;
             }
@@ -69,7 +70,7 @@ final class SkylineLanes {
                 CrateLayout.Slot slot = new CrateLayout.Slot(t.index(), x, spot.y + d / 2 - r, spot.h, t.lengthMm(),
                         t.diameterMm(), t.diameterMm());
                 if (x + t.lengthMm() > spot.bearing + EPS
-                        || slot.z() > Support.TOUCH && !Support.supported(slot, slots, types, crateWidth)) {
+                        || (slot.z() > Support.TOUCH && !Support.supported(slot, slots, types, crateWidth))) {
                     if (placed > 0) {
                         requeue(lanes, k, new LaneBuilder.Lane(t.diameterMm(), List.copyOf(items.subList(i,
                                 items.size()))));
@@ -117,7 +118,8 @@ final class SkylineLanes {
                 break;
             }
             double rowLength = Math.min(length, wanted * size.lengthMm());
-            Spot spot = bestSpot(sky, size.widthMm(), size.heightMm(), height, size.lengthMm(), rowLength);
+            Spot spot = bestSpot(sky, crateWidth, size.widthMm(), size.heightMm(), height, size.lengthMm(),
+                    rowLength);
             if (spot == null) {
                 break;
             }
@@ -163,9 +165,8 @@ final class SkylineLanes {
      * the walls and under the lid, borne at least {@code first} along; of those that bear it {@code whole} along,
      * else the one that bears most.
      */
-    private static Spot bestSpot(List<Segment> sky, double d, double up, double height, double first,
+    private static Spot bestSpot(List<Segment> sky, double wall, double d, double up, double height, double first,
                                  double whole) {
-        double wall = sky.get(sky.size() - 1).y1();
         Spot best = null;
         boolean bestWhole = false;
         for (Segment s : sky) {
@@ -246,10 +247,13 @@ final class SkylineLanes {
         }
     }
 
-    /** What is left of a lane cut short goes back right after it, to take the next spot. */
+    /**
+     * What is left of a lane cut short goes back among the lanes still to place, before the first shorter one (the
+     * order the caller gave, longest first); it has fewer bundles than the lane it came from, so placing ends.
+     */
     private static void requeue(List<LaneBuilder.Lane> lanes, int k, LaneBuilder.Lane rest) {
         int at = k + 1;
-        while (at < lanes.size() && lanes.get(at).cellMm() >= rest.cellMm() - EPS) {
+        while (at < lanes.size() && lanes.get(at).lengthMm() >= rest.lengthMm() - EPS) {
             at++;
         }
         lanes.add(at, rest);

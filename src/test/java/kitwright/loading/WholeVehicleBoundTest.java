@@ -87,8 +87,22 @@ class WholeVehicleBoundTest {
             }
             assertThat(f).isLessThanOrEqualTo(1 + 1e-9);
         }
+        assertThat(WholeVehicleBound.dualFeasible(0.6, 0.4)).isEqualTo(0.6);
+        assertThat(WholeVehicleBound.dualFeasible(0.4, 0.4)).isEqualTo(0.4);
+        assertThat(WholeVehicleBound.dualFeasible(0.5, 0.5)).isEqualTo(0.5);
         assertThat(WholeVehicleBound.dualFeasible(0.7, 0.4)).isEqualTo(1);
         assertThat(WholeVehicleBound.dualFeasible(0.45, 0.4)).isEqualTo(0.45);
         assertThat(WholeVehicleBound.dualFeasible(0.3, 0.4)).isZero();
+    }
+
+    @Test
+    @DisplayName("a load the loader accepts (1400.0000005 + 1400 kg on a 2800 kg truck, within its 1e-6 kg tolerance) "
+            + "is not cut off: one truck")
+    void payloadCutsKeepTheLoadersTolerance() {
+        VehicleType truck = new VehicleType("truck", 6200, 2450, 2400, 2800, 420.0, "fixture");
+        List<CrateClass> crates = List.of(new CrateClass(0, 1200, 1000, 800, 1400.0000005, true, 1500, 1),
+                new CrateClass(1, 1200, 1000, 800, 1400, true, 1500, 1));
+        assertThat(WholeVehicleBound.compute(crates, List.of(truck), new double[] {420})).isLessThanOrEqualTo(
+                420 + 1e-6);
     }
 }
