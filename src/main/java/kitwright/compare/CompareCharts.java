@@ -27,8 +27,16 @@ final class CompareCharts {
     record Segment(String name, String color, Function<OptionSummary, Double> value) {
     }
 
-    /** One bar per option: its segments stacked, and how its value text reads. */
-    record Series(String name, List<Segment> segments, String unit, int decimals) {
+    /**
+     * One bar per option: its segments stacked, and how its value text reads. The text shows {@code shown} when
+     * that is given and known (a figure of the table, so that the bar and the table read the same, where the sum of
+     * rounded segments could differ in the last digit), else the sum of the segments.
+     */
+    record Series(String name, List<Segment> segments, String unit, int decimals,
+                  Function<OptionSummary, Double> shown) {
+        Series(String name, List<Segment> segments, String unit, int decimals) {
+            this(name, segments, unit, decimals, null);
+        }
     }
 
     /** Chart of several series over the options. */
@@ -80,8 +88,10 @@ final class CompareCharts {
                             o.kit() + ": " + seg.name() + " " + CompareHtml.format(v, s.decimals(), s.unit())));
                     x += w;
                 }
-                String value = known || total(s, o) > 0
-                        ? CompareHtml.format(total(s, o), s.decimals(), s.unit()) + (known ? "" : " (part not known)")
+                Double shown = s.shown() == null ? null : s.shown().apply(o);
+                double figure = known && shown != null ? shown : total(s, o);
+                String value = known || figure > 0
+                        ? CompareHtml.format(figure, s.decimals(), s.unit()) + (known ? "" : " (part not known)")
                         : "not known";
                 texts.add(new Text(num(x + 6), num(y + BAR_HEIGHT - 4), value, "start", "value",
                         o.kit() + ": " + s.name()));
@@ -111,7 +121,8 @@ final class CompareCharts {
                         + "remnants that go back to the rack.",
                         List.of(new Series("offcut", List.of(
                                 new Segment("scrap", "#c0504d", o -> o.scrapPct()),
-                                new Segment("remnant", "#e8a33d", o -> o.remnantPct())), "%", 2))),
+                                new Segment("remnant", "#e8a33d", o -> o.remnantPct())), "%", 2,
+                                o -> o.offcutPct()))),
                 new Spec("mass", "Mass per option", "Mill stock bought (the base of embodied carbon) against "
                         + "the kit's bars and joints.",
                         List.of(new Series("bought", List.of(
