@@ -17,10 +17,16 @@ final class PackSummary {
     private PackSummary() {
     }
 
+    /**
+     * @param kit the kit's name for the heading line, or null for none (when the text follows the kit's cutting and
+     *            nesting summary, as in {@code plan})
+     */
     static String text(String kit, StructureShare share, CratePlan crates, LoadPlan loads, List<CrateType> catalog) {
         StringBuilder sb = new StringBuilder();
-        sb.append("Kit ").append(kit);
-        if (share != null) {
+        if (kit != null) {
+            sb.append("Kit ").append(kit);
+        }
+        if (kit != null && share != null) {
             sb.append(", packed for structure '").append(share.structure()).append("': the bundles holding its tubes");
             if (!share.extraTubes().isEmpty()) {
                 sb.append(" (riding along beyond its counts: ").append(CrateContents.text(share.extraTubes()))
@@ -28,7 +34,9 @@ final class PackSummary {
             }
             sb.append(share.allJoints() ? "; all the kit's joints (structures.csv counts bars only)" : "");
         }
-        sb.append(".\n");
+        if (kit != null) {
+            sb.append(".\n");
+        }
         Map<String, Integer> byType = new TreeMap<>();
         crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
         sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");

@@ -28,8 +28,7 @@ final class PlanSummaryText {
             sb.append("  ").append(nesting.reason()).append(System.lineSeparator());
         }
         if (result.logisticsPlanned()) {
-            sb.append(PackSummary.text(result.kit().name(), null, result.crates(), result.loads(),
-                    result.kit().crates()));
+            sb.append(PackSummary.text(null, null, result.crates(), result.loads(), result.kit().crates()));
         } else {
             sb.append("Crates and trucks: not planned (no crate or vehicle catalog).").append(System.lineSeparator());
         }

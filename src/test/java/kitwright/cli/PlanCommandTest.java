@@ -27,6 +27,8 @@ class PlanCommandTest {
                 "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
                 "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
+        assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);
+        assertThat(run.out()).startsWith("Kit cinema-6: ").contains("\nCrates: ", "\nTrips: ");
         assertThat(entries(out.getParent())).as("no temporary folder left beside").containsExactly("cinema-6");
         JsonNode summary = PrettyJson.mapper().readTree(out.resolve(PlanCommand.SUMMARY_JSON).toFile());
         assertThat(summary.get("kit").asText()).isEqualTo("cinema-6");
