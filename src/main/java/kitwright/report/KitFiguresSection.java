@@ -112,7 +112,8 @@ public final class KitFiguresSection {
         return new Spares(percent(policy.lossRatePerCycle()), ShopFormat.count(policy.cycles()),
                 percent(policy.serviceLevel()), percent(q), ShopFormat.count(marksInService), percent(perMarkLevel),
                 percent(outcome.sizing().kitLevel()), rows, total, ReportFormat.money(outcome.extraCost()),
-                ShopFormat.count(outcome.rounds()), outcome.missing() == 0 ? null
+                outcome.rounds() == 1 ? "once" : ShopFormat.count(outcome.rounds()) + " times",
+                outcome.missing() == 0 ? null
                 : ShopFormat.count(outcome.missing()));
     }
 
