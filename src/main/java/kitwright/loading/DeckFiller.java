@@ -25,6 +25,8 @@ import kitwright.model.VehicleType;
  */
 final class DeckFiller {
     private static final double EPS = 1e-6;
+    /** How far above its payload a vehicle's load may go (rounding), kg; the bounds take the same. */
+    static final double PAYLOAD_TOLERANCE_KG = EPS;
 
     DeckLayout fill(int vehicleIndex, VehicleType vehicle, List<CrateClass> classes, int[] available) {
         List<CrateClass> offered = offer(vehicle, classes, available);
@@ -93,7 +95,7 @@ final class DeckFiller {
     /** Whether a crate of this class can ride on the vehicle at all. */
     static boolean fitsVehicle(CrateClass c, VehicleType v) {
         return (fits(c, false, v.deckLengthMm(), v.deckWidthMm()) || fits(c, true, v.deckLengthMm(), v.deckWidthMm()))
-                && c.heightMm() <= v.deckHeightMm() + EPS && c.massKg() <= v.payloadKg() + EPS;
+                && c.heightMm() <= v.deckHeightMm() + EPS && c.massKg() <= v.payloadKg() + PAYLOAD_TOLERANCE_KG;
     }
 
     private static List<CrateClass> offer(VehicleType v, List<CrateClass> classes, int[] available) {
@@ -108,7 +110,7 @@ final class DeckFiller {
         List<CrateClass> offered = new ArrayList<>();
         for (CrateClass c : fitting) {
             for (int k = 0; k < available[c.index()] && volume <= deckVolume; k++) {
-                if (mass + c.massKg() > v.payloadKg() + EPS) {
+                if (mass + c.massKg() > v.payloadKg() + PAYLOAD_TOLERANCE_KG) {
                     break;
                 }
                 offered.add(c);

@@ -33,11 +33,6 @@ final class WholeVehicleBound {
     /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
     private static final int MAX_NODES = 10_000;
     private static final int MAX_LANE_PATTERNS = 2000;
-    /**
-     * The loader accepts a vehicle's load up to its payload plus this (as {@code DeckFiller} does), so the shares
-     * of the payload cuts are taken of payload + this: any load it makes has shares summing to at most 1.
-     */
-    private static final double LOAD_TOLERANCE_KG = 1e-6;
     /** The lambdas of the payload cuts ({@link #massCuts}). */
     private static final double[] LAMBDAS = {0.5, 0.4, 0.3, 0.2, 0.1};
 
@@ -85,14 +80,15 @@ final class WholeVehicleBound {
      * summed over the vehicles of type v this is at most y_v. With lambda = 1/2 it says that no two crates heavier
      * than half the payload share a vehicle (the idea behind Martello &amp; Toth's bound L2).
      */
+    // shares are taken of payload + the loader's tolerance, so any load it makes has shares summing to at most 1
     private static void massCuts(MPSolver solver, List<CrateClass> classes, VehicleType t, int v, MPVariable[][] x,
                                  MPVariable y) {
         for (double lambda : LAMBDAS) {
             MPConstraint cut = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "mass_dff_" + v + "_" + lambda);
             cut.setCoefficient(y, -1);
             for (CrateClass c : classes) {
-                cut.setCoefficient(x[c.index()][v], dualFeasible(c.massKg() / (t.payloadKg() + LOAD_TOLERANCE_KG),
-                        lambda));
+                double share = c.massKg() / (t.payloadKg() + DeckFiller.PAYLOAD_TOLERANCE_KG);
+                cut.setCoefficient(x[c.index()][v], dualFeasible(share, lambda));
             }
         }
     }

@@ -1,6 +1,7 @@
 package kitwright.packing;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.TreeSet;
@@ -44,13 +45,12 @@ final class CrateFiller {
      * lanes beside or above. The caller keeps the one that suits it.
      */
     List<CrateLayout> fills(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        CrateLayout rows = build(crateIndex, crate, types, available, Start.LANES, Placing.ROW_GROUPS);
-        CrateLayout skyline = build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE);
+        CrateLayout[] lanesFirst = lanesFirst(crateIndex, crate, types, available);
         boolean boxes = types.stream().anyMatch(t -> t.kind() == ItemKind.BOX && available[t.index()] > 0);
         boolean bundles = types.stream().anyMatch(t -> t.kind() == ItemKind.BUNDLE && available[t.index()] > 0);
-        List<CrateLayout> result = new ArrayList<>(List.of(rows));
-        if (!java.util.Arrays.equals(skyline.counts(), rows.counts())) {
-            result.add(skyline);
+        List<CrateLayout> result = new ArrayList<>(List.of(lanesFirst[0]));
+        if (!Arrays.equals(lanesFirst[1].counts(), lanesFirst[0].counts())) {
+            result.add(lanesFirst[1]);
         }
         if (boxes && bundles) {
             result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS, Placing.ROW_GROUPS));
@@ -64,10 +64,17 @@ final class CrateFiller {
      * bounding-box volume (then more mass).
      */
     CrateLayout fill(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
-        CrateLayout rows = build(crateIndex, crate, types, available, Start.LANES, Placing.ROW_GROUPS);
-        CrateLayout skyline = build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE);
+        CrateLayout[] lanesFirst = lanesFirst(crateIndex, crate, types, available);
+        CrateLayout rows = lanesFirst[0];
+        CrateLayout skyline = lanesFirst[1];
         double gain = skyline.volume(types) - rows.volume(types);
         return gain > EPS || (Math.abs(gain) <= EPS && skyline.massKg() > rows.massKg() + EPS) ? skyline : rows;
+    }
+
+    /** The lanes-first layouts: {in row groups, on the skyline}. */
+    private CrateLayout[] lanesFirst(int crateIndex, CrateType crate, List<ItemType> types, int[] available) {
+        return new CrateLayout[] {build(crateIndex, crate, types, available, Start.LANES, Placing.ROW_GROUPS),
+            build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE)};
     }
 
     /** What goes in first: lanes from the floor; boxes in floor tiers; boxes in a column along one side wall. */

@@ -25,19 +25,10 @@ final class SkylineLanes {
     }
 
     /**
-     * Places the lanes between y0 and the crate's inner width from the floor up; returns {end of the longest lane,
-     * top of the highest one}. Same contract as the row-group placement of {@link CrateFiller}.
-     */
-    static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
-                          double crateWidth, double height, double net, double[] mass, int[] counts,
-                          List<CrateLayout.Slot> slots) {
-        return place(sorted, types, y0, length, crateWidth, height, net, mass, counts, slots, new int[types.size()]);
-    }
-
-    /**
-     * As {@link #place(List, List, double, double, double, double, double, double[], int[], List)}, then joint
-     * boxes from {@code left} (taken from it as they go in) in rows along the crate on the skyline, upright, each
-     * where it rests lowest and on items under its centre and half its footprint ({@link Support}).
+     * Places the lanes between y0 and the crate's inner width from the floor up, then joint boxes from
+     * {@code left} (taken from it as they go in) in rows along the crate on the skyline, upright, each where it
+     * rests lowest and on items under its centre and half its footprint ({@link Support}); returns {end of the
+     * longest lane or row, top of the highest}. Same contract as {@link RowGroupLanes#place}.
      */
     static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
                           double crateWidth, double height, double net, double[] mass, int[] counts,

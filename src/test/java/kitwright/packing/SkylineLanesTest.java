@@ -14,7 +14,8 @@ class SkylineLanesTest {
                                                 double width, double height, int[] counts) {
         List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(bundles, length));
         List<CrateLayout.Slot> slots = new ArrayList<>();
-        SkylineLanes.place(lanes, types, 0, length, width, height, 1e9, new double[] {0}, counts, slots);
+        SkylineLanes.place(lanes, types, 0, length, width, height, 1e9, new double[] {0}, counts, slots,
+                new int[types.size()]);
         assertThat(Support.holds(slots, types, width)).as("every bundle rests on the floor or on bundles").isTrue();
         return slots;
     }
@@ -62,7 +63,7 @@ class SkylineLanesTest {
         List<ItemType> types = List.of(longer, shorter);
         int[] counts = new int[2];
         List<CrateLayout.Slot> slots = new ArrayList<>();
-        SkylineLanes.place(lanes, types, 0, 3000, 500, 400, 1e9, new double[] {0}, counts, slots);
+        SkylineLanes.place(lanes, types, 0, 3000, 500, 400, 1e9, new double[] {0}, counts, slots, new int[2]);
         assertThat(Support.holds(slots, types, 500)).isTrue();
         assertThat(counts).containsExactly(5, 10);
         assertThat(slots.stream().filter(s -> s.itemType() == 1)).allSatisfy(s -> assertThat(s.x()).isZero());
