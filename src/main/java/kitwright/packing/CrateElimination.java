@@ -16,6 +16,8 @@ import kitwright.model.CrateType;
  * items and takes at least one more. The crate is dropped only when all its items moved (the total price does not
  * rise and the count falls); otherwise nothing changes. A move repeats until no crate can be emptied or the budget
  * of crate fillings is spent (half of it at most for merges), so the result depends only on the input.
+ * When no crate can be emptied, two crates are repacked as two of types that cost less in all (see
+ * {@link #repack}), and the emptying starts again.
  * The same idea as the "eliminate a bin" moves of bin-packing local search (e.g. Fleszar &amp; Hindi 2002).
  */
 final class CrateElimination {
@@ -60,8 +62,69 @@ final class CrateElimination {
                     break;
                 }
             }
+            if (!emptied && spent[0] < budget) {
+                List<CrateLayout> next = repack(current, crates, cost, types, spent);
+                if (next != null) {
+                    current = next;
+                    emptied = true;
+                }
+            }
         }
         return current;
+    }
+
+    /**
+     * Two crates repacked as two crates of types that cost less in all (a large and a small crate for two large
+     * ones, say): the first new crate filled from both crates' items as the filler manages, the second from what
+     * is left, kept when it holds exactly that. Pairs least filled first; null when no pair gets cheaper.
+     */
+    private List<CrateLayout> repack(List<CrateLayout> layouts, List<CrateType> crates, double[] cost,
+                                     List<ItemType> types, int[] spent) {
+        List<Integer> order = byFill(layouts, crates, types);
+        for (int i = 0; i < order.size(); i++) {
+            for (int j = i + 1; j < order.size(); j++) {
+                CrateLayout a = layouts.get(order.get(i));
+                CrateLayout b = layouts.get(order.get(j));
+                int[] both = a.counts().clone();
+                for (int k = 0; k < both.length; k++) {
+                    both[k] += b.counts()[k];
+                }
+                double pair = cost[a.crateType()] + cost[b.crateType()];
+                for (int first = 0; first < crates.size(); first++) {
+                    for (int second = 0; second < crates.size(); second++) {
+                        if (cost[first] + cost[second] >= pair - 1e-9) {
+                            continue;
+                        }
+                        if (spent[0] >= budget) {
+                            return null;
+                        }
+                        spent[0]++;
+                        for (CrateLayout one : filler.fills(first, crates.get(first), types, both)) {
+                            int[] rest = both.clone();
+                            for (int k = 0; k < rest.length; k++) {
+                                rest[k] -= one.counts()[k];
+                            }
+                            if (one.isEmpty() || Arrays.stream(rest).allMatch(n -> n == 0)) {
+                                continue;
+                            }
+                            if (spent[0] >= budget) {
+                                return null;
+                            }
+                            spent[0]++;
+                            for (CrateLayout two : filler.fills(second, crates.get(second), types, rest)) {
+                                if (Arrays.equals(two.counts(), rest)) {
+                                    List<CrateLayout> result = new ArrayList<>(layouts);
+                                    result.set(order.get(i), one);
+                                    result.set(order.get(j), two);
+                                    return result;
+                                }
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        return null;
     }
 
     /**

@@ -59,4 +59,25 @@ class CrateEliminationTest {
         assertThat(result.get(0).crateType()).isEqualTo(1);
         assertThat(result.get(0).counts()).containsExactly(6);
     }
+
+    @Test
+    @DisplayName("two large crates (15 each) with 6 + 5 bundles become a large and a small one (25): 8 + 4 places"
+            + " hold the 11 (hand count), no single crate does")
+    void repacksAPairCheaper() {
+        // large: 1000 x 400 x 100 inside, floor(400/100) = 4 cells, 2 bundles of 500 each: 8 places
+        CrateType large = crate("large", 1000, 400, 100, 10, 1000, 15.0);
+        List<CrateType> catalog = List.of(CRATE, large);
+        CrateLayout six = filler.fill(1, large, TYPES, new int[] {6});
+        CrateLayout five = filler.fill(1, large, TYPES, new int[] {5});
+        assertThat(six.counts()).containsExactly(6);
+        assertThat(five.counts()).containsExactly(5);
+        List<CrateLayout> result = new CrateElimination(100).improve(List.of(six, five), catalog,
+                new double[] {10, 15}, TYPES);
+        assertThat(result).hasSize(2);
+        assertThat(result.stream().mapToInt(l -> l.counts()[0]).sum()).isEqualTo(11);
+        assertThat(result.stream().mapToInt(CrateLayout::crateType).sorted().toArray()).containsExactly(0, 1);
+        for (CrateLayout l : result) {
+            assertThat(Support.holds(l.slots(), TYPES, catalog.get(l.crateType()).innerWidthMm())).isTrue();
+        }
+    }
 }
