@@ -1,7 +1,7 @@
 package kitwright.loading;
 
-import java.util.Arrays;
 import java.util.List;
+import kitwright.packing.CoverPattern;
 
 /**
  * A loaded deck of one vehicle type as a reusable pattern.
@@ -12,7 +12,8 @@ import java.util.List;
  * @param massKg        gross mass of the crates
  * @param floorLengthMm from the front of the deck to the rear face of the last crate
  */
-record DeckLayout(int vehicleType, int[] counts, List<Slot> slots, double massKg, double floorLengthMm) {
+record DeckLayout(int vehicleType, int[] counts, List<Slot> slots, double massKg, double floorLengthMm)
+        implements CoverPattern {
 
     /** One crate's place: its class, its outer box corner, orientation, and its stack and level (0 = floor). */
     record Slot(int crateClass, double x, double y, double z, boolean rotated, int stack, int level) {
@@ -22,11 +23,13 @@ record DeckLayout(int vehicleType, int[] counts, List<Slot> slots, double massKg
         slots = List.copyOf(slots);
     }
 
-    boolean isEmpty() {
-        return slots.isEmpty();
+    @Override
+    public int containerType() {
+        return vehicleType;
     }
 
-    String key() {
-        return vehicleType + ":" + Arrays.toString(counts);
+    @Override
+    public boolean isEmpty() {
+        return slots.isEmpty();
     }
 }

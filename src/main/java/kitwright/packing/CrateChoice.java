@@ -10,7 +10,8 @@ import kitwright.model.CrateType;
 
 /**
  * Which crates to fill and how: the crate mix of least total cost, then fewest crates, as a list of layouts that
- * together hold at least every item (surplus places are dropped later).
+ * together hold at least every item (surplus places are dropped later), by the steps of {@link CoverSearch} with
+ * {@link CrateFiller} as the filling.
  *
  * <ol>
  *   <li>Construction, a greedy set cover (Chvátal 1979): fill one crate of every type from what is left, keep the
@@ -50,10 +51,14 @@ final class CrateChoice {
                 subsets.add(t == u ? new int[] {t} : new int[] {t, u});
             }
         }
+        CoverSearch.Share<CrateLayout> share = (layout, left) -> share(layout, left, types);
         for (boolean boxesFirst : new boolean[] {false, true}) {
+            CoverSearch.Filling<CrateLayout> filling = boxesFirst
+                    ? (t, left) -> filler.fills(t, crates.get(t), types, left)
+                    : (t, left) -> List.of(filler.fill(t, crates.get(t), types, left));
             for (int[] allowed : subsets) {
-                List<CrateLayout> run = greedy(crates, crateCost, types, demand, allowed, boxesFirst, patterns);
-                double c = cost(run, crateCost);
+                List<CrateLayout> run = CoverSearch.greedy(demand, allowed, crateCost, filling, share, patterns);
+                double c = CoverSearch.total(run, crateCost);
                 if (!run.isEmpty() && (best.isEmpty() || c < bestCost - EPS
                         || (Math.abs(c - bestCost) <= EPS && run.size() < best.size()))) {
                     best = run;
@@ -68,32 +73,14 @@ final class CrateChoice {
             for (ItemType it : types) {
                 int[] only = new int[types.size()];
                 only[it.index()] = it.demand();
-                add(patterns, filler.fill(t, crates.get(t), types, only));
+                CoverSearch.add(patterns, filler.fill(t, crates.get(t), types, only));
             }
         }
         complements(crates, types, demand, patterns);
-        priceColumns(crates, crateCost, types, demand, patterns);
-
-        List<CrateLayout> list = new ArrayList<>(patterns.values());
-        int[][] counts = list.stream().map(CrateLayout::counts).toArray(int[][]::new);
-        double[] cost = list.stream().mapToDouble(l -> crateCost[l.crateType()]).toArray();
-        int[] hint = new int[list.size()];
-        Map<String, Integer> index = new LinkedHashMap<>();
-        for (int p = 0; p < list.size(); p++) {
-            index.put(list.get(p).key(), p);
-        }
-        for (CrateLayout l : best) {
-            hint[index.get(l.key())]++;
-        }
-        int[] uses = cover.solve(counts, cost, demand, hint).uses();
-        List<CrateLayout> chosen = new ArrayList<>();
-        for (int p = 0; p < list.size(); p++) {
-            for (int k = 0; k < uses[p]; k++) {
-                chosen.add(list.get(p));
-            }
-        }
-        chosen.sort(Comparator.comparingInt(CrateLayout::crateType));
-        return chosen;
+        CoverSearch.price(pricingRounds, crates.size(), crateCost, demand,
+                (t, duals) -> offers(crates.get(t), types, duals),
+                (t, offer) -> filler.fills(t, crates.get(t), types, offer), patterns);
+        return CoverSearch.choose(cover, patterns, crateCost, demand, best);
     }
 
     private static int[] allTypes(int n) {
@@ -102,59 +89,15 @@ final class CrateChoice {
         return all;
     }
 
-    private static double cost(List<CrateLayout> layouts, double[] crateCost) {
-        return layouts.stream().mapToDouble(l -> crateCost[l.crateType()]).sum();
-    }
-
-    private static void add(Map<String, CrateLayout> patterns, CrateLayout layout) {
-        if (!layout.isEmpty()) {
-            patterns.putIfAbsent(layout.key(), layout);
+    /** A layout's share of what is left: the larger of its bounding-box volume share and its mass share. */
+    private static double share(CrateLayout layout, int[] left, List<ItemType> types) {
+        double volumeLeft = 0;
+        double massLeft = 0;
+        for (ItemType t : types) {
+            volumeLeft += left[t.index()] * t.boxVolume();
+            massLeft += left[t.index()] * t.massKg();
         }
-    }
-
-    /** Greedy set cover with the given crate types; empty when it cannot cover everything. */
-    private List<CrateLayout> greedy(List<CrateType> crates, double[] crateCost, List<ItemType> types, int[] demand,
-                                     int[] allowed, boolean boxesFirst, Map<String, CrateLayout> patterns) {
-        int[] left = demand.clone();
-        List<CrateLayout> result = new ArrayList<>();
-        while (Arrays.stream(left).anyMatch(n -> n > 0)) {
-            double volumeLeft = 0;
-            double massLeft = 0;
-            for (ItemType t : types) {
-                volumeLeft += left[t.index()] * t.boxVolume();
-                massLeft += left[t.index()] * t.massKg();
-            }
-            CrateLayout pick = null;
-            double pickScore = Double.MAX_VALUE;
-            double pickShare = 0;
-            for (int t : allowed) {
-                List<CrateLayout> layouts = boxesFirst ? filler.fills(t, crates.get(t), types, left)
-                        : List.of(filler.fill(t, crates.get(t), types, left));
-                for (CrateLayout layout : layouts) {
-                    if (layout.isEmpty()) {
-                        continue;
-                    }
-                    add(patterns, layout);
-                    double share = Math.max(layout.volume(types) / volumeLeft,
-                            massLeft > 0 ? layout.massKg() / massLeft : 0);
-                    double score = crateCost[t] / Math.max(share, EPS);
-                    if (pick == null || score < pickScore - EPS
-                            || (Math.abs(score - pickScore) <= EPS && share > pickShare + EPS)) {
-                        pick = layout;
-                        pickScore = score;
-                        pickShare = share;
-                    }
-                }
-            }
-            if (pick == null) {
-                return List.of();
-            }
-            for (int i = 0; i < left.length; i++) {
-                left[i] -= pick.counts()[i];
-            }
-            result.add(pick);
-        }
-        return result;
+        return Math.max(layout.volume(types) / volumeLeft, massLeft > 0 ? layout.massKg() / massLeft : 0);
     }
 
     /**
@@ -175,40 +118,8 @@ final class CrateChoice {
             }
             for (int t = 0; t < crates.size(); t++) {
                 for (CrateLayout layout : filler.fills(t, crates.get(t), types, rest)) {
-                    add(patterns, layout);
+                    CoverSearch.add(patterns, layout);
                 }
-            }
-        }
-    }
-
-    /** Column generation rounds: add crates whose reduced cost under the LP duals is negative. */
-    private void priceColumns(List<CrateType> crates, double[] crateCost, List<ItemType> types, int[] demand,
-                              Map<String, CrateLayout> patterns) {
-        CoverRelaxation relaxation = new CoverRelaxation();
-        for (int round = 0; round < pricingRounds; round++) {
-            List<CrateLayout> list = new ArrayList<>(patterns.values());
-            CoverRelaxation.Solution lp = relaxation.solve(list.stream().map(CrateLayout::counts)
-                    .toArray(int[][]::new), list.stream().mapToDouble(l -> crateCost[l.crateType()]).toArray(),
-                    demand);
-            if (lp == null) {
-                return;
-            }
-            int before = patterns.size();
-            for (int t = 0; t < crates.size(); t++) {
-                for (int[] offer : offers(crates.get(t), types, lp.duals())) {
-                    for (CrateLayout layout : filler.fills(t, crates.get(t), types, offer)) {
-                        double value = 0;
-                        for (int i = 0; i < offer.length; i++) {
-                            value += lp.duals()[i] * layout.counts()[i];
-                        }
-                        if (crateCost[t] - value < -1e-7 * Math.max(1, crateCost[t])) {
-                            add(patterns, layout);
-                        }
-                    }
-                }
-            }
-            if (patterns.size() == before) {
-                return;
             }
         }
     }

@@ -1,6 +1,5 @@
 package kitwright.packing;
 
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -11,7 +10,7 @@ import java.util.List;
  * @param slots     positions in build order (a bundle's lane from the floor up, then boxes)
  * @param massKg    contents' mass
  */
-record CrateLayout(int crateType, int[] counts, List<Slot> slots, double massKg) {
+record CrateLayout(int crateType, int[] counts, List<Slot> slots, double massKg) implements CoverPattern {
 
     /** One item's place: its type and its bounding box from the crate's inside corner. */
     record Slot(int itemType, double x, double y, double z, double length, double width, double height) {
@@ -21,13 +20,14 @@ record CrateLayout(int crateType, int[] counts, List<Slot> slots, double massKg)
         slots = List.copyOf(slots);
     }
 
-    boolean isEmpty() {
-        return slots.isEmpty();
+    @Override
+    public int containerType() {
+        return crateType;
     }
 
-    /** Identity of the pattern: crate type and counts (two layouts with these equal are interchangeable). */
-    String key() {
-        return crateType + ":" + Arrays.toString(counts);
+    @Override
+    public boolean isEmpty() {
+        return slots.isEmpty();
     }
 
     double volume(List<ItemType> types) {
