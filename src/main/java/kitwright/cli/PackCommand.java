@@ -55,8 +55,9 @@ import picocli.CommandLine.Spec;
             "",
             "Lifting and load securing are not checked (EN 12195-1; local rules",
             "decide). Exit codes: 0 ok, 2 invalid input, 3 when an item fits no",
-            "crate or a crate no vehicle, or when a section cannot be cut or a bar",
-            "is heavier than maxBundleMassKg (what can be packed still is)."
+            "crate (nothing is written), when a crate fits no vehicle (the packing",
+            "lists are still written), or when a section cannot be cut or a bar is",
+            "heavier than maxBundleMassKg (what can be packed still is)."
         })
 public final class PackCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
@@ -141,13 +142,14 @@ public final class PackCommand implements Callable<Integer> {
             stderr.flush();
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        if (loads.status() == Status.INFEASIBLE) {
+        // With crates but no load plan, the packing lists still stand: write and print them, then exit 3.
+        boolean loaded = loads.status() != Status.INFEASIBLE;
+        if (loaded) {
+            stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
+                    (System.nanoTime() - start) / 1e9);
+        } else {
             stderr.println("pack: no load plan: " + loads.reason());
-            stderr.flush();
-            return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
-                (System.nanoTime() - start) / 1e9);
         stderr.flush();
         if (out != null) {
             writeFolder(crates, loads, upstreamBundles.plan().bundles());
@@ -166,12 +168,9 @@ public final class PackCommand implements Callable<Integer> {
             stdout.println("Wrote " + json);
         }
         stdout.flush();
-        if (!shortfalls.isEmpty()) {
-            shortfalls.forEach(reason -> stderr.println("kitwright: the pack plan is incomplete: " + reason));
-            stderr.flush();
-            return ExitCode.NO_FEASIBLE_PLAN.code();
-        }
-        return ExitCode.OK.code();
+        shortfalls.forEach(reason -> stderr.println("kitwright: the pack plan is incomplete: " + reason));
+        stderr.flush();
+        return loaded && shortfalls.isEmpty() ? ExitCode.OK.code() : ExitCode.NO_FEASIBLE_PLAN.code();
     }
 
     /** An unknown {@code --for} structure is bad input, told before any planning. */

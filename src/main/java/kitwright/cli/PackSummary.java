@@ -6,6 +6,7 @@ import java.util.TreeMap;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.VehicleLoad;
 import kitwright.model.CrateType;
+import kitwright.model.Status;
 import kitwright.packing.Crate;
 import kitwright.packing.CratePlan;
 import kitwright.packing.StructureShare;
@@ -37,6 +38,11 @@ final class PackSummary {
         if (kit != null) {
             sb.append(".\n");
         }
+        if (crates.status() == Status.INFEASIBLE) {
+            sb.append("Crates: none planned; INFEASIBLE: ").append(reason(crates.reason())).append('\n');
+            sb.append("Trips: none planned (no crates to load).\n");
+            return sb.toString();
+        }
         Map<String, Integer> byType = new TreeMap<>();
         crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
         sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");
@@ -51,6 +57,10 @@ final class PackSummary {
         sb.append("; ").append(crates.status()).append(", gap ").append(ShopFormat.percent(crates.bounds().gap()))
                 .append(" %.\n");
         sb.append("Joint boxes: ").append(crates.boxes().size()).append(".\n");
+        if (loads.status() == Status.INFEASIBLE) {
+            sb.append("Trips: none planned; INFEASIBLE: ").append(reason(loads.reason())).append('\n');
+            return sb.toString();
+        }
         Map<String, Integer> byVehicle = new TreeMap<>();
         loads.vehicles().forEach(v -> byVehicle.merge(v.type(), 1, Integer::sum));
         sb.append("Trips: ").append(loads.vehicles().size())
@@ -62,12 +72,18 @@ final class PackSummary {
                 .append(" %.\n");
         for (VehicleLoad v : loads.vehicles()) {
             sb.append("  ").append(v.id()).append(' ').append(v.type()).append(": ").append(v.crates().size())
-                    .append(" crates, ").append(ShopFormat.kg(v.massKg())).append(" kg of ")
+                    .append(v.crates().size() == 1 ? " crate, " : " crates, ").append(ShopFormat.kg(v.massKg())).append(" kg of ")
                     .append(ShopFormat.kg(v.payloadKg())).append(" kg, floor ").append(ShopFormat.mm(v.floorLengthMm()))
                     .append(" of ").append(ShopFormat.mm(v.deckLengthMm())).append(" mm, centre of gravity ")
                     .append(ShopFormat.mm(v.centreOfGravityMm())).append(" mm from the front.\n");
         }
         return sb.toString();
+    }
+
+    /** The reason of an INFEASIBLE plan as a sentence. */
+    private static String reason(String reason) {
+        String text = reason == null || reason.isBlank() ? "no reason given" : reason.strip();
+        return text.endsWith(".") ? text : text + ".";
     }
 
     private static String counts(Map<String, Integer> counts) {

@@ -50,9 +50,10 @@ public final class LogisticsSection {
     record TripDrawing(String id, String type, String svg) {
     }
 
-    record View(List<Figure> figures, String crateStatus, String crateStatusClass, String tripStatus,
-                String tripStatusClass, List<CrateRow> crates, List<CrateDrawing> crateDrawings, List<TripRow> trips,
-                List<TripDrawing> tripDrawings) {
+    /** The reasons are null unless that plan is INFEASIBLE. */
+    record View(List<Figure> figures, String crateStatus, String crateStatusClass, String crateReason,
+                String tripStatus, String tripStatusClass, String tripReason, List<CrateRow> crates,
+                List<CrateDrawing> crateDrawings, List<TripRow> trips, List<TripDrawing> tripDrawings) {
     }
 
     private LogisticsSection() {
@@ -112,8 +113,10 @@ public final class LogisticsSection {
             tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
         }
         View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
-                status(loads.status(), loads.bounds().gap()), statusClass(loads.status()), rows, crateDrawings,
-                trips, tripDrawings);
+                reason(crates.status(), crates.reason()), status(loads.status(), loads.bounds().gap()),
+                statusClass(loads.status()), crates.status() == Status.INFEASIBLE ? reason(loads.status(),
+                "no crates to load") : reason(loads.status(), loads.reason()), rows, crateDrawings, trips,
+                tripDrawings);
         return new ReportSection(ID, "Crates and trucks", "logistics", view);
     }
 
@@ -143,8 +146,19 @@ public final class LogisticsSection {
     }
 
     private static String status(Status status, double gap) {
-        return status == Status.OPTIMAL ? "optimal"
-                : status.name().toLowerCase(Locale.ROOT) + ", gap " + ShopFormat.percent(gap) + " %";
+        return switch (status) {
+            case OPTIMAL -> "optimal";
+            case INFEASIBLE -> "infeasible";
+            default -> status.name().toLowerCase(Locale.ROOT) + ", gap " + ShopFormat.percent(gap) + " %";
+        };
+    }
+
+    /** Why an INFEASIBLE plan has none, else null (nothing shown). */
+    private static String reason(Status status, String reason) {
+        if (status != Status.INFEASIBLE) {
+            return null;
+        }
+        return reason == null || reason.isBlank() ? "no reason given" : reason.strip();
     }
 
     private static String statusClass(Status status) {
