@@ -41,10 +41,11 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "pack", mixinStandardHelpOptions = true,
         description = {
-            "Packs a kit for shipping: joints into joint boxes, bundles and boxes into",
-            "crates from the crate catalog (least total crate price, then fewest",
-            "crates), crates onto vehicles from the vehicle catalog (least total trip",
-            "cost). Prints each count beside its lower bound and the status.",
+            "Packs a kit for shipping: joint boxes, crates and vehicle loads.",
+            "Joints go into joint boxes, bundles and boxes into crates from the crate",
+            "catalog (least total crate price, then fewest crates), crates onto",
+            "vehicles from the vehicle catalog (least total trip cost). Prints each",
+            "count beside its lower bound and the status.",
             "",
             "With --out DIR: packing-lists.csv (per crate: type, marks and counts,",
             "bundles, boxes, gross mass), manifests.csv (per vehicle: crates, mass,",
@@ -58,12 +59,17 @@ import picocli.CommandLine.Spec;
             "crate (nothing is written), when a crate fits no vehicle (the packing",
             "lists are still written), or when a section cannot be cut or a bar is",
             "heavier than maxBundleMassKg (what can be packed still is)."
+        },
+        footer = {
+            "",
+            "Example: kitwright pack sample-kits/cinema-12 --for screen-frame --out out/screen-frame"
         })
 public final class PackCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
             description = "The kit folder: kit.json (optional, may set jointBox {lengthMm, widthMm, heightMm,"
                     + " maxMassKg}; default 600 x 400 x 300 mm, 25 kg), bars.csv, optionally structures.csv and"
-                    + " joints.csv; crates.csv and vehicles.csv beside the tube catalog or named in kit.json.")
+                    + " joints.csv. The crate and vehicle catalogs are crates.csv and vehicles.csv beside the tube"
+                    + " catalog unless kit.json names others (crateCatalog, vehicleCatalog).")
     Path kitDir;
 
     @Option(names = "--for", paramLabel = "STRUCTURE",
