@@ -118,7 +118,7 @@ public final class CutCommand implements Callable<Integer> {
         }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
-            err.printf(Locale.ROOT, "cut %s: %s, lower bound %s, best %s%n", section, stage, figure(bound),
+            err.printf(Locale.ROOT, "cut %s (%s): lower bound %s, best %s%n", section, stage, figure(bound),
                     best == null ? "-" : figure(best));
             err.flush();
         };

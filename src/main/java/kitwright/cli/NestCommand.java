@@ -123,7 +123,7 @@ public final class NestCommand implements Callable<Integer> {
         }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
-            err.printf(Locale.ROOT, "cut %s: %s, lower bound %.2f, best %s%n", section, stage, bound,
+            err.printf(Locale.ROOT, "cut %s (%s): lower bound %.2f, best %s%n", section, stage, bound,
                     best == null ? "-" : String.format(Locale.ROOT, "%.2f", best));
             err.flush();
         };

@@ -116,7 +116,7 @@ public final class PlanCommand implements Callable<Integer> {
 
             @Override
             public void report(String stage, String section, double lowerBound, Double bestValue) {
-                err.printf(Locale.ROOT, "plan: cutting %s: %s, lower bound %.2f, best %s%n", section, stage,
+                err.printf(Locale.ROOT, "plan: cutting %s (%s): lower bound %.2f, best %s%n", section, stage,
                         lowerBound, bestValue == null ? "-" : String.format(Locale.ROOT, "%.2f", bestValue));
                 err.flush();
             }
