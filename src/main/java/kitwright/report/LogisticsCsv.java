@@ -48,7 +48,7 @@ public final class LogisticsCsv {
             csv.printRecord("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids", "gross_kg",
                     "max_gross_kg");
             for (Crate c : plan.crates()) {
-                csv.printRecord(c.id(), c.type(), CrateContents.text(CrateContents.marks(c, byId, boxes)),
+                csv.printRecord(c.id(), c.type(), CrateContents.plainText(CrateContents.marks(c, byId, boxes)),
                         c.items(ItemKind.BUNDLE).size(), CrateContents.refs(c, ItemKind.BUNDLE),
                         c.items(ItemKind.BOX).size(), CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1),
                         number(c.maxGrossKg(), 1));
