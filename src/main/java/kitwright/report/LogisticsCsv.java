@@ -23,7 +23,7 @@ import org.apache.commons.csv.CSVPrinter;
  * grouping so a spreadsheet reads them as numbers):
  * <ul>
  *   <li>{@code packing-lists.csv}, one row per crate: {@code crate,type,marks,bundles,bundle_ids,boxes,box_ids,
- *   gross_kg,max_gross_kg} (marks as "A1 × 12; N90 × 40", tubes of the bundles and joints of the boxes);</li>
+ *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes);</li>
  *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
  *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
  *   to the rear face of the last crate; centre of gravity from the front).</li>
