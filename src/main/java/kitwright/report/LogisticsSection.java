@@ -82,12 +82,15 @@ public final class LogisticsSection {
         Map<String, JointBoxLoad> boxes = crates.boxes().stream()
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
         List<Figure> figures = new ArrayList<>();
-        figures.add(new Figure("Crates", ShopFormat.count(crates.crates().size()),
-                "lower bound " + crates.lowerBound() + (crates.bounds().price() == null ? ""
-                        : ", price bound " + ShopFormat.money(crates.bounds().price()))));
+        boolean crated = crates.status() != Status.INFEASIBLE;
+        boolean loaded = crated && loads.status() != Status.INFEASIBLE;
+        figures.add(new Figure("Crates", ShopFormat.count(crates.crates().size()), !crated
+                ? "no crate plan: see the packing lists" : "lower bound " + crates.lowerBound()
+                + (crates.bounds().price() == null ? "" : ", price bound " + ShopFormat.money(crates.bounds().price()))));
         figures.add(new Figure("Joint boxes", ShopFormat.count(crates.boxes().size()), "joints in boxes"));
-        figures.add(new Figure("Trips", ShopFormat.count(loads.vehicles().size()),
-                "cost " + ShopFormat.money(loads.tripCost()) + ", bound " + ShopFormat.money(loads.lowerBound())));
+        figures.add(new Figure("Trips", ShopFormat.count(loads.vehicles().size()), !loaded
+                ? "no load plan: see the manifests"
+                : "cost " + ShopFormat.money(loads.tripCost()) + ", bound " + ShopFormat.money(loads.lowerBound())));
         List<CrateRow> rows = crates.crates().stream().map(c -> new CrateRow(c.id(), c.type(),
                 CrateContents.text(CrateContents.marks(c, byId, boxes)),
                 ShopFormat.count(c.items(ItemKind.BUNDLE).size()), ShopFormat.count(c.items(ItemKind.BOX).size()),

@@ -60,7 +60,8 @@ class LogisticsSectionTest {
         String noCrates = render(LogisticsSection.of(none, LoadPlan.infeasible("no crate plan: " + none.reason()),
                 bundles, types));
         assertThat(noCrates).contains("No crate plan: joint N (4.8 kg) is heavier than the joint box limit")
-                .contains("No load plan: no crates to load").doesNotContain("gap 0.0 %");
+                .contains("No load plan: no crates to load").contains("no crate plan: see the packing lists")
+                .doesNotContain("gap 0.0 %").doesNotContain("cost 0.00");
 
         CratePlan crates = new LaneCratePacker(new LaneCratePacker.Limits(0.2, 5, 2)).pack(bundles, List.of(), types,
                 JointBox.DEFAULT);
@@ -68,7 +69,8 @@ class LogisticsSectionTest {
         String noLoads = render(LogisticsSection.of(crates, LoadPlan.infeasible("crate C1 fits no vehicle of the"
                 + " catalog (deck size or payload)"), bundles, types));
         assertThat(noLoads).contains("No load plan: crate C1 fits no vehicle of the catalog")
-                .doesNotContain("No crate plan").doesNotContain("gap 0.0 %");
+                .doesNotContain("No crate plan").doesNotContain("gap 0.0 %").contains("no load plan: see the manifests")
+                .doesNotContain("cost 0.00");
     }
 
     private static String render(ReportSection section) {
