@@ -42,6 +42,8 @@ class PackCommandTest {
         assertThat(run.code()).as(run.err()).isZero();
         assertThat(run.out()).contains("Crates: ").contains("lower bound").contains("Trips: ")
                 .contains("EN 12195-1");
+        assertThat(run.out()).as("plain ASCII on the console, numbers without digit groups")
+                .matches("\\p{ASCII}*").containsPattern("centre of gravity \\d+(\\.\\d)? mm");
         assertThat(first.resolve("packing-lists.csv")).exists();
         assertThat(first.resolve("manifests.csv")).exists();
         assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
