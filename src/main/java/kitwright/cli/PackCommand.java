@@ -151,8 +151,9 @@ public final class PackCommand implements Callable<Integer> {
         // With crates but no load plan, the packing lists still stand: write and print them, then exit 3.
         boolean loaded = loads.status() != Status.INFEASIBLE;
         if (loaded) {
-            stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
-                    (System.nanoTime() - start) / 1e9);
+            stderr.printf(java.util.Locale.ROOT, "pack: %d crate%s, %d trip%s in %.2f s%n", crates.crates().size(),
+                    crates.crates().size() == 1 ? "" : "s", loads.vehicles().size(),
+                    loads.vehicles().size() == 1 ? "" : "s", (System.nanoTime() - start) / 1e9);
         } else {
             stderr.println("pack: no load plan: " + loads.reason());
         }
