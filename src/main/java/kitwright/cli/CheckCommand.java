@@ -20,6 +20,10 @@ import picocli.CommandLine.Spec;
             "",
             "Every problem is listed as FILE:LINE: COLUMN: what is wrong (what was expected); nothing is"
                     + " written. Exit code 0 when the kit is valid, 2 when it has problems."
+        },
+        footer = {
+            "",
+            "Example: kitwright check sample-kits/cinema-12"
         })
 public final class CheckCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",

@@ -37,11 +37,14 @@ import picocli.CommandLine.Spec;
         },
         footer = {
             "",
+            "Example: kitwright compare sample-kits/cinema-6 sample-kits/cinema-12 sample-kits/cinema-20"
+                    + " --out out/compare",
+            "",
             "Exit codes: 0 ok, 1 internal error, 2 invalid input in any option (nothing is written), "
                     + "3 some option has no feasible plan (the files are written, that option is marked INFEASIBLE)."
         })
 public final class CompareCommand implements Callable<Integer> {
-    @Parameters(arity = "2..*", paramLabel = "KIT_DIR",
+    @Parameters(arity = "1..*", paramLabel = "KIT_DIR",
             description = "Kit folders to compare, two or more; columns follow this order.")
     List<Path> kitDirs;
 
@@ -77,6 +80,10 @@ public final class CompareCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         PrintWriter err = spec.commandLine().getErr();
+        if (kitDirs.size() < 2) {
+            throw new picocli.CommandLine.ParameterException(spec.commandLine(), "compare needs two or more kit"
+                    + " folders (got " + kitDirs.size() + ": " + kitDirs.get(0) + ")");
+        }
         if (threads < 1) {
             err.println("kitwright: --threads must be at least 1 (got " + threads + ")");
             err.flush();

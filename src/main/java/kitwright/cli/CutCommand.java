@@ -32,9 +32,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "cut", mixinStandardHelpOptions = true,
         description = {
-            "Plans the cutting of a kit: which stock lengths to buy (and which rack",
-            "offcuts to use) and how to saw each piece, at the least total price",
-            "(without prices: the least total stock length), one section at a time.",
+            "Plans the cutting of a kit: which stock lengths to buy and how to saw them.",
+            "Rack offcuts count as stock; the plan has the least total price (without",
+            "prices: the least total stock length), one section at a time.",
             "Each section is OPTIMAL (proven), FEASIBLE (with its gap to the lower",
             "bound) or INFEASIBLE (with the reason, e.g. too few rack offcuts).",
             "",
@@ -45,6 +45,12 @@ import picocli.CommandLine.Spec;
             "",
             "Exit codes: 0 every section planned, 2 invalid input, 3 some section has",
             "no feasible plan (the other sections are still planned and written)."
+        },
+        footer = {
+            "",
+            "Examples: kitwright cut sample-kits/alu-kiosk --kerf 3 --out out/alu-kiosk-cut",
+            "          kitwright cut --bars sample-kits/alu-kiosk/bars.csv --stock stock-catalogs/aluminium-tube.csv"
+                    + " --materials stock-catalogs/materials.csv"
         })
 public final class CutCommand implements Callable<Integer> {
     /** The plan as JSON in the folder of {@code --out}. */
@@ -112,7 +118,7 @@ public final class CutCommand implements Callable<Integer> {
         }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
-            err.printf(Locale.ROOT, "cut %s: %s, lower bound %s, best %s%n", section, stage, figure(bound),
+            err.printf(Locale.ROOT, "cut %s (%s): lower bound %s, best %s%n", section, stage, figure(bound),
                     best == null ? "-" : figure(best));
             err.flush();
         };

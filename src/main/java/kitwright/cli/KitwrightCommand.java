@@ -33,7 +33,7 @@ public final class KitwrightCommand implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "Missing command: try 'kitwright --help'.");
+        throw new CommandLine.ParameterException(spec.commandLine(), "Missing command (expected one of check, plan, cut, nest, pack, compare).");
     }
 
     /** Builds the command line with kitwright's exit codes and error handling. */

@@ -42,10 +42,10 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "nest", mixinStandardHelpOptions = true,
         description = {
-            "Plans the cutting of a kit, then nests every cut piece: thinner tubes",
-            "slide into thicker ones, side by side and end to end, so the kit",
-            "travels in fewer bundles. Prints the bundles beside a lower bound and",
-            "the status (OPTIMAL: no plan in kitwright's channel layouts has fewer).",
+            "Plans the cutting of a kit, then nests the cut tubes into bundles.",
+            "Thinner tubes slide into thicker ones, side by side and end to end, so",
+            "the kit travels in fewer bundles. Prints the bundles beside a lower bound",
+            "and the status (OPTIMAL: no plan in kitwright's channel layouts has fewer).",
             "",
             "Fit rule: a tube fits another when its largest outside diameter plus",
             "the clearance (kit.json nestClearanceMm, default 2.0 mm, diametral) is",
@@ -64,6 +64,10 @@ import picocli.CommandLine.Spec;
             "",
             "Exit codes: 0 ok, 2 invalid input, 3 when a section cannot be cut or a",
             "single bar is heavier than maxBundleMassKg (the plan is still written)."
+        },
+        footer = {
+            "",
+            "Example: kitwright nest sample-kits/cinema-12 --tolerance nominal --out out/cinema-12-nest"
         })
 public final class NestCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
@@ -119,7 +123,7 @@ public final class NestCommand implements Callable<Integer> {
         }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
-            err.printf(Locale.ROOT, "cut %s: %s, lower bound %.2f, best %s%n", section, stage, bound,
+            err.printf(Locale.ROOT, "cut %s (%s): lower bound %.2f, best %s%n", section, stage, bound,
                     best == null ? "-" : String.format(Locale.ROOT, "%.2f", best));
             err.flush();
         };

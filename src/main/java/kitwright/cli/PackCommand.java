@@ -41,10 +41,11 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "pack", mixinStandardHelpOptions = true,
         description = {
-            "Packs a kit for shipping: joints into joint boxes, bundles and boxes into",
-            "crates from the crate catalog (least total crate price, then fewest",
-            "crates), crates onto vehicles from the vehicle catalog (least total trip",
-            "cost). Prints each count beside its lower bound and the status.",
+            "Packs a kit for shipping: joint boxes, crates and vehicle loads.",
+            "Joints go into joint boxes, bundles and boxes into crates from the crate",
+            "catalog (least total crate price, then fewest crates), crates onto",
+            "vehicles from the vehicle catalog (least total trip cost). Prints each",
+            "count beside its lower bound and the status.",
             "",
             "With --out DIR: packing-lists.csv (per crate: type, marks and counts,",
             "bundles, boxes, gross mass), manifests.csv (per vehicle: crates, mass,",
@@ -55,14 +56,20 @@ import picocli.CommandLine.Spec;
             "",
             "Lifting and load securing are not checked (EN 12195-1; local rules",
             "decide). Exit codes: 0 ok, 2 invalid input, 3 when an item fits no",
-            "crate or a crate no vehicle, or when a section cannot be cut or a bar",
-            "is heavier than maxBundleMassKg (what can be packed still is)."
+            "crate (nothing is written), when a crate fits no vehicle (the packing",
+            "lists are still written), or when a section cannot be cut or a bar is",
+            "heavier than maxBundleMassKg (what can be packed still is)."
+        },
+        footer = {
+            "",
+            "Example: kitwright pack sample-kits/cinema-12 --for screen-frame --out out/screen-frame"
         })
 public final class PackCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "KIT_DIR",
             description = "The kit folder: kit.json (optional, may set jointBox {lengthMm, widthMm, heightMm,"
                     + " maxMassKg}; default 600 x 400 x 300 mm, 25 kg), bars.csv, optionally structures.csv and"
-                    + " joints.csv; crates.csv and vehicles.csv beside the tube catalog or named in kit.json.")
+                    + " joints.csv. The crate and vehicle catalogs are crates.csv and vehicles.csv beside the tube"
+                    + " catalog unless kit.json names others (crateCatalog, vehicleCatalog).")
     Path kitDir;
 
     @Option(names = "--for", paramLabel = "STRUCTURE",
@@ -141,13 +148,15 @@ public final class PackCommand implements Callable<Integer> {
             stderr.flush();
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        if (loads.status() == Status.INFEASIBLE) {
+        // With crates but no load plan, the packing lists still stand: write and print them, then exit 3.
+        boolean loaded = loads.status() != Status.INFEASIBLE;
+        if (loaded) {
+            stderr.printf(java.util.Locale.ROOT, "pack: %d crate%s, %d trip%s in %.2f s%n", crates.crates().size(),
+                    crates.crates().size() == 1 ? "" : "s", loads.vehicles().size(),
+                    loads.vehicles().size() == 1 ? "" : "s", (System.nanoTime() - start) / 1e9);
+        } else {
             stderr.println("pack: no load plan: " + loads.reason());
-            stderr.flush();
-            return ExitCode.NO_FEASIBLE_PLAN.code();
         }
-        stderr.printf("pack: %d crates, %d trips in %.2f s%n", crates.crates().size(), loads.vehicles().size(),
-                (System.nanoTime() - start) / 1e9);
         stderr.flush();
         if (out != null) {
             writeFolder(crates, loads, upstreamBundles.plan().bundles());
@@ -166,12 +175,9 @@ public final class PackCommand implements Callable<Integer> {
             stdout.println("Wrote " + json);
         }
         stdout.flush();
-        if (!shortfalls.isEmpty()) {
-            shortfalls.forEach(reason -> stderr.println("kitwright: the pack plan is incomplete: " + reason));
-            stderr.flush();
-            return ExitCode.NO_FEASIBLE_PLAN.code();
-        }
-        return ExitCode.OK.code();
+        shortfalls.forEach(reason -> stderr.println("kitwright: the pack plan is incomplete: " + reason));
+        stderr.flush();
+        return loaded && shortfalls.isEmpty() ? ExitCode.OK.code() : ExitCode.NO_FEASIBLE_PLAN.code();
     }
 
     /** An unknown {@code --for} structure is bad input, told before any planning. */

@@ -6,6 +6,7 @@ import java.util.TreeMap;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.VehicleLoad;
 import kitwright.model.CrateType;
+import kitwright.model.Status;
 import kitwright.packing.Crate;
 import kitwright.packing.CratePlan;
 import kitwright.packing.StructureShare;
@@ -29,7 +30,7 @@ final class PackSummary {
         if (kit != null && share != null) {
             sb.append(", packed for structure '").append(share.structure()).append("': the bundles holding its tubes");
             if (!share.extraTubes().isEmpty()) {
-                sb.append(" (riding along beyond its counts: ").append(CrateContents.text(share.extraTubes()))
+                sb.append(" (riding along beyond its counts: ").append(CrateContents.plainText(share.extraTubes()))
                         .append(')');
             }
             sb.append(share.allJoints() ? "; all the kit's joints (structures.csv counts bars only)" : "");
@@ -37,42 +38,76 @@ final class PackSummary {
         if (kit != null) {
             sb.append(".\n");
         }
+        if (crates.status() == Status.INFEASIBLE) {
+            sb.append("Crates: none planned; INFEASIBLE: ").append(reason(crates.reason())).append('\n');
+            sb.append("Trips: none planned (no crates to load).\n");
+            return sb.toString();
+        }
         Map<String, Integer> byType = new TreeMap<>();
         crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
         sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");
         Double price = price(crates, catalog);
         if (price != null) {
-            sb.append(", price ").append(ShopFormat.money(price));
+            sb.append(", price ").append(money(price));
         }
         sb.append("; lower bound ").append(crates.lowerBound()).append(crates.lowerBound() == 1 ? " crate" : " crates");
         if (crates.bounds().price() != null) {
-            sb.append(", price ").append(ShopFormat.money(crates.bounds().price()));
+            sb.append(", price ").append(money(crates.bounds().price()));
         }
-        sb.append("; ").append(crates.status()).append(", gap ").append(ShopFormat.percent(crates.bounds().gap()))
+        sb.append("; ").append(crates.status()).append(", gap ").append(percent(crates.bounds().gap()))
                 .append(" %.\n");
         sb.append("Joint boxes: ").append(crates.boxes().size()).append(".\n");
+        if (loads.status() == Status.INFEASIBLE) {
+            sb.append("Trips: none planned; INFEASIBLE: ").append(reason(loads.reason())).append('\n');
+            return sb.toString();
+        }
         Map<String, Integer> byVehicle = new TreeMap<>();
         loads.vehicles().forEach(v -> byVehicle.merge(v.type(), 1, Integer::sum));
         sb.append("Trips: ").append(loads.vehicles().size())
                 .append(byVehicle.isEmpty() ? "" : " (" + counts(byVehicle) + ")")
-                .append(", cost ").append(ShopFormat.money(loads.tripCost()))
-                .append("; lower bound ").append(ShopFormat.money(loads.lowerBound()))
-                .append(" (fleet LP ").append(ShopFormat.money(loads.bounds().fleetRelaxation())).append("); ")
-                .append(loads.status()).append(", gap ").append(ShopFormat.percent(loads.bounds().gap()))
+                .append(", cost ").append(money(loads.tripCost()))
+                .append("; lower bound ").append(money(loads.lowerBound()))
+                .append(" (fleet LP ").append(money(loads.bounds().fleetRelaxation())).append("); ")
+                .append(loads.status()).append(", gap ").append(percent(loads.bounds().gap()))
                 .append(" %.\n");
         for (VehicleLoad v : loads.vehicles()) {
             sb.append("  ").append(v.id()).append(' ').append(v.type()).append(": ").append(v.crates().size())
-                    .append(" crates, ").append(ShopFormat.kg(v.massKg())).append(" kg of ")
-                    .append(ShopFormat.kg(v.payloadKg())).append(" kg, floor ").append(ShopFormat.mm(v.floorLengthMm()))
-                    .append(" of ").append(ShopFormat.mm(v.deckLengthMm())).append(" mm, centre of gravity ")
-                    .append(ShopFormat.mm(v.centreOfGravityMm())).append(" mm from the front.\n");
+                    .append(v.crates().size() == 1 ? " crate, " : " crates, ").append(kg(v.massKg()))
+                    .append(" kg of ")
+                    .append(kg(v.payloadKg())).append(" kg, floor ").append(mm(v.floorLengthMm()))
+                    .append(" of ").append(mm(v.deckLengthMm())).append(" mm, centre of gravity ")
+                    .append(mm(v.centreOfGravityMm())).append(" mm from the front.\n");
         }
         return sb.toString();
     }
 
+    // Plain ASCII numbers for the console, as the cutting summary prints them ("3476.2 kg"): the report's digit
+    // groups (a narrow no-break space) show as '?' or worse in many terminals and trip up scripts.
+    private static String money(double value) {
+        return ShopFormat.money(value).replace(ShopFormat.GROUP, "");
+    }
+
+    private static String kg(double value) {
+        return ShopFormat.kg(value).replace(ShopFormat.GROUP, "");
+    }
+
+    private static String mm(double value) {
+        return ShopFormat.mm(value).replace(ShopFormat.GROUP, "");
+    }
+
+    private static String percent(double value) {
+        return ShopFormat.percent(value).replace(ShopFormat.GROUP, "");
+    }
+
+    /** The reason of an INFEASIBLE plan as a sentence. */
+    private static String reason(String reason) {
+        String text = reason == null || reason.isBlank() ? "no reason given" : reason.strip();
+        return text.endsWith(".") ? text : text + ".";
+    }
+
     private static String counts(Map<String, Integer> counts) {
         StringBuilder sb = new StringBuilder();
-        counts.forEach((k, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(k).append(" \u00D7 ").append(n));
+        counts.forEach((k, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(k).append(" x ").append(n));
         return sb.toString();
     }
 

@@ -29,7 +29,8 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = {
-            "Plans a kit from end to end and writes one folder to open, print and e-mail:",
+            "Plans a kit from end to end and writes one folder to open, print and e-mail.",
+            "",
             "  report.html        the report: summary, purchase order, saw sheets, bundles, crates, trucks",
             "  order.csv          stock to buy (and rack offcuts to take), with prices",
             "  cut-list.csv       the saw sheet: every stock piece, every cut, start positions, offcuts",
@@ -43,6 +44,10 @@ import picocli.CommandLine.Spec;
             "Progress goes to stderr. The folder is written beside DIR and moved into place only when",
             "complete; an existing DIR is replaced only when kitwright wrote it. Exit code 2 on invalid input",
             "(nothing written), 3 when some part has no feasible plan (the rest is still written)."
+        },
+        footer = {
+            "",
+            "Example: kitwright plan sample-kits/cinema-12 --out out/cinema-12 --date 2026-12-01"
         })
 public final class PlanCommand implements Callable<Integer> {
     /** The file holding the kit summary in the plan folder. */
@@ -111,7 +116,7 @@ public final class PlanCommand implements Callable<Integer> {
 
             @Override
             public void report(String stage, String section, double lowerBound, Double bestValue) {
-                err.printf(Locale.ROOT, "plan: cutting %s: %s, lower bound %.2f, best %s%n", section, stage,
+                err.printf(Locale.ROOT, "plan: cutting %s (%s): lower bound %.2f, best %s%n", section, stage,
                         lowerBound, bestValue == null ? "-" : String.format(Locale.ROOT, "%.2f", bestValue));
                 err.flush();
             }

@@ -25,7 +25,8 @@ final class Shortage {
                 int count = Math.min(left, d.quantity());
                 left -= count;
                 length += count * d.lengthMm();
-                parts.add(d.mark() + " (" + count + " of " + d.quantity() + " bars, " + mm(d.lengthMm()) + " mm)");
+                parts.add(d.mark() + " (" + count + " of " + d.quantity() + " bars missing, " + mm(d.lengthMm())
+                        + " mm each)");
             }
         }
         parts.sort(null);

@@ -27,13 +27,31 @@ public final class BarsReader {
         return bars;
     }
 
+    /**
+     * The rows of bars.csv that name a mark.
+     *
+     * @param everyMarkRead true when the file was read and every row gave its mark, so a mark missing from
+     *                      {@code lines} is truly not in the file; false when the file or some row could not be read
+     */
+    public record Rows(List<Sourced<BarLine>> lines, boolean everyMarkRead) {
+        public Rows {
+            lines = List.copyOf(lines);
+        }
+    }
+
     /** Reads a bars file, adding problems; returns every row that names a mark. */
     public static List<Sourced<BarLine>> read(Path file, Problems problems) {
+        return readRows(file, problems).lines();
+    }
+
+    /** Reads a bars file, adding problems; returns every row that names a mark and whether every mark was read. */
+    public static Rows readRows(Path file, Problems problems) {
         List<Sourced<BarLine>> bars = new ArrayList<>();
         CsvTable table = CsvTable.read(file, COLUMNS, "the kit's bars", problems).orElse(null);
         if (table == null) {
-            return bars;
+            return new Rows(bars, false);
         }
+        boolean everyMarkRead = table.everyRowRead();
         if (table.isEmpty()) {
             problems.add(file, 2, "", "no bars under the header (expected one row per mark)");
         }
@@ -51,6 +69,7 @@ public final class BarsReader {
                         + " node_to_node_mm to derive it from)");
             }
             if (mark == null) {
+                everyMarkRead = false;
                 continue;
             }
             Integer earlier = firstLine.putIfAbsent(mark, row.line());
@@ -62,6 +81,6 @@ public final class BarsReader {
             bars.add(row.sourced(new BarLine(mark, section, length, quantity, nodeToNode, tolerance,
                     row.text("note"), row.clean())));
         }
-        return bars;
+        return new Rows(bars, everyMarkRead);
     }
 }

@@ -55,6 +55,11 @@ public final class CsvTable {
         return rows;
     }
 
+    /** True when every non-blank row under the header was kept in {@link #rows()} (none was left out). */
+    public boolean everyRowRead() {
+        return rows.size() == dataRows;
+    }
+
     /** True when nothing but blank rows follows the header. */
     public boolean isEmpty() {
         return dataRows == 0;

@@ -33,16 +33,19 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
-        return marks(settings, lines, structures, true, catalog, problems);
+        return marks(settings, new BarsReader.Rows(lines, true), structures, true, catalog, problems);
     }
 
     /**
      * As above; when {@code structuresReadable} is false, structures.csv has problems of its own (already
-     * reported), so a blank quantity is not judged against its rows, which would blame bars.csv for them.
+     * reported), so a blank quantity is not judged against its rows, which would blame bars.csv for them. When
+     * bars.csv or one of its rows could not be read ({@code everyMarkRead} false, already reported), a structures.csv
+     * mark missing from the rows read is not reported: it may stand on the row that could not be read.
      */
-    static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
+    static List<Bar> marks(KitSettings settings, BarsReader.Rows rows, List<Sourced<StructureCount>> structures,
                            boolean structuresReadable, TubeCatalog catalog, Problems problems) {
-        Map<String, Need> needs = needs(settings, lines, structures, problems);
+        List<Sourced<BarLine>> lines = rows.lines();
+        Map<String, Need> needs = needs(settings, rows, structures, problems);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
             BarLine line = sourced.value();
@@ -80,13 +83,16 @@ final class KitAssembler {
     }
 
     /** What the structures need of each mark; reports structure rows naming a mark bars.csv does not have. */
-    private static Map<String, Need> needs(KitSettings settings, List<Sourced<BarLine>> lines,
+    private static Map<String, Need> needs(KitSettings settings, BarsReader.Rows rows,
                                            List<Sourced<StructureCount>> structures, Problems problems) {
         Set<String> marks = new LinkedHashSet<>();
-        lines.forEach(l -> marks.add(l.value().mark()));
+        rows.lines().forEach(l -> marks.add(l.value().mark()));
         Map<String, Need> needs = new LinkedHashMap<>();
         for (Sourced<StructureCount> row : structures) {
             StructureCount count = row.value();
+            if (!marks.contains(count.mark()) && !rows.everyMarkRead()) {
+                continue; // perhaps on a bars.csv row that could not be read (reported there)
+            }
             if (!marks.contains(count.mark())) {
                 String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
                 String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";

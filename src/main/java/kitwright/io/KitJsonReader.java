@@ -81,8 +81,7 @@ public final class KitJsonReader {
             root = MAPPER.readTree(bytes);
         } catch (JsonProcessingException e) {
             int line = e.getLocation() == null ? 0 : e.getLocation().getLineNr();
-            String message = e.getOriginalMessage().lines().findFirst().orElse("unreadable");
-            problems.add(file, line, "", "the file is not valid JSON: " + message
+            problems.add(file, line, "", "the file is not valid JSON: " + plainMessage(e.getOriginalMessage())
                     + " (expected a JSON object such as {\"kerfMm\": 2.0})");
             return Optional.empty();
         } catch (IOException e) {
@@ -202,5 +201,27 @@ public final class KitJsonReader {
         } catch (InvalidPathException e) {
             return Optional.empty();
         }
+    }
+
+    /**
+     * The parser's message without its advice to programmers (parser features to enable, the Java type bound), which
+     * a user editing kit.json cannot act on, and with the usual hand-editing slips named.
+     */
+    static String plainMessage(String parserMessage) {
+        String first = parserMessage == null ? "" : parserMessage.lines().findFirst().orElse("");
+        if (first.contains("comment")) {
+            return "a comment (JSON has no comments; put notes in \"description\")";
+        }
+        if (first.startsWith("Trailing token")) {
+            return "more text after the closing } (one JSON object per file)";
+        }
+        String plain = first.replaceAll("\\s*\\(not recognized as one since Feature [^)]*\\)", "")
+                .replaceAll(":\\s*enable `[^`]*` to allow", "")
+                .replaceAll("\\s*\\(bound as `[^`]*`\\)", "")
+                .replaceAll(":\\s*not allowed as per `[^`]*`", "").strip();
+        if (plain.contains("was expecting double-quote to start field name")) {
+            plain += "; keys go in double quotes, with no comma after the last entry";
+        }
+        return plain.isEmpty() ? "unreadable" : plain;
     }
 }

@@ -58,7 +58,7 @@ public final class KitReader {
         if (kitJson.vehicleCatalog() != null || Files.exists(kitJson.vehicleCatalogFile())) {
             vehicles = VehicleCatalogReader.read(kitJson.vehicleCatalogFile(), problems);
         }
-        List<Sourced<BarLine>> lines = BarsReader.read(kitDir.resolve(BARS), problems);
+        BarsReader.Rows lines = BarsReader.readRows(kitDir.resolve(BARS), problems);
         Path structuresFile = kitDir.resolve(STRUCTURES);
         int beforeStructures = problems.count();
         List<Sourced<StructureCount>> structures = Files.exists(structuresFile)

@@ -56,8 +56,20 @@ public final class CrateContents {
 
     /** "A1 × 12; N90 × 40" */
     public static String text(Map<String, Integer> marks) {
+        return text(marks, " \u00D7 ");
+    }
+
+    /**
+     * "A1 x 12; N90 x 40", plain ASCII for CSV files: a spreadsheet that opens a UTF-8 file without a byte-order mark
+     * as its local code page shows "×" as "Ã—".
+     */
+    public static String plainText(Map<String, Integer> marks) {
+        return text(marks, " x ");
+    }
+
+    private static String text(Map<String, Integer> marks, String times) {
         StringBuilder sb = new StringBuilder();
-        marks.forEach((mark, n) -> sb.append(sb.length() == 0 ? "" : "; ").append(mark).append(" \u00D7 ").append(n));
+        marks.forEach((mark, n) -> sb.append(sb.length() == 0 ? "" : "; ").append(mark).append(times).append(n));
         return sb.toString();
     }
 

@@ -23,7 +23,7 @@ import org.apache.commons.csv.CSVPrinter;
  * grouping so a spreadsheet reads them as numbers):
  * <ul>
  *   <li>{@code packing-lists.csv}, one row per crate: {@code crate,type,marks,bundles,bundle_ids,boxes,box_ids,
- *   gross_kg,max_gross_kg} (marks as "A1 × 12; N90 × 40", tubes of the bundles and joints of the boxes);</li>
+ *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes);</li>
  *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
  *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
  *   to the rear face of the last crate; centre of gravity from the front).</li>
@@ -48,7 +48,7 @@ public final class LogisticsCsv {
             csv.printRecord("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids", "gross_kg",
                     "max_gross_kg");
             for (Crate c : plan.crates()) {
-                csv.printRecord(c.id(), c.type(), CrateContents.text(CrateContents.marks(c, byId, boxes)),
+                csv.printRecord(c.id(), c.type(), CrateContents.plainText(CrateContents.marks(c, byId, boxes)),
                         c.items(ItemKind.BUNDLE).size(), CrateContents.refs(c, ItemKind.BUNDLE),
                         c.items(ItemKind.BOX).size(), CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1),
                         number(c.maxGrossKg(), 1));

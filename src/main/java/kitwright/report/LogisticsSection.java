@@ -50,9 +50,10 @@ public final class LogisticsSection {
     record TripDrawing(String id, String type, String svg) {
     }
 
-    record View(List<Figure> figures, String crateStatus, String crateStatusClass, String tripStatus,
-                String tripStatusClass, List<CrateRow> crates, List<CrateDrawing> crateDrawings, List<TripRow> trips,
-                List<TripDrawing> tripDrawings) {
+    /** The reasons are null unless that plan is INFEASIBLE. */
+    record View(List<Figure> figures, String crateStatus, String crateStatusClass, String crateReason,
+                String tripStatus, String tripStatusClass, String tripReason, List<CrateRow> crates,
+                List<CrateDrawing> crateDrawings, List<TripRow> trips, List<TripDrawing> tripDrawings) {
     }
 
     private LogisticsSection() {
@@ -81,12 +82,15 @@ public final class LogisticsSection {
         Map<String, JointBoxLoad> boxes = crates.boxes().stream()
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
         List<Figure> figures = new ArrayList<>();
-        figures.add(new Figure("Crates", ShopFormat.count(crates.crates().size()),
-                "lower bound " + crates.lowerBound() + (crates.bounds().price() == null ? ""
-                        : ", price bound " + ShopFormat.money(crates.bounds().price()))));
+        boolean crated = crates.status() != Status.INFEASIBLE;
+        boolean loaded = crated && loads.status() != Status.INFEASIBLE;
+        figures.add(new Figure("Crates", ShopFormat.count(crates.crates().size()), !crated
+                ? "no crate plan: see the packing lists" : "lower bound " + crates.lowerBound()
+                + (crates.bounds().price() == null ? "" : ", price bound " + ShopFormat.money(crates.bounds().price()))));
         figures.add(new Figure("Joint boxes", ShopFormat.count(crates.boxes().size()), "joints in boxes"));
-        figures.add(new Figure("Trips", ShopFormat.count(loads.vehicles().size()),
-                "cost " + ShopFormat.money(loads.tripCost()) + ", bound " + ShopFormat.money(loads.lowerBound())));
+        figures.add(new Figure("Trips", ShopFormat.count(loads.vehicles().size()), !loaded
+                ? "no load plan: see the manifests"
+                : "cost " + ShopFormat.money(loads.tripCost()) + ", bound " + ShopFormat.money(loads.lowerBound())));
         List<CrateRow> rows = crates.crates().stream().map(c -> new CrateRow(c.id(), c.type(),
                 CrateContents.text(CrateContents.marks(c, byId, boxes)),
                 ShopFormat.count(c.items(ItemKind.BUNDLE).size()), ShopFormat.count(c.items(ItemKind.BOX).size()),
@@ -112,8 +116,10 @@ public final class LogisticsSection {
             tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
         }
         View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
-                status(loads.status(), loads.bounds().gap()), statusClass(loads.status()), rows, crateDrawings,
-                trips, tripDrawings);
+                reason(crates.status(), crates.reason()), status(loads.status(), loads.bounds().gap()),
+                statusClass(loads.status()), crates.status() == Status.INFEASIBLE ? reason(loads.status(),
+                "no crates to load") : reason(loads.status(), loads.reason()), rows, crateDrawings, trips,
+                tripDrawings);
         return new ReportSection(ID, "Crates and trucks", "logistics", view);
     }
 
@@ -143,8 +149,19 @@ public final class LogisticsSection {
     }
 
     private static String status(Status status, double gap) {
-        return status == Status.OPTIMAL ? "optimal"
-                : status.name().toLowerCase(Locale.ROOT) + ", gap " + ShopFormat.percent(gap) + " %";
+        return switch (status) {
+            case OPTIMAL -> "optimal";
+            case INFEASIBLE -> "infeasible";
+            default -> status.name().toLowerCase(Locale.ROOT) + ", gap " + ShopFormat.percent(gap) + " %";
+        };
+    }
+
+    /** Why an INFEASIBLE plan has none, else null (nothing shown). */
+    private static String reason(Status status, String reason) {
+        if (status != Status.INFEASIBLE) {
+            return null;
+        }
+        return reason == null || reason.isBlank() ? "no reason given" : reason.strip();
     }
 
     private static String statusClass(Status status) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
+import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.Origin;
 import kitwright.model.Status;
@@ -104,12 +105,21 @@ final class SummarySection {
         return sum;
     }
 
+    /**
+     * The kit's mass as kitwright gives it everywhere else (check, plan.json figures, compare): bars and joints,
+     * with the two parts in the note.
+     */
     private static Figure kitMass(Kit kit) {
         int bars = kit.bars().stream().mapToInt(Bar::quantity).sum();
-        Double mass = kitMassKg(kit);
-        return new Figure("Kit mass", ReportFormat.kg(mass),
-                (mass == null ? "no materials file; " : "") + ShopFormat.count(bars) + " bars in "
-                        + ShopFormat.count(kit.bars().size()) + " marks");
+        Double barsMass = kitMassKg(kit);
+        int joints = kit.joints().stream().mapToInt(Joint::quantity).sum();
+        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
+        String barsNote = ShopFormat.count(bars) + " bars in " + ShopFormat.count(kit.bars().size()) + " marks"
+                + (barsMass == null ? " (no materials file)" : ", " + ReportFormat.kg(barsMass));
+        String jointsNote = joints == 0 ? "no joints" : ShopFormat.count(joints) + " joints, "
+                + ReportFormat.kg(jointsMass);
+        return new Figure("Kit mass", ReportFormat.kg(barsMass == null ? null : barsMass + jointsMass),
+                barsNote + "; " + jointsNote);
     }
 
     private static Figure plans(List<CuttingFigures> sections) {

@@ -42,6 +42,8 @@ class PackCommandTest {
         assertThat(run.code()).as(run.err()).isZero();
         assertThat(run.out()).contains("Crates: ").contains("lower bound").contains("Trips: ")
                 .contains("EN 12195-1");
+        assertThat(run.out()).as("plain ASCII on the console, numbers without digit groups")
+                .matches("\\p{ASCII}*").containsPattern("centre of gravity \\d+(\\.\\d)? mm");
         assertThat(first.resolve("packing-lists.csv")).exists();
         assertThat(first.resolve("manifests.csv")).exists();
         assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
@@ -92,6 +94,31 @@ class PackCommandTest {
         assertThat(run.code()).as(run.out() + run.err()).isEqualTo(3);
         assertThat(run.err()).contains("no crate plan").contains("fits no crate type");
         assertThat(out).doesNotExist();
+    }
+
+    @Test
+    @DisplayName("crates but no vehicle that takes them: the packing lists are still printed and written, exit 3"
+            + " with the reason")
+    void cratesWithoutVehicle() throws Exception {
+        Path kit = temp.resolve("kit");
+        Files.createDirectories(kit);
+        Files.copy(Path.of("sample-kits/alu-kiosk/bars.csv"), kit.resolve("bars.csv"));
+        Files.writeString(kit.resolve("vehicles.csv"), "vehicle,deck_length_mm,deck_width_mm,deck_height_mm,"
+                + "payload_kg,cost_per_trip,source\nhand-cart,1200,800,1000,150,10,invented\n", StandardCharsets.UTF_8);
+        Files.writeString(kit.resolve("kit.json"), "{\"stockCatalog\": \""
+                + Path.of("stock-catalogs/aluminium-tube.csv").toAbsolutePath() + "\", \"crateCatalog\": \""
+                + Path.of("stock-catalogs/crates.csv").toAbsolutePath() + "\", \"vehicleCatalog\": \"vehicles.csv\"}",
+                StandardCharsets.UTF_8);
+        Path out = temp.resolve("out");
+        Path json = temp.resolve("plan.json");
+        Run run = run("pack", kit.toString(), "--out", out.toString(), "--json", json.toString());
+        assertThat(run.code()).as(run.out() + run.err()).isEqualTo(3);
+        assertThat(run.err()).contains("no load plan: crate C1").contains("fits no vehicle");
+        assertThat(run.out()).contains("Crates: 1").contains("Trips: none planned; INFEASIBLE: crate C1")
+                .doesNotContain("INFEASIBLE, gap");
+        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("C1,");
+        assertThat(new ObjectMapper().readTree(json.toFile()).path("loads").path("status").asText())
+                .isEqualTo("INFEASIBLE");
     }
 
     @Test

@@ -59,7 +59,8 @@ class FirstFitDecreasingTest {
         SectionCutPlan plan = new FirstFitDecreasing().solve(problem, CutProgress.NONE);
         CutPlanValidator.validate(problem, plan);
         assertThat(plan.status()).isEqualTo(Status.INFEASIBLE);
-        assertThat(plan.reason()).contains("A (1 of 3 bars").contains("2000 mm of bar length missing");
+        assertThat(plan.reason()).contains("A (1 of 3 bars missing, 2000 mm each)")
+                .contains("2000 mm of bar length missing");
     }
 
     @Test

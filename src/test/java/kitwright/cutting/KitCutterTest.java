@@ -40,7 +40,7 @@ class KitCutterTest {
         assertThat(second.status()).isEqualTo(Status.INFEASIBLE);
         assertThat(second.patterns()).isEmpty();
         // two 3000 mm offcuts hold one bar of C1 each; C2 (1600 mm) has no stock left
-        assertThat(second.reason()).contains("C2 (1 of 1 bars, 1600 mm)").contains("1600 mm of bar length missing");
+        assertThat(second.reason()).contains("C2 (1 of 1 bars missing, 1600 mm each)").contains("1600 mm of bar length missing");
         assertThat(stages).contains("CHS 48.3x3.2");
     }
 

@@ -4,12 +4,16 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.nio.file.Path;
+import java.util.stream.Stream;
 import kitwright.model.JointBox;
 import kitwright.model.KitSettings;
 import kitwright.model.NestTolerance;
 import kitwright.model.SparesPolicy;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
 
 class KitJsonReaderTest {
 
@@ -105,5 +109,29 @@ class KitJsonReaderTest {
                         .singleElement().asString()
                         .endsWith("kit.json:1: the file holds a list (expected a JSON object such as"
                                 + " {\"kerfMm\": 2.0})"));
+    }
+
+    static Stream<Arguments> jsonSlips() {
+        return Stream.of(
+                Arguments.of("a comment",
+                        "{\"kerfMm\": 2.0, // band saw\n\"trimMm\": 5}", "a comment (JSON has no comments"),
+                Arguments.of("NaN", "{\"kerfMm\": NaN}", "Non-standard token 'NaN'"),
+                Arguments.of("a trailing comma", "{\"kerfMm\": 2.0,\n}",
+                        "with no comma after the last entry"),
+                Arguments.of("single quotes", "{'kerfMm': 2.0}",
+                        "keys go in double quotes"),
+                Arguments.of("two objects", "{}\n{}",
+                        "more text after the closing }"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("jsonSlips")
+    void brokenJsonIsToldInPlainWordsWithoutTheParserAdviceToProgrammers(String slip, String text, String told,
+                                                                         @TempDir Path dir) {
+        Path file = KitFiles.write(dir, "kit.json", text);
+        assertThatThrownBy(() -> KitJsonReader.read(file, dir))
+                .isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.problems())
+                        .singleElement().asString().contains("the file is not valid JSON: ").contains(told)
+                        .doesNotContain("Feature").doesNotContain("enable").doesNotContain("`"));
     }
 }

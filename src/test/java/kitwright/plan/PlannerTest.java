@@ -154,7 +154,7 @@ class PlannerTest {
         assertThat(Files.readString(out.resolve("nests.csv"))).contains(",A,").doesNotContain(",E,");
         assertThat(Files.readString(out.resolve("report.html"), StandardCharsets.UTF_8))
                 .contains("No plan for this section").contains("CHS 33.7x2.6");
-        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("A \u00D7 6");
+        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("A x 6");
         assertThat(run.out()).contains("INFEASIBLE");
     }
 
@@ -179,7 +179,7 @@ class PlannerTest {
         assertThat(html).doesNotContain("<b>&").contains("&lt;b&gt;&amp;&quot;");
         assertThat(html.split("data-mark=\"&lt;b&gt;&amp;&quot;\"", -1).length - 1)
                 .as("legend row, bundle drawing bars and bundle tables").isGreaterThanOrEqualTo(3);
-        assertThat(files.get("packing-lists.csv")).contains("\"<b>&\"\" \u00D7 6");
+        assertThat(files.get("packing-lists.csv")).contains("\"<b>&\"\" x 6");
         assertThat(files.get("nests.csv")).contains("\"<b>&\"\"");
     }
 

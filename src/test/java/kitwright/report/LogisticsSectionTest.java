@@ -51,6 +51,33 @@ class LogisticsSectionTest {
         assertThat(HtmlReport.render(builder.build())).isEqualTo(html);
     }
 
+    @Test
+    @DisplayName("an INFEASIBLE crate or load plan shows its reason in the report, not a gap of 0 %")
+    void infeasibleShowsTheReason() {
+        List<Bundle> bundles = List.of(Fixtures.bundle("B1", "A", 1900, 60, 300));
+        List<CrateType> types = List.of(Fixtures.crate("box", 2000, 500, 500, 20, 700, 50.0));
+        CratePlan none = CratePlan.infeasible("joint N (4.8 kg) is heavier than the joint box limit of 1.0 kg");
+        String noCrates = render(LogisticsSection.of(none, LoadPlan.infeasible("no crate plan: " + none.reason()),
+                bundles, types));
+        assertThat(noCrates).contains("No crate plan: joint N (4.8 kg) is heavier than the joint box limit")
+                .contains("No load plan: no crates to load").contains("no crate plan: see the packing lists")
+                .doesNotContain("gap 0.0 %").doesNotContain("cost 0.00");
+
+        CratePlan crates = new LaneCratePacker(new LaneCratePacker.Limits(0.2, 5, 2)).pack(bundles, List.of(), types,
+                JointBox.DEFAULT);
+        CratePlanValidator.check(crates, bundles, List.of(), types, JointBox.DEFAULT);
+        String noLoads = render(LogisticsSection.of(crates, LoadPlan.infeasible("crate C1 fits no vehicle of the"
+                + " catalog (deck size or payload)"), bundles, types));
+        assertThat(noLoads).contains("No load plan: crate C1 fits no vehicle of the catalog")
+                .doesNotContain("No crate plan").doesNotContain("gap 0.0 %").contains("no load plan: see the manifests")
+                .doesNotContain("cost 0.00");
+    }
+
+    private static String render(ReportSection section) {
+        return HtmlReport.render(kitwright.report.ReportModel.builder(ReportFixtures.sampleKit(),
+                LocalDate.of(2026, 1, 2)).section(section).build());
+    }
+
     private static int count(String text, String needle) {
         int n = 0;
         for (int i = text.indexOf(needle); i >= 0; i = text.indexOf(needle, i + 1)) {

@@ -232,15 +232,15 @@ public final class PlanValidator {
         }
     }
 
-    /** "A1 × 12; N90 × 40" as a map. */
+    /** "A1 x 12; N90 x 40" (packing-lists.csv) as a map. */
     private static Map<String, Integer> parseMarks(String text) {
         Map<String, Integer> marks = new TreeMap<>();
         if (text.isBlank()) {
             return marks;
         }
         for (String part : text.split("; ")) {
-            int at = part.lastIndexOf(" \u00D7 ");
-            check(at > 0, "marks written as 'MARK × COUNT': " + part);
+            int at = part.lastIndexOf(" x ");
+            check(at > 0, "marks written as 'MARK x COUNT': " + part);
             marks.merge(part.substring(0, at), Integer.parseInt(part.substring(at + 3)), Integer::sum);
         }
         return marks;

@@ -126,10 +126,10 @@ class PlanValidatorTest {
         Map<String, String> files = files(good);
         String lists = files.get(LogisticsCsv.PACKING_LISTS);
         Map<String, String> wrongCount = new HashMap<>(files);
-        wrongCount.put(LogisticsCsv.PACKING_LISTS, lists.replace("A \u00D7 6", "A \u00D7 5"));
+        wrongCount.put(LogisticsCsv.PACKING_LISTS, lists.replace("A x 6", "A x 5"));
         rejects(good, wrongCount, "packing list of C1: marks");
         Map<String, String> noJoints = new HashMap<>(files);
-        noJoints.put(LogisticsCsv.PACKING_LISTS, lists.replace("; N90 \u00D7 12", ""));
+        noJoints.put(LogisticsCsv.PACKING_LISTS, lists.replace("; N90 x 12", ""));
         rejects(good, noJoints, "marks");
         String manifests = files.get(LogisticsCsv.MANIFESTS);
         String row = manifests.lines().skip(1).findFirst().orElseThrow();
