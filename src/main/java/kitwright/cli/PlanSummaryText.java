@@ -55,7 +55,11 @@ final class PlanSummaryText {
                 .toPlainString();
     }
 
-    private static String bound(double value) {
-        return value == Math.rint(value) ? String.valueOf((long) value) : String.format(Locale.ROOT, "%.2f", value);
+    /** A bundle-count bound: whole, or fractional with the whole count it proves ("154.33, so at least 155"). */
+    static String bound(double value) {
+        if (Math.abs(value - Math.rint(value)) < 1e-6) {
+            return String.valueOf(Math.round(value));
+        }
+        return String.format(Locale.ROOT, "%.2f, so at least %d", value, (long) Math.ceil(value - 1e-6));
     }
 }

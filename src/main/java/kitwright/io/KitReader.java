@@ -65,7 +65,8 @@ public final class KitReader {
                 ? StructuresReader.read(structuresFile, problems) : List.of();
         boolean structuresReadable = problems.count() == beforeStructures;
         Path jointsFile = kitDir.resolve(JOINTS);
-        List<Joint> joints = Files.exists(jointsFile) ? JointsReader.read(jointsFile, problems) : List.of();
+        List<Joint> joints = Files.exists(jointsFile)
+                ? JointsReader.read(jointsFile, settings.jointBox(), problems) : List.of();
         List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, catalog, problems);
         problems.throwIfAny();
         return new Kit(kitDir, settings, bars, structures.stream().map(Sourced::value).toList(), joints, catalog,

@@ -67,6 +67,14 @@ class NestCommandTest {
     }
 
     @Test
+    @DisplayName("a fractional bundle bound says the whole count it proves: 154.33, so at least 155; 46 stays 46")
+    void bundleBoundText() {
+        assertThat(PlanSummaryText.bound(154.333)).isEqualTo("154.33, so at least 155");
+        assertThat(PlanSummaryText.bound(46.0)).isEqualTo("46");
+        assertThat(PlanSummaryText.bound(46.0000000001)).isEqualTo("46");
+    }
+
+    @Test
     @DisplayName("--tolerance nominal overrides kit.json and the JSON says which rule was used")
     void nominalOption() throws Exception {
         Path json = temp.resolve("nominal.json");

@@ -102,19 +102,21 @@ class PlanCommandTest {
     @org.junit.jupiter.api.DisplayName("no crate plan: the summary and the report say why, exit 3, the rest written")
     void noCratePlanSaysWhy(@TempDir Path dir) throws Exception {
         Path kit = KitFiles.kit(dir.resolve("kit"), "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1000,4\n");
-        KitFiles.write(kit, "joints.csv", "mark,diameter_mm,mass_kg,quantity\nN1,90,4.8,2\n");
-        KitFiles.write(kit, "kit.json", "{\"jointBox\": {\"lengthMm\": 600, \"widthMm\": 400, \"heightMm\": 300,"
-                + " \"maxMassKg\": 1}, \"crateCatalog\": \"" + Path.of("stock-catalogs/crates.csv").toAbsolutePath()
-                + "\", \"vehicleCatalog\": \"" + Path.of("stock-catalogs/vehicles.csv").toAbsolutePath() + "\"}");
+        // the only crate is 500 mm long inside: the 1000 mm bars fit no crate
+        KitFiles.write(kit, "crates.csv", "crate,inner_length_mm,inner_width_mm,inner_height_mm,outer_length_mm,"
+                + "outer_width_mm,outer_height_mm,tare_kg,max_gross_kg,stackable,max_top_load_kg,price\n"
+                + "short,500,400,300,560,460,360,10,200,yes,100,50\n");
+        KitFiles.write(kit, "kit.json", "{\"crateCatalog\": \"crates.csv\", \"vehicleCatalog\": \""
+                + Path.of("stock-catalogs/vehicles.csv").toAbsolutePath() + "\"}");
         Path out = dir.resolve("out");
 
         CliRun run = CliRun.of("plan", kit.toString(), "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.NO_FEASIBLE_PLAN.code());
-        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: joint N1 (4.8 kg) is heavier than the"
-                + " joint box limit of 1.0 kg").contains("Trips: none planned (no crates to load).")
+        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: bundle B001 (1000 mm long,")
+                .contains("fits no crate type of the catalog").contains("Trips: none planned (no crates to load).")
                 .doesNotContain("INFEASIBLE, gap");
-        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: joint N1 (4.8 kg)");
+        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle B001 (1000 mm long,");
         assertThat(out.resolve("cut-list.csv")).exists();
     }
 
