@@ -22,8 +22,8 @@ import kitwright.model.CrateType;
  *   tare) is cut short.</li>
  *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
  *   box orientation that holds most (on the skyline they first go on top of the lanes in rows). When both
- *   bundles and boxes are on offer, two more layouts put the boxes first: in as few full tiers on the floor as
- *   hold them, with the lanes above; or in stacks in the narrowest strip along the left wall that holds them,
+ *   bundles and boxes are on offer, three more layouts put the boxes first: in as few full tiers on the floor as
+ *   hold them, or one tier fewer (the rest go behind and above the lanes), with the lanes above; or in stacks in the narrowest strip along the left wall that holds them,
  *   with the lanes from the floor beside it. The caller chooses.</li>
  *   <li>{@link Support#settle} keeps, from the floor up, only the items that rest on items below.</li>
  * </ol>
@@ -54,6 +54,7 @@ final class CrateFiller {
         }
         if (boxes && bundles) {
             result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS, Placing.ROW_GROUPS));
+            result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS_LESS, Placing.ROW_GROUPS));
             result.add(build(crateIndex, crate, types, available, Start.BOX_COLUMN, Placing.ROW_GROUPS));
         }
         return List.copyOf(result);
@@ -77,8 +78,11 @@ final class CrateFiller {
             build(crateIndex, crate, types, available, Start.LANES, Placing.SKYLINE)};
     }
 
-    /** What goes in first: lanes from the floor; boxes in floor tiers; boxes in a column along one side wall. */
-    private enum Start { LANES, BOX_TIERS, BOX_COLUMN }
+    /**
+     * What goes in first: lanes from the floor; boxes in as few floor tiers as hold them all, or in one tier fewer
+     * (the rest behind and above the lanes); boxes in a column along one side wall.
+     */
+    private enum Start { LANES, BOX_TIERS, BOX_TIERS_LESS, BOX_COLUMN }
 
     /**
      * How lanes go into the cross-section: in row groups of one diameter, square or staggered, thinner lanes taking
@@ -97,7 +101,13 @@ final class CrateFiller {
         List<CrateLayout.Slot> slots = new ArrayList<>();
         double[] mass = {0};
         int[] left = available.clone();
-        double floor = start == Start.BOX_TIERS ? floorTiers(crate, types, left, net, mass, counts, slots) : 0;
+        int beforeTiers = slots.size();
+        double floor = start == Start.BOX_TIERS || start == Start.BOX_TIERS_LESS
+                ? floorTiers(crate, types, left, net, mass, counts, slots, start == Start.BOX_TIERS_LESS) : 0;
+        double tierEnd = 0;
+        for (int k = beforeTiers; k < slots.size(); k++) {
+            tierEnd = Math.max(tierEnd, slots.get(k).x() + slots.get(k).length());
+        }
         double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
         List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
                 offeredBundles(crate, types, left, net - mass[0]), length));
@@ -110,7 +120,7 @@ final class CrateFiller {
         double[] used = placing == Placing.SKYLINE
                 ? SkylineLanes.place(lanes, types, side, length, width, height, net, mass, counts, slots, left)
                 : RowGroupLanes.place(lanes, types, side, length, width, floor, height, net, mass, counts, slots);
-        placeBoxes(crate, types, left, net, floor, side, used[0], used[1], mass, counts, slots);
+        placeBoxes(crate, types, left, net, floor, tierEnd, side, used[0], used[1], mass, counts, slots);
         List<CrateLayout.Slot> standing = Support.settle(slots, types, width);
         int[] kept = new int[types.size()];
         double keptMass = 0;
@@ -163,7 +173,7 @@ final class CrateFiller {
 
     /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
     private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
-                                     int[] counts, List<CrateLayout.Slot> slots) {
+                                     int[] counts, List<CrateLayout.Slot> slots, boolean less) {
         List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
         int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
         ItemType box = boxes.get(0);
@@ -172,6 +182,9 @@ final class CrateFiller {
         while ((tiers + 1) * tier <= crate.innerHeightMm() + EPS
                 && BoxGrid.capacity(crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, box) < wanted) {
             tiers++;
+        }
+        if (less) {
+            tiers = Math.max(1, tiers - 1);
         }
         int before = slots.size();
         BoxGrid.fill(0, 0, 0, crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, boxes, left, net, mass,
@@ -216,9 +229,19 @@ final class CrateFiller {
         return offered;
     }
 
+    /**
+     * Boxes in the regions the lanes leave whole: behind the longest lane (on the floor tiers as far as they
+     * reach, from the crate floor beyond them), then above the top row of lanes.
+     *
+     * @param floor   top of the floor tiers of boxes (0 without)
+     * @param tierEnd how far along the floor tiers reach (0 without)
+     * @param side    width of the column of boxes along the left wall (0 without)
+     * @param endX    end of the longest lane
+     * @param top     top of the highest lane
+     */
     private static void placeBoxes(CrateType crate, List<ItemType> types, int[] left, double net, double floor,
-                                   double side, double endX, double top, double[] mass, int[] counts,
-                                   List<CrateLayout.Slot> slots) {
+                                   double tierEnd, double side, double endX, double top, double[] mass,
+                                   int[] counts, List<CrateLayout.Slot> slots) {
         List<ItemType> boxes = types.stream()
                 .filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
         if (boxes.isEmpty()) {
@@ -227,9 +250,16 @@ final class CrateFiller {
         double length = crate.innerLengthMm();
         double width = crate.innerWidthMm();
         double height = crate.innerHeightMm();
-        // the end of the crate behind the longest lane, full width, from the floor tiers up
-        BoxGrid.fill(endX, side, floor, length - endX, width - side, height - floor, boxes, left, net, mass, counts,
-                slots);
+        // the end of the crate behind the longest lane, full width: on the floor tiers as far as they reach, then
+        // from the crate floor
+        double beyond = Math.max(endX, tierEnd);
+        if (floor > 0 && beyond > endX) {
+            BoxGrid.fill(endX, side, floor, beyond - endX, width - side, height - floor, boxes, left, net, mass,
+                    counts, slots);
+        }
+        double base = floor > 0 && tierEnd <= beyond ? 0 : floor;
+        BoxGrid.fill(beyond, side, base, length - beyond, width - side, height - base, boxes, left, net, mass,
+                counts, slots);
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
             BoxGrid.fill(0, side, top, endX, width - side, height - top, boxes, left, net, mass, counts, slots);
