@@ -34,8 +34,15 @@ final class BoxGrid {
         static final Plan EMPTY = new Plan(null, false, 0);
     }
 
-    private static Plan plan(double lx, double wy, double hz, double[][] orientations, Map<String, Plan> memo) {
-        String key = Math.round(lx * 1000) + ":" + Math.round(wy * 1000) + ":" + Math.round(hz * 1000);
+    /**
+     * A region as the memo's key, by its exact sizes: regions a hair apart may hold different counts
+     * ({@link RowPattern#floor} has a tolerance), and {@link #fill} must follow the plan made for its own region.
+     */
+    private record Region(double lx, double wy, double hz) {
+    }
+
+    private static Plan plan(double lx, double wy, double hz, double[][] orientations, Map<Region, Plan> memo) {
+        Region key = new Region(lx, wy, hz);
         Plan known = memo.get(key);
         if (known != null) {
             return known;
@@ -91,7 +98,7 @@ final class BoxGrid {
 
     /** Returns false once no box can be placed any more (none left, or none whose mass fits). */
     private static boolean fill(double x0, double y0, double z0, double lx, double wy, double hz,
-                                double[][] orientations, Map<String, Plan> memo, List<ItemType> boxes, int[] left,
+                                double[][] orientations, Map<Region, Plan> memo, List<ItemType> boxes, int[] left,
                                 double net, double[] mass, int[] counts, List<CrateLayout.Slot> slots) {
         Plan plan = plan(lx, wy, hz, orientations, memo);
         if (plan.count() == 0) {

@@ -61,6 +61,29 @@ class BoxGridTest {
     }
 
     @Test
+    @DisplayName("a region a hair short of whole boxes (1199.9996 mm long) fills as counted: regions 0.0004 mm apart"
+            + " that hold different counts do not share a plan (it recursed without end)")
+    void hairShortRegion() {
+        // 1199.9996 / 300 falls short of 4 by more than the counting tolerance while 1200 does not, so a plan made
+        // for 300 mm must not be followed in 299.9996 mm
+        ItemType b = box(0, 20, 100);
+        List<CrateLayout.Slot> slots = new ArrayList<>();
+        BoxGrid.fill(0, 0, 0, 1199.9996, 900, 600, List.of(b), new int[] {100}, 10_000, new double[] {0},
+                new int[1], slots);
+        assertThat(slots).hasSize((int) BoxGrid.capacity(1199.9996, 900, 600, b)).isNotEmpty();
+        for (CrateLayout.Slot s : slots) {
+            assertThat(s.x() + s.length()).isLessThanOrEqualTo(1199.9996 + 1e-3);
+            assertThat(s.y() + s.width()).isLessThanOrEqualTo(900 + EPS);
+            assertThat(s.z() + s.height()).isLessThanOrEqualTo(600 + EPS);
+        }
+        for (int i = 0; i < slots.size(); i++) {
+            for (int j = i + 1; j < slots.size(); j++) {
+                assertThat(overlap(slots.get(i), slots.get(j))).as("boxes %d and %d", i, j).isFalse();
+            }
+        }
+    }
+
+    @Test
     @DisplayName("the crate's net capacity stops the filling; lighter box types still go in while they fit")
     void massLimit() {
         ItemType heavy = box(0, 24, 10);
