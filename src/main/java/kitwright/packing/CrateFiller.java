@@ -171,13 +171,19 @@ final class CrateFiller {
         return strip;
     }
 
-    /** Tiers of boxes on the crate floor, as few as hold every box on offer; returns their height. */
+    /**
+     * Tiers of boxes on the crate floor, as few as hold every box on offer, or one fewer ({@code less}); none when
+     * the box's smallest side is taller than the crate. Returns their height.
+     */
     private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
                                      int[] counts, List<CrateLayout.Slot> slots, boolean less) {
         List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
         int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
         ItemType box = boxes.get(0);
         double tier = Math.min(box.lengthMm(), Math.min(box.widthMm(), box.heightMm()));
+        if (tier > crate.innerHeightMm() + EPS) {
+            return 0;
+        }
         int tiers = 1;
         while ((tiers + 1) * tier <= crate.innerHeightMm() + EPS
                 && BoxGrid.capacity(crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, box) < wanted) {

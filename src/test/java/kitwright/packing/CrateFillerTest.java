@@ -37,4 +37,19 @@ class CrateFillerTest {
         assertThat(all.slots().stream().filter(s -> s.itemType() == 0))
                 .allSatisfy(s -> assertThat(s.z()).isIn(300.0, 400.0));
     }
+
+    @Test
+    @DisplayName("a crate lower than the joint box's smallest side (250 < 300 mm) takes no box in any layout; the"
+            + " boxes-first layouts put a 300 mm tier into it")
+    void boxTallerThanTheCrate() {
+        CrateType crate = crate("low", 1600, 800, 250, 50, 5000, 100.0);
+        List<ItemType> types = List.of(new ItemType(0, ItemKind.BUNDLE, 1200, 100, 100, 5, 4),
+                new ItemType(1, ItemKind.BOX, 600, 400, 300, 10, 6));
+        List<CrateLayout> layouts = new CrateFiller().fills(0, crate, types, new int[] {4, 6});
+        assertThat(layouts).isNotEmpty().allSatisfy(l -> {
+            assertThat(l.counts()[1]).isZero();
+            assertThat(l.slots()).allSatisfy(s -> assertThat(s.z() + s.height()).isLessThanOrEqualTo(250 + EPS));
+        });
+        assertThat(layouts).anySatisfy(l -> assertThat(l.counts()).containsExactly(4, 0));
+    }
 }
