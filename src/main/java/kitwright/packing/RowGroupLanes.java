@@ -42,9 +42,10 @@ final class RowGroupLanes {
                 continue;
             }
             RowGroup.Cell cell = null;
-            if (current != null && current.hasRoomInOpenRow()) {
+            boolean fitsGroup = current != null && d <= current.d + EPS;
+            if (fitsGroup && current.hasRoomInOpenRow()) {
                 cell = current.next();
-            } else if (current != null && d >= CrateFiller.MERGE * current.d - EPS && current.canOpenRow()) {
+            } else if (fitsGroup && d >= CrateFiller.MERGE * current.d - EPS && current.canOpenRow()) {
                 cell = current.next();
             } else {
                 cell = takeFree(free, d);
@@ -77,8 +78,11 @@ final class RowGroupLanes {
                 CrateLayout.Slot slot = new CrateLayout.Slot(t.index(), x, y0 + cell.y() - r, z - r, t.lengthMm(),
                         t.diameterMm(), t.diameterMm());
                 if (slot.z() > Support.TOUCH && !Support.supported(slot, slots, types, crateWidth)) {
-                    requeue(lanes, k, new LaneBuilder.Lane(t.diameterMm(),
-                            List.copyOf(items.subList(i, items.size()))), length, requeued);
+                    // the rest's cell is its widest bundle: in a lane joined from two (see requeue) a wider
+                    // bundle may follow a thinner one
+                    List<ItemType> rest = List.copyOf(items.subList(i, items.size()));
+                    requeue(lanes, k, new LaneBuilder.Lane(rest.stream().mapToDouble(ItemType::diameterMm).max()
+                            .orElseThrow(), rest), length, requeued);
                     break;
                 }
                 mass[0] += t.massKg();

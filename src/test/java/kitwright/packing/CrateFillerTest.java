@@ -52,4 +52,42 @@ class CrateFillerTest {
         });
         assertThat(layouts).anySatisfy(l -> assertThat(l.counts()).containsExactly(4, 0));
     }
+
+    @Test
+    @DisplayName("a lane cut short and joined to another keeps the cell of its widest bundle: no 60.3 mm bundle in"
+            + " a 42.4 mm cell, no two bundles overlap (a case found by a random probe, sizes rounded)")
+    void joinedLaneKeepsItsWidestCell() {
+        // row groups cut lanes short where the rows below do not bear them and join the rests; a rest that began
+        // with a thin far-end bundle (33.7 mm) took its cell from it and put the 60.3 mm bundles after it into a
+        // 42.4 mm row, 0.2 mm into the bundle under them
+        CrateType crate = crate("c", 6200, 950, 750, 60, 3273, 100.0);
+        double[][] bundles = {{2600, 42.4, 32}, {300, 60.3, 27}, {2000, 76.1, 53}, {2200, 114.3, 47},
+            {2710, 60.3, 4}, {710, 33.7, 20}};
+        int[] offer = {2, 3, 19, 16, 31, 15};
+        List<ItemType> types = new java.util.ArrayList<>();
+        for (int i = 0; i < bundles.length; i++) {
+            types.add(new ItemType(i, ItemKind.BUNDLE, bundles[i][0], bundles[i][1], bundles[i][1], bundles[i][2],
+                    offer[i]));
+        }
+        for (CrateLayout layout : new CrateFiller().fills(0, crate, types, offer)) {
+            List<CrateLayout.Slot> slots = layout.slots();
+            for (int i = 0; i < slots.size(); i++) {
+                for (int j = i + 1; j < slots.size(); j++) {
+                    assertThat(circlesOverlap(slots.get(i), slots.get(j))).as("%s and %s", slots.get(i),
+                            slots.get(j)).isFalse();
+                }
+            }
+            assertThat(Support.holds(slots, types, 950)).isTrue();
+        }
+    }
+
+    /** Two bundles whose lengths overlap and whose circles are closer than the sum of their radii. */
+    private static boolean circlesOverlap(CrateLayout.Slot a, CrateLayout.Slot b) {
+        if (a.x() >= b.x() + b.length() - EPS || b.x() >= a.x() + a.length() - EPS) {
+            return false;
+        }
+        double dy = (a.y() + a.width() / 2) - (b.y() + b.width() / 2);
+        double dz = (a.z() + a.height() / 2) - (b.z() + b.height() / 2);
+        return Math.hypot(dy, dz) < (a.width() + b.width()) / 2 - EPS;
+    }
 }
