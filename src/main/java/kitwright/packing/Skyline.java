@@ -40,9 +40,10 @@ final class Skyline {
     }
 
     /**
-     * The lowest (then leftmost) spot at a segment's left end where a row {@code across} wide and {@code up} high
-     * fits between the walls and under the lid, borne at least {@code first} along; of those that bear it
-     * {@code whole} along, else the one that bears most. Null when there is none.
+     * A spot at a segment's left end where a row {@code across} wide and {@code up} high fits between the walls and
+     * under the lid, borne at least {@code first} along: the lowest (then leftmost) of those that bear it
+     * {@code whole} along; when none does, the lowest, then the one that bears most, then the leftmost. Null when
+     * there is none.
      */
     Spot bestSpot(double wall, double across, double up, double height, double first, double whole) {
         Spot best = null;

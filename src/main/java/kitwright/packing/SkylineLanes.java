@@ -22,9 +22,10 @@ final class SkylineLanes {
 
     /**
      * Places the lanes between y0 and the crate's inner width from the floor up, then joint boxes from
-     * {@code left} (taken from it as they go in) in rows along the crate on the skyline, upright, each where it
-     * rests lowest and on items under its centre and half its footprint ({@link Support}); returns {end of the
-     * longest lane or row, top of the highest}. Same contract as {@link RowGroupLanes#place}.
+     * {@code left} (taken from it as they go in) in rows along the crate on the skyline, upright or on their side
+     * ({@link SkylineBoxes}), each where it rests lowest and on items under its centre and half its footprint
+     * ({@link Support}); returns {end of the longest lane or row, top of the highest}. Same contract as
+     * {@link RowGroupLanes#place}.
      */
     static double[] place(List<LaneBuilder.Lane> sorted, List<ItemType> types, double y0, double length,
                           double crateWidth, double height, double net, double[] mass, int[] counts,
