@@ -10,9 +10,9 @@ import java.util.Map;
  * it, the side slab beside it and the top slab on it (over the block only, so that what goes there rests on the
  * block). The orientation and the order of the end and side cuts are the ones that hold the most boxes over the
  * whole recursion (a staged guillotine cutting of the region, Gilmore &amp; Gomory 1965 for the two-dimensional
- * case); upright orientations are tried first so that ties keep boxes the right way up. In 6300 × 1000 × 800 mm,
- * 600 × 400 × 300 mm boxes go 10 × 3 × 2 = 60 in one grid and 63 with the end slab filled. Cells are filled block by
- * block, layer by layer from the bottom, each with the first box type still available whose mass fits the crate.
+ * case); upright orientations are tried first so that ties keep boxes the right way up. In 6300 × 1000 × 800
+ * mm, 600 × 400 × 300 mm boxes go 10 × 3 × 2 = 60 in one grid and 63 with the end slab filled. Cells are filled
+ * block by block, layer by layer from the bottom, each with the first box type still available whose mass fits the crate.
  * All box types share one size (the kit's joint box); they differ in mass only.
  */
 final class BoxGrid {
@@ -21,7 +21,7 @@ final class BoxGrid {
     private BoxGrid() {
     }
 
-    /** Most boxes of this size a region holds by guillotine blocks. */
+    /** How many boxes of this size the blocks and slabs above place in a region (not every guillotine packing). */
     static long capacity(double lx, double wy, double hz, ItemType box) {
         return plan(lx, wy, hz, orientations(box), new HashMap<>()).count();
     }

@@ -20,11 +20,12 @@ import kitwright.model.CrateType;
  *   ({@link SkylineLanes}). Either way a lane above the floor goes only as far along as what is under it bears
  *   it, the rest becoming a lane of its own, and a lane that would pass the crate's net capacity (max gross -
  *   tare) is cut short.</li>
- *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, in the
- *   box orientation that holds most (on the skyline they first go on top of the lanes in rows). When both
- *   bundles and boxes are on offer, three more layouts put the boxes first: in as few full tiers on the floor as
- *   hold them, or one tier fewer (the rest go behind and above the lanes), with the lanes above; or in stacks in the narrowest strip along the left wall that holds them,
- *   with the lanes from the floor beside it. The caller chooses.</li>
+ *   <li>Joint boxes fill the end of the crate behind the longest lane, then the space above the top row, by
+ *   guillotine blocks ({@link BoxGrid}; on the skyline they first go on top of the lanes in rows,
+ *   {@link SkylineBoxes}). When both bundles and boxes are on offer, three more layouts put the boxes first: in
+ *   as few full tiers on the floor as hold them, or one tier fewer (the rest go behind and above the lanes), with
+ *   the lanes above; or in stacks in the narrowest strip along the left wall that holds them, with the lanes
+ *   from the floor beside it. The caller chooses.</li>
  *   <li>{@link Support#settle} keeps, from the floor up, only the items that rest on items below.</li>
  * </ol>
  * Guarantee: every item lies inside the inner walls, circles of bundles that share a stretch of length do not
@@ -54,7 +55,10 @@ final class CrateFiller {
         }
         if (boxes && bundles) {
             result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS, Placing.ROW_GROUPS));
-            result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS_LESS, Placing.ROW_GROUPS));
+            if (tiers(crate, types, available) > 1) {
+                result.add(build(crateIndex, crate, types, available, Start.BOX_TIERS_ONE_FEWER,
+                        Placing.ROW_GROUPS));
+            }
             result.add(build(crateIndex, crate, types, available, Start.BOX_COLUMN, Placing.ROW_GROUPS));
         }
         return List.copyOf(result);
@@ -82,7 +86,7 @@ final class CrateFiller {
      * What goes in first: lanes from the floor; boxes in as few floor tiers as hold them all, or in one tier fewer
      * (the rest behind and above the lanes); boxes in a column along one side wall.
      */
-    private enum Start { LANES, BOX_TIERS, BOX_TIERS_LESS, BOX_COLUMN }
+    private enum Start { LANES, BOX_TIERS, BOX_TIERS_ONE_FEWER, BOX_COLUMN }
 
     /**
      * How lanes go into the cross-section: in row groups of one diameter, square or staggered, thinner lanes taking
@@ -101,13 +105,10 @@ final class CrateFiller {
         List<CrateLayout.Slot> slots = new ArrayList<>();
         double[] mass = {0};
         int[] left = available.clone();
-        int beforeTiers = slots.size();
-        double floor = start == Start.BOX_TIERS || start == Start.BOX_TIERS_LESS
-                ? floorTiers(crate, types, left, net, mass, counts, slots, start == Start.BOX_TIERS_LESS) : 0;
-        double tierEnd = 0;
-        for (int k = beforeTiers; k < slots.size(); k++) {
-            tierEnd = Math.max(tierEnd, slots.get(k).x() + slots.get(k).length());
-        }
+        double floor = start == Start.BOX_TIERS || start == Start.BOX_TIERS_ONE_FEWER
+                ? floorTiers(crate, types, left, net, mass, counts, slots, start == Start.BOX_TIERS_ONE_FEWER) : 0;
+        // how far along the floor tiers reach (the only slots so far)
+        double tierEnd = slots.stream().mapToDouble(s -> s.x() + s.length()).max().orElse(0);
         double side = start == Start.BOX_COLUMN ? boxColumn(crate, types, left, net, mass, counts, slots) : 0;
         List<LaneBuilder.Lane> lanes = new ArrayList<>(new LaneBuilder().build(
                 offeredBundles(crate, types, left, net - mass[0]), length));
@@ -172,11 +173,10 @@ final class CrateFiller {
     }
 
     /**
-     * Tiers of boxes on the crate floor, as few as hold every box on offer, or one fewer ({@code less}); none when
-     * the box's smallest side is taller than the crate. Returns their height.
+     * How many tiers of boxes, each as high as the box's smallest side, the crate floor needs for every box on
+     * offer (as many as the crate's height allows); 0 when the box's smallest side is taller than the crate.
      */
-    private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
-                                     int[] counts, List<CrateLayout.Slot> slots, boolean less) {
+    private static int tiers(CrateType crate, List<ItemType> types, int[] left) {
         List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
         int wanted = boxes.stream().mapToInt(t -> left[t.index()]).sum();
         ItemType box = boxes.get(0);
@@ -189,7 +189,23 @@ final class CrateFiller {
                 && BoxGrid.capacity(crate.innerLengthMm(), crate.innerWidthMm(), tiers * tier, box) < wanted) {
             tiers++;
         }
-        if (less) {
+        return tiers;
+    }
+
+    /**
+     * Tiers of boxes on the crate floor, as few as hold every box on offer ({@link #tiers}), or one fewer
+     * ({@code oneFewer}); none when the box's smallest side is taller than the crate. Returns their height.
+     */
+    private static double floorTiers(CrateType crate, List<ItemType> types, int[] left, double net, double[] mass,
+                                     int[] counts, List<CrateLayout.Slot> slots, boolean oneFewer) {
+        List<ItemType> boxes = types.stream().filter(t -> t.kind() == ItemKind.BOX && left[t.index()] > 0).toList();
+        ItemType box = boxes.get(0);
+        double tier = Math.min(box.lengthMm(), Math.min(box.widthMm(), box.heightMm()));
+        int tiers = tiers(crate, types, left);
+        if (tiers == 0) {
+            return 0;
+        }
+        if (oneFewer) {
             tiers = Math.max(1, tiers - 1);
         }
         int before = slots.size();
@@ -263,9 +279,7 @@ final class CrateFiller {
             BoxGrid.fill(endX, side, floor, beyond - endX, width - side, height - floor, boxes, left, net, mass,
                     counts, slots);
         }
-        double base = floor > 0 && tierEnd <= beyond ? 0 : floor;
-        BoxGrid.fill(beyond, side, base, length - beyond, width - side, height - base, boxes, left, net, mass,
-                counts, slots);
+        BoxGrid.fill(beyond, side, 0, length - beyond, width - side, height, boxes, left, net, mass, counts, slots);
         // above the top row of lanes, as long as the longest lane
         if (endX > 0) {
             BoxGrid.fill(0, side, top, endX, width - side, height - top, boxes, left, net, mass, counts, slots);

@@ -6,13 +6,14 @@ import java.util.List;
 /**
  * Lanes into a crate's cross-section on a {@link Skyline}: the top of what is placed so far, as segments across the
  * width, each with its height and the length from the crate's front end over which it bears (its lane's
- * full-diameter length; the floor bears the crate length). Each lane, in the order given (the caller puts the lanes that bear
- * longest first), goes at the left end of the segment where it comes to rest lowest (then leftmost); it rests on
- * the highest segments under its width, and it may go only as far along as the segments under its axis band bear
- * ({@link Support}): what goes further is cut off and placed later as a lane of its own. Then joint boxes go on
- * top in the same way ({@link SkylineBoxes}). Square rows only, but every row starts on what is really there, so lanes of several
- * diameters and lengths stack without the holes a fixed grid of rows leaves (the skyline of 2D strip packing,
- * Burke, Kendall &amp; Whitwell 2004, here across the crate with bearing lengths added).
+ * full-diameter length; the floor bears the crate length). Each lane, in the order given (the caller puts the
+ * lanes that bear longest first), goes at the left end of the segment where it comes to rest lowest (then
+ * leftmost); it rests on the highest segments under its width, and it may go only as far along as the segments
+ * under its axis band bear ({@link Support}): what goes further is cut off and placed later as a lane of its own.
+ * Then joint boxes go on top in the same way ({@link SkylineBoxes}). Square rows only, but every row starts on
+ * what is really there, so lanes of several diameters and lengths stack without the holes a fixed grid of rows
+ * leaves (the skyline of 2D strip packing, Burke, Kendall &amp; Whitwell 2004, here across the crate with bearing
+ * lengths added).
  */
 final class SkylineLanes {
     private static final double EPS = 1e-6;
