@@ -24,7 +24,7 @@ import kitwright.nesting.Bundle;
 public final class LaneCratePacker implements CratePacker {
     private static final double EPS = 1e-6;
     /** Crate fillings the elimination of crates may try ({@link CrateElimination}). */
-    private static final int ELIMINATION_BUDGET = 200;
+    private static final int ELIMINATION_BUDGET = 400;
 
     /**
      * Solver limits.
