@@ -5,6 +5,7 @@ import java.nio.file.Path;
 /**
  * One thing wrong with the input, printed as {@code FILE:LINE: COLUMN: what is wrong (what was expected)}.
  * LINE counts a CSV header as line 1; 0 means the whole file. COLUMN is a CSV column or a kit.json key, or empty.
+ * A problem with a command-line option has no file and prints as {@code command line: --option: what is wrong}.
  * Control characters quoted from the input are printed escaped ({@code \n}, {@code \t}), so each problem is one line.
  */
 public record Problem(Path file, int line, String column, String message) {
@@ -15,7 +16,7 @@ public record Problem(Path file, int line, String column, String message) {
 
     @Override
     public String toString() {
-        StringBuilder sb = new StringBuilder(file == null ? "(arguments)" : file.toString());
+        StringBuilder sb = new StringBuilder(file == null ? "command line" : file.toString());
         if (line > 0) {
             sb.append(':').append(line);
         }

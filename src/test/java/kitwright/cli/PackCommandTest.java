@@ -72,7 +72,7 @@ class PackCommandTest {
         assertThat(run.out()).contains("packed for structure 'lighting-mast'");
         Run bad = run("pack", "sample-kits/cinema-6", "--for", "bridge");
         assertThat(bad.code()).isEqualTo(2);
-        assertThat(bad.err()).contains("--for: structure 'bridge' is not in structures.csv")
+        assertThat(bad.err()).contains("command line: --for: structure 'bridge' is not in structures.csv")
                 .contains("lighting-mast");
     }
 
