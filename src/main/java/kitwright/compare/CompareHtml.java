@@ -8,6 +8,7 @@ import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import kitwright.report.ShopFormat;
 
 /**
  * Writes {@code compare.html}: a self-contained page (inline CSS and SVG, no script, no network) with one row per
@@ -79,9 +80,12 @@ public final class CompareHtml {
         return c.relativePct() == null ? absolute : absolute + " (" + signed(c.relativePct(), 1) + " %)";
     }
 
-    /** A number with thousands separators and fixed decimals, and the unit after a space when there is one. */
+    /**
+     * A number with fixed decimals and its digits grouped in threes by a narrow no-break space, as in the plan's
+     * report ({@link ShopFormat}), and the unit after a space when there is one.
+     */
     static String format(double value, int decimals, String unit) {
-        String number = String.format(Locale.ROOT, "%,." + decimals + "f", value);
+        String number = ShopFormat.fixed(value, decimals);
         return unit.isEmpty() ? number : number + " " + unit;
     }
 

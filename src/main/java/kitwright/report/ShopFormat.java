@@ -50,6 +50,11 @@ public final class ShopFormat {
         return decimal(fraction * 100.0, 1, true);
     }
 
+    /** A number with exactly {@code places} decimals and grouped digits: (5667.654, 2) gives "5 667.65". */
+    public static String fixed(double value, int places) {
+        return decimal(value, places, true);
+    }
+
     /** A plain count with grouped digits: 12000 gives "12 000". */
     public static String count(long n) {
         return decimal(n, 0, true);

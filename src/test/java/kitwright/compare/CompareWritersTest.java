@@ -87,7 +87,7 @@ class CompareWritersTest {
         assertThat(count(html, "<th scope=\"col\" class=\"option\">")).isEqualTo(3);
         String cost = rowOf(html, "cost");
         assertThat(cellsOf(cost)).hasSize(3);
-        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4,800.00<span class=\"badge best\">best");
+        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4\u202F800.00<span class=\"badge best\">best");
         assertThat(cellsOf(cost).get(0)).contains("+400.00 (+8.3 %)").doesNotContain("badge");
         assertThat(cellsOf(cost).get(2)).contains("+300.50 (+6.3 %)");
         String reuse = rowOf(html, "reuseRatio");
