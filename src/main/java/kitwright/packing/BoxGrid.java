@@ -12,8 +12,8 @@ import java.util.Map;
  * whole recursion (a staged guillotine cutting of the region, Gilmore &amp; Gomory 1965 for the two-dimensional
  * case); upright orientations are tried first so that ties keep boxes the right way up. In 6300 × 1000 × 800
  * mm, 600 × 400 × 300 mm boxes go 10 × 3 × 2 = 60 in one grid and 63 with the end slab filled. Cells are filled
- * block by block, layer by layer from the bottom, each with the first box type still available whose mass fits the crate.
- * All box types share one size (the kit's joint box); they differ in mass only.
+ * block by block, layer by layer from the bottom, each with the first box type still available whose mass fits
+ * the crate. All box types share one size (the kit's joint box); they differ in mass only.
  */
 final class BoxGrid {
     private static final double EPS = 1e-6;
