@@ -6,7 +6,6 @@ import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.stream.Stream;
 import kitwright.io.KitFiles;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
@@ -23,13 +22,13 @@ class PlanCommandTest {
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
-        assertThat(entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
+        assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
                 "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
                 "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);
         assertThat(run.out()).startsWith("Kit cinema-6: ").contains("\nCrates: ", "\nTrips: ");
-        assertThat(entries(out.getParent())).as("no temporary folder left beside").containsExactly("cinema-6");
+        assertThat(KitFiles.entries(out.getParent())).as("no temporary folder left beside").containsExactly("cinema-6");
         JsonNode summary = PrettyJson.mapper().readTree(out.resolve(PlanCommand.SUMMARY_JSON).toFile());
         assertThat(summary.get("kit").asText()).isEqualTo("cinema-6");
         assertThat(summary.get("marks").asInt()).isEqualTo(6);
@@ -51,7 +50,7 @@ class PlanCommandTest {
         assertThat(Files.readString(second.resolve("summary.json"))).isEqualTo(text);
         assertThat(text).startsWith("{\n  \"kit\": \"kit\",\n  \"description\": \"\",\n  \"marks\": 1,\n")
                 .contains("\n  \"spares\": []\n}").endsWith("}\n").doesNotContain("\r");
-        List<String> keys = iterate(PrettyJson.mapper().readTree(text).fieldNames());
+        List<String> keys = KitFiles.listOf(PrettyJson.mapper().readTree(text).fieldNames());
         assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
                 "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares");
     }
@@ -73,7 +72,7 @@ class PlanCommandTest {
         assertThat(intoFresh.err()).contains("bars.csv:2: quantity: -4 is negative");
         assertThat(fresh).doesNotExist();
         assertThat(previous.resolve("summary.json")).hasContent(before.strip());
-        assertThat(entries(dir)).containsExactly("kit", "previous");
+        assertThat(KitFiles.entries(dir)).containsExactly("kit", "previous");
     }
 
     @Test
@@ -85,7 +84,7 @@ class PlanCommandTest {
 
         assertThat(run.exitCode()).isEqualTo(ExitCode.INVALID_INPUT.code());
         assertThat(run.err()).contains("the folder exists and was not written by kitwright");
-        assertThat(entries(mine)).containsExactly("notes.txt");
+        assertThat(KitFiles.entries(mine)).containsExactly("notes.txt");
     }
 
     @Test
@@ -118,17 +117,5 @@ class PlanCommandTest {
                 .doesNotContain("INFEASIBLE, gap");
         assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle B001 (1000 mm long,");
         assertThat(out.resolve("cut-list.csv")).exists();
-    }
-
-    private static List<String> entries(Path dir) throws Exception {
-        try (Stream<Path> list = Files.list(dir)) {
-            return list.map(p -> p.getFileName().toString()).sorted().toList();
-        }
-    }
-
-    private static <T> List<T> iterate(java.util.Iterator<T> iterator) {
-        List<T> list = new java.util.ArrayList<>();
-        iterator.forEachRemaining(list::add);
-        return list;
     }
 }

@@ -41,4 +41,18 @@ public final class KitFiles {
         write(dir, "bars.csv", bars);
         return dir;
     }
+
+    /** The names of the entries of a folder, sorted. */
+    public static java.util.List<String> entries(Path dir) throws IOException {
+        try (java.util.stream.Stream<Path> list = Files.list(dir)) {
+            return list.map(p -> p.getFileName().toString()).sorted().toList();
+        }
+    }
+
+    /** What an iterator gives (JSON field names, say), as a list. */
+    public static <T> java.util.List<T> listOf(java.util.Iterator<T> iterator) {
+        java.util.List<T> list = new java.util.ArrayList<>();
+        iterator.forEachRemaining(list::add);
+        return list;
+    }
 }

@@ -76,7 +76,7 @@ class PlannerTest {
         assertThat(result.stageSeconds().keySet()).containsExactlyElementsOf(Planner.STAGES);
 
         JsonNode plan = PrettyJson.mapper().readTree(files.get("plan.json"));
-        assertThat(iterate(plan.fieldNames())).containsExactly("kit", "date", "summary", "cutting", "nesting",
+        assertThat(KitFiles.listOf(plan.fieldNames())).containsExactly("kit", "date", "summary", "cutting", "nesting",
                 "crates", "loads", "spares", "figures");
         assertThat(plan.get("date").asText()).isEqualTo("2026-12-01");
         assertThat(plan.get("nesting").get("bundles")).hasSize(nesting.bundles().size());
@@ -97,8 +97,8 @@ class PlannerTest {
         assertThat(two.exitCode()).as(two.err()).isEqualTo(ExitCode.OK.code());
         Set<String> expected = new LinkedHashSet<>(CHAIN_FILES);
         expected.addAll(FOLDER_EXTRAS);
-        assertThat(names(first)).containsExactlyInAnyOrderElementsOf(expected);
-        assertThat(names(second)).containsExactlyInAnyOrderElementsOf(expected);
+        assertThat(KitFiles.entries(first)).containsExactlyInAnyOrderElementsOf(expected);
+        assertThat(KitFiles.entries(second)).containsExactlyInAnyOrderElementsOf(expected);
         for (String name : CHAIN_FILES) {
             byte[] a = Files.readAllBytes(first.resolve(name));
             byte[] b = Files.readAllBytes(second.resolve(name));
@@ -106,7 +106,7 @@ class PlannerTest {
             assertThat(b).as(name + " the same in both runs").isEqualTo(a);
         }
         JsonNode timing = PrettyJson.mapper().readTree(first.resolve("timing.json").toFile());
-        assertThat(iterate(timing.get("stageSeconds").fieldNames())).containsExactlyElementsOf(Planner.STAGES);
+        assertThat(KitFiles.listOf(timing.get("stageSeconds").fieldNames())).containsExactlyElementsOf(Planner.STAGES);
         assertThat(Files.readString(first.resolve("report.html"), StandardCharsets.UTF_8))
                 .contains("2026-12-01").doesNotContain("<script");
     }
@@ -138,7 +138,7 @@ class PlannerTest {
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.NO_FEASIBLE_PLAN.code());
         Set<String> expected = new LinkedHashSet<>(CHAIN_FILES);
         expected.addAll(FOLDER_EXTRAS);
-        assertThat(names(out)).containsExactlyInAnyOrderElementsOf(expected);
+        assertThat(KitFiles.entries(out)).containsExactlyInAnyOrderElementsOf(expected);
         JsonNode sections = PrettyJson.mapper().readTree(out.resolve("plan.json").toFile()).get("cutting")
                 .get("sections");
         JsonNode e = sections.get(1);
@@ -181,17 +181,5 @@ class PlannerTest {
                 .as("legend row, bundle drawing bars and bundle tables").isGreaterThanOrEqualTo(3);
         assertThat(files.get("packing-lists.csv")).contains("\"<b>&\"\" x 6");
         assertThat(files.get("nests.csv")).contains("\"<b>&\"\"");
-    }
-
-    private static List<String> names(Path dir) throws Exception {
-        try (Stream<Path> list = Files.list(dir)) {
-            return list.map(p -> p.getFileName().toString()).sorted().toList();
-        }
-    }
-
-    private static <T> List<T> iterate(java.util.Iterator<T> iterator) {
-        List<T> list = new java.util.ArrayList<>();
-        iterator.forEachRemaining(list::add);
-        return list;
     }
 }
