@@ -1,6 +1,5 @@
 package kitwright.nesting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
@@ -9,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The linear-programming relaxation of the nesting pattern model, solved by column generation (GLOP master,
@@ -63,7 +63,7 @@ final class PatternColumnGeneration implements AutoCloseable {
     private int iterations;
 
     PatternColumnGeneration(List<TubeType> types, PatternPricing pricing) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         this.types = types;
         this.pricing = pricing;
         int n = types.size();

@@ -1,6 +1,5 @@
 package kitwright.nesting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -8,6 +7,7 @@ import com.google.ortools.sat.IntVar;
 import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import java.util.List;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The integer phase: how many hosts of each type use each known pattern, solved by CP-SAT over the pattern columns
@@ -38,7 +38,7 @@ final class PatternIntegerPhase {
     /** Returns null when CP-SAT found no solution within its limits. */
     static Result solve(List<TubeType> types, List<Pattern> columns, double[] hint, double deterministicSeconds,
                         double wallSeconds) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         int n = types.size();
         long tubes = types.stream().mapToLong(TubeType::count).sum();
         long big = 1000 * (tubes + 1);
