@@ -13,7 +13,7 @@ import kitwright.natives.SolverLibraries;
 
 /**
  * The fleet-cost lower bound of the issue: the linear relaxation over vehicle types of "enough payload, floor area
- * and load volume" (DOMAIN.md section 4; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
+ * and load volume" (src/docs/sources.md; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
  * <pre>
  *   minimise  sum_v cost_v y_v
  *   subject to, for every set F of vehicle types that is the set some crate fits (and F = all types):

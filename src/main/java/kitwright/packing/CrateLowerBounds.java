@@ -9,7 +9,7 @@ import kitwright.model.CrateType;
 import kitwright.natives.SolverLibraries;
 
 /**
- * Lower bounds on the crating of a set of items, from volume and mass alone (DOMAIN.md section 4: "lower bounds
+ * Lower bounds on the crating of a set of items, from volume and mass alone (src/docs/sources.md: "lower bounds
  * that any packing must meet").
  * <ul>
  *   <li>count by volume: ceil(sum of the bundles' cylinder volumes pi/4 d^2 L and the boxes' volumes / the largest

@@ -14,7 +14,7 @@ import org.apache.commons.statistics.distribution.BinomialDistribution;
  *
  * <p><b>Method.</b> A bar survives {@code c} cycles at loss rate {@code p} with probability {@code (1 - p)^c}
  * (each bar is lost at most once), so the losses of a mark of {@code n} bars in service follow
- * Binomial(n, q) with {@code q = 1 - (1 - p)^c}; the expected losses are {@code n q} (DOMAIN.md section 6). The
+ * Binomial(n, q) with {@code q = 1 - (1 - p)^c}; the expected losses are {@code n q} (src/docs/sources.md). The
  * kit's level {@code L} is split over the {@code m} marks that have bars in service as {@code L^(1/m)} per mark:
  * with independent marks the chance that all are covered is the product of the marks' chances, hence at least
  * {@code L} (common practice). A mark's spares are the Binomial quantile: the smallest {@code s} with

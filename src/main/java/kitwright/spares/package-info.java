@@ -2,7 +2,7 @@
  * Service-life spares: how many extra bars of each mark a kit needs so that, with a stated probability, every mark
  * still has enough bars after all its assembly cycles.
  *
- * <p>Model (DOMAIN.md section 6): each bar in service is lost or damaged beyond use at most once over the kit's
+ * <p>Model (src/docs/sources.md): each bar in service is lost or damaged beyond use at most once over the kit's
  * life; with a loss rate {@code p} per bar and cycle and {@code c} cycles a bar is lost with probability
  * {@code q = 1 - (1 - p)^c}, so the losses of a mark of {@code n} bars follow Binomial(n, q). The kit's service level
  * {@code L} (all marks covered) is split over the {@code m} marks as {@code L^(1/m)} each, which is exact when the

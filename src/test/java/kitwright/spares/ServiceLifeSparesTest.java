@@ -49,7 +49,7 @@ class ServiceLifeSparesTest {
     }
 
     @Test
-    @DisplayName("Loss over the kit's life: q = 1 - (1 - p)^c (DOMAIN.md section 6)")
+    @DisplayName("Loss over the kit's life: q = 1 - (1 - p)^c (src/docs/sources.md, Reuse and spares)")
     void lossProbability() {
         assertThat(ServiceLifeSpares.lossProbability(0.02, 10)).isCloseTo(1 - Math.pow(0.98, 10), within(1e-15));
         assertThat(ServiceLifeSpares.lossProbability(0.02, 1)).isCloseTo(0.02, within(1e-15));
