@@ -51,6 +51,22 @@ class TemporaryFilesTest {
     }
 
     @Test
+    @DisplayName("Two runs starting together on an empty cache: both finish, one copy, no unpacking folder left")
+    void twoRunsTogether() throws Exception {
+        Path tmp = folder("tmp");
+        Path cache = folder("cache");
+        Process first = process(tmp, cache, "kitwright.cli.Main", "cut", KIT, "--out", work.resolve("a").toString())
+                .redirectOutput(work.resolve("a.log").toFile()).start();
+        Process second = process(tmp, cache, "kitwright.cli.Main", "cut", KIT, "--out", work.resolve("b").toString())
+                .redirectOutput(work.resolve("b.log").toFile()).start();
+        assertThat(first.waitFor(5, TimeUnit.MINUTES) && second.waitFor(5, TimeUnit.MINUTES)).isTrue();
+        assertThat(first.exitValue()).as("first exit code").isZero();
+        assertThat(second.exitValue()).as("second exit code").isZero();
+        assertThat(entries(tmp)).as("left in the temporary folder").isEmpty();
+        onlyCacheFolder(cache);
+    }
+
+    @Test
     @DisplayName("A run killed while unpacking leaves nothing in java.io.tmpdir; the next run cleans the cache up")
     void killedRunLeavesNothing() throws Exception {
         Path tmp = folder("tmp");
