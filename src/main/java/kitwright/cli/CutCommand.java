@@ -90,8 +90,8 @@ public final class CutCommand implements Callable<Integer> {
     Path json;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write cut-list.csv, order.csv, rack-after.csv and cutting.json into DIR (created, or"
-                    + " replaced when kitwright wrote it before).")
+            description = "Write cut-list.csv, order.csv, rack-pull.csv, rack-after.csv and cutting.json into DIR"
+                    + " (created, or replaced when kitwright wrote it before).")
     Path out;
 
     @Option(names = "--spares-from-offcuts",
@@ -143,7 +143,7 @@ public final class CutCommand implements Callable<Integer> {
         }
         if (out != null) {
             stdout.println("Wrote " + out.resolve(CuttingFiles.CUT_LIST) + ", " + CuttingFiles.ORDER + ", "
-                    + CuttingFiles.RACK_AFTER + ", " + CUTTING_JSON);
+                    + CuttingFiles.RACK_PULL + ", " + CuttingFiles.RACK_AFTER + ", " + CUTTING_JSON);
         }
         stdout.flush();
         boolean infeasible = plan.sections().stream().map(SectionCutPlan::status).anyMatch(Status.INFEASIBLE::equals);

@@ -20,7 +20,8 @@ import kitwright.model.Status;
  * @param reuseRatio     members / bars (higher is better)
  * @param stockPieces    stock pieces cut (mill and rack)
  * @param stockLengthMm  their total length
- * @param cost           price of the stock cut
+ * @param cost           price of the stock cut, mill and rack at their catalog prices (what the cutting minimises)
+ * @param payableCost    price of the mill stock bought, the amount payable (rack offcuts are already paid for)
  * @param offcutPct      offcut length in percent of the stock length cut
  * @param scrapPct       scrap (offcuts shorter than the minimum remnant) in percent
  * @param remnantPct     remnants (offcuts back on the rack) in percent
@@ -34,10 +35,11 @@ import kitwright.model.Status;
  * @param status         the option's overall status: the worst of its stages
  */
 @JsonPropertyOrder({"kit", "marks", "bars", "members", "reuseRatio", "stockPieces", "stockLengthMm", "cost",
-    "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg", "bundles", "crates", "vehicles",
-    "tripCost", "status"})
+    "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg", "bundles", "crates",
+    "vehicles", "tripCost", "status"})
 public record OptionSummary(String kit, int marks, int bars, int members, double reuseRatio, int stockPieces,
-                            double stockLengthMm, Double cost, double offcutPct, double scrapPct, double remnantPct,
+                            double stockLengthMm, Double cost, Double payableCost, double offcutPct, double scrapPct,
+                            double remnantPct,
                             Double kitMassKg, Double boughtMassKg, Double co2eKg, Integer bundles, Integer crates,
                             Integer vehicles, Double tripCost, Status status) {
     public OptionSummary {
@@ -55,7 +57,7 @@ public record OptionSummary(String kit, int marks, int bars, int members, double
     public static OptionSummary of(String kit, KitMetrics metrics, Logistics logistics, Collection<Status> statuses) {
         return new OptionSummary(kit, metrics.marks(), metrics.bars(), metrics.members(),
                 round(metrics.reuseRatio(), 3), metrics.stockPieces(), round(metrics.stockLengthMm(), 1),
-                round(metrics.cost(), 2), round(metrics.offcutPct(), 2), round(metrics.scrapPct(), 2),
+                round(metrics.cost(), 2), round(metrics.payableCost(), 2), round(metrics.offcutPct(), 2), round(metrics.scrapPct(), 2),
                 round(metrics.remnantPct(), 2), round(metrics.kitMassKg(), 1), round(metrics.boughtMassKg(), 1),
                 round(metrics.co2eKg(), 1), logistics.bundles(), logistics.crates(), logistics.vehicles(),
                 round(logistics.tripCost(), 2), worst(statuses));

@@ -12,6 +12,7 @@ import kitwright.model.Material;
 import kitwright.model.Origin;
 import kitwright.model.Section;
 import kitwright.model.StockLength;
+import kitwright.model.StockTerms;
 import kitwright.model.TubeCatalog;
 
 /**
@@ -19,12 +20,15 @@ import kitwright.model.TubeCatalog;
  * optional {@code weld_bead_mm,od_tolerance_mm,wall_tolerance_pct}, one row per section and stock length. A
  * section's material, sizes and tolerances must agree on every row; {@code available} blank means unlimited;
  * {@code origin} is {@code mill} (the default) or {@code rack}, and a rack row must say how many pieces lie there.
+ * The optional buying columns {@code price_basis,currency,grade,standard,supplier} are read by {@link StockTermsColumns}:
+ * the price is turned into a price per piece on its basis here, so every stage adds the same per-piece prices.
  */
 public final class TubeCatalogReader {
     public static final CsvColumns COLUMNS = new CsvColumns(
             List.of("section", "material", "outer_diameter_mm", "wall_mm", "length_mm", "price", "available",
                     "origin"),
-            List.of("weld_bead_mm", "od_tolerance_mm", "wall_tolerance_pct"));
+            List.of("weld_bead_mm", "od_tolerance_mm", "wall_tolerance_pct", "price_basis", "currency", "grade",
+                    "standard", "supplier"));
 
     private TubeCatalogReader() {
     }
@@ -56,6 +60,7 @@ public final class TubeCatalogReader {
         Map<String, Integer> sectionLines = new HashMap<>();
         Map<String, Integer> stockLines = new HashMap<>();
         List<StockLength> stock = new ArrayList<>();
+        StockTermsColumns terms = new StockTermsColumns(materials, materialsFile);
         for (CsvRow row : table.rows()) {
             Section section = section(row);
             Double length = row.length("length_mm", "a stock length in millimetres above 0");
@@ -63,6 +68,7 @@ public final class TubeCatalogReader {
             Integer available = row.whole("available", 0,
                     "how many pieces can be had, a whole number 0 or more, or blank for unlimited");
             Origin origin = origin(row);
+            StockTerms quoted = terms.read(row, price);
             row.requireValues("length_mm");
             if (origin == Origin.RACK && row.blank("available")) {
                 row.problem("available", "a rack row needs a count (expected how many offcuts of this length"
@@ -79,6 +85,13 @@ public final class TubeCatalogReader {
             if (first == null && materials != null) {
                 checkMaterial(row, section.material(), materials, materialsFile);
             }
+            if (!terms.sameCurrency(row, section.name(), quoted)) {
+                continue;
+            }
+            Double perPiece = terms.perPiece(section, length, quoted);
+            if (price != null && perPiece == null) {
+                continue; // a price per kg without a density (reported)
+            }
             String key = section.name() + "\u0000" + length + "\u0000" + origin;
             Integer earlier = stockLines.putIfAbsent(key, row.line());
             if (earlier != null) {
@@ -87,7 +100,7 @@ public final class TubeCatalogReader {
                         + " origin; add up the available pieces instead)");
                 continue;
             }
-            stock.add(new StockLength(section.name(), length, price, available, origin));
+            stock.add(new StockLength(section.name(), length, perPiece, available, origin, quoted));
         }
         return Optional.of(new TubeCatalog(file, sections, stock));
     }

@@ -15,7 +15,10 @@ import java.util.List;
  * @param stockLengthMm    length of all stock pieces cut, mill and rack
  * @param boughtLengthMm   length of the mill pieces bought
  * @param cost             price of the stock cut (mill and rack rows at their catalog price, an unpriced rack row
- *                         at 0), null when a mill row has no price
+ *                         at 0), null when a mill row has no price or the stock used is priced in several
+ *                         currencies: what the cutting stage minimises
+ * @param payableCost      price of the mill stock bought, the amount payable to suppliers (rack offcuts are already
+ *                         paid for), null as for cost
  * @param offcutPct        offcut length / stockLengthMm * 100 (offcut = remnant + scrap; kerf and trim not included)
  * @param scrapPct         scrap offcuts (shorter than minRemnant) / stockLengthMm * 100
  * @param remnantPct       remnant offcuts (back on the rack) / stockLengthMm * 100
@@ -25,7 +28,8 @@ import java.util.List;
  * @param carbon           embodied carbon per material, in the order materials first appear in the catalog
  */
 public record KitMetrics(int marks, int bars, int members, double reuseRatio, int stockPieces, int boughtPieces,
-                         double stockLengthMm, double boughtLengthMm, Double cost, double offcutPct, double scrapPct,
+                         double stockLengthMm, double boughtLengthMm, Double cost, Double payableCost,
+                         double offcutPct, double scrapPct,
                          double remnantPct, Double kitMassKg, Double boughtMassKg, Double co2eKg,
                          List<MaterialCarbon> carbon) {
     public KitMetrics {

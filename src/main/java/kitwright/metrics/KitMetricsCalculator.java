@@ -1,9 +1,12 @@
 package kitwright.metrics;
 
+import java.util.EnumSet;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
@@ -84,6 +87,7 @@ public final class KitMetricsCalculator {
         Double co2e = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::co2eKg).sum() : null;
         return new KitMetrics(kit.bars().size(), bars, members, bars == 0 ? 0 : (double) members / bars,
                 stockPieces, boughtPieces, stockLength, boughtLength, stockCost(kit, plan),
+                stockCost(kit, plan, EnumSet.of(Origin.MILL)),
                 percent(offcut, stockLength), percent(scrap, stockLength), percent(remnant, stockLength),
                 kitMass(kit).orElse(null), boughtMass, co2e, massKnown ? carbon : List.of());
     }
@@ -113,14 +117,26 @@ public final class KitMetricsCalculator {
     }
 
     /**
-     * Price of the stock a plan cuts, mill and rack rows at their catalog price; null when a mill row has no price,
-     * while a rack offcut without a price costs nothing (as the cutting stage and the report count it).
+     * Price of the stock a plan cuts, mill and rack rows at their catalog price per piece; null when a mill row has
+     * no price, while a rack offcut without a price costs nothing (as the cutting stage and the report count it).
+     * Null too when the stock cut is priced in more than one currency: a sum of two currencies means nothing.
      */
     public static Double stockCost(Kit kit, CutPlan plan) {
+        return stockCost(kit, plan, EnumSet.allOf(Origin.class));
+    }
+
+    /** As {@link #stockCost(Kit, CutPlan)}, over the stock of the given origins only. */
+    static Double stockCost(Kit kit, CutPlan plan, Set<Origin> origins) {
         double cost = 0;
+        Set<String> currencies = new HashSet<>();
         for (SectionCutPlan section : plan.sections()) {
             for (CutPattern p : section.patterns()) {
-                Double price = stockRow(kit, section.section(), p).map(StockLength::price).orElse(null);
+                if (!origins.contains(p.origin())) {
+                    continue;
+                }
+                Optional<StockLength> row = stockRow(kit, section.section(), p);
+                row.ifPresent(r -> currencies.add(r.terms().currency()));
+                Double price = row.map(StockLength::price).orElse(null);
                 if (price == null && p.origin() == Origin.MILL) {
                     return null;
                 }
@@ -130,7 +146,7 @@ public final class KitMetricsCalculator {
                 cost += p.count() * price;
             }
         }
-        return cost;
+        return currencies.size() > 1 ? null : cost;
     }
 
     private static Optional<StockLength> stockRow(Kit kit, String section, CutPattern pattern) {

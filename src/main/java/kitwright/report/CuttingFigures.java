@@ -10,6 +10,7 @@ import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Kit;
 import kitwright.model.Origin;
 import kitwright.model.StockLength;
+import kitwright.model.StockTerms;
 
 /**
  * The figures of one section's cutting plan that the summary and the purchase order show: pieces and length of
@@ -32,11 +33,13 @@ public record CuttingFigures(SectionCutPlan plan, List<OrderLine> lines, double 
     /**
      * What to take for one stock length of a section.
      *
-     * @param unitPrice price per piece, or null when the catalog gives none
+     * @param unitPrice price per piece (the catalog's price worked out on its basis), or null when it gives none
      * @param total     pieces times unit price, or null
+     * @param terms     the catalog row's price as quoted, on its basis, with currency, grade, standard and supplier
+     * @param massKg    mass of the line's pieces, pieces x length x mass per metre, or null without the material
      */
     public record OrderLine(String section, double stockLengthMm, Origin origin, int pieces, Double unitPrice,
-                            Double total) {
+                            Double total, StockTerms terms, Double massKg) {
     }
 
     public CuttingFigures {
@@ -69,9 +72,12 @@ public record CuttingFigures(SectionCutPlan plan, List<OrderLine> lines, double 
         List<OrderLine> lines = new ArrayList<>();
         for (Map.Entry<String, Integer> e : pieces.entrySet()) {
             CutPattern p = example.get(e.getKey());
+            int i = catalogIndex(rows, p.stockLengthMm(), p.origin());
             Double price = price(rows, p.stockLengthMm(), p.origin());
+            StockTerms terms = i < rows.size() ? rows.get(i).terms() : StockTerms.perPiece(price);
             lines.add(new OrderLine(plan.section(), p.stockLengthMm(), p.origin(), e.getValue(), price,
-                    price == null ? null : price * e.getValue()));
+                    price == null ? null : price * e.getValue(), terms,
+                    massKg(kit, plan.section(), p.stockLengthMm() * e.getValue())));
         }
         lines.sort(Comparator.comparing(OrderLine::origin)
                 .thenComparingInt(l -> catalogIndex(rows, l.stockLengthMm(), l.origin()))
@@ -81,6 +87,14 @@ public record CuttingFigures(SectionCutPlan plan, List<OrderLine> lines, double 
             cost = cost == null || line.total() == null ? null : cost + line.total();
         }
         return new CuttingFigures(plan, lines, stock, offcut, remnant, remnants, scrap, cost);
+    }
+
+    /** Mass of a length of a section, when its material is known. */
+    private static Double massKg(Kit kit, String section, double lengthMm) {
+        return kit.catalog().section(section)
+                .flatMap(s -> kit.material(s).map(m -> s.massPerMetreKg(m.densityKgM3())))
+                .map(perMetre -> perMetre * lengthMm / 1000.0)
+                .orElse(null);
     }
 
     /** Stock pieces of one origin. */

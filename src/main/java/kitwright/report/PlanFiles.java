@@ -9,6 +9,7 @@ import kitwright.plan.PlanResult;
 import kitwright.report.cutting.CutListCsv;
 import kitwright.report.cutting.OrderCsv;
 import kitwright.report.cutting.RackAfterCsv;
+import kitwright.report.cutting.RackPullCsv;
 
 /**
  * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
@@ -29,6 +30,7 @@ public final class PlanFiles {
         files.put(PLAN_JSON, PrettyJson.write(planJson(result, date)));
         files.put(SUMMARY_JSON, PrettyJson.write(result.summary()));
         files.put("order.csv", OrderCsv.format(kit, result.cutting()));
+        files.put("rack-pull.csv", RackPullCsv.format(kit, result.cutting()));
         files.put("cut-list.csv", CutListCsv.format(kit, result.cutting()));
         files.put("rack-after.csv", RackAfterCsv.format(kit, result.cutting()));
         files.putAll(NestingFiles.files(result.nesting().plan()));

@@ -30,7 +30,7 @@ class CompareCommandTest {
                     "is not a number (expected millimetres, e.g. 2.0)"));
         }
         Status status = name.startsWith("none") ? Status.INFEASIBLE : Status.OPTIMAL;
-        return new OptionSummary(name, 6, 300, 750, 2.5, 80, 480000.0, 5000.0, 4.0, 1.5, 2.5, 1500.0, 1700.0,
+        return new OptionSummary(name, 6, 300, 750, 2.5, 80, 480000.0, 5000.0, 4900.0, 4.0, 1.5, 2.5, 1500.0, 1700.0,
                 2635.0, 30, 4, 2, 1800.0, status);
     };
 

@@ -61,6 +61,7 @@ class CutCommandTest {
         assertThat(target.resolve("cut-list.csv")).exists();
         assertThat(target.resolve("order.csv")).exists();
         assertThat(target.resolve("rack-after.csv")).exists();
+        assertThat(target.resolve("rack-pull.csv")).exists();
         assertThat(Files.readString(temp.resolve("plan.json"))).isEqualTo(Files.readString(target.resolve("cutting.json")));
         assertThat(out.toString()).contains("Stock to buy").contains("Total: cost");
         assertThat(err.toString()).contains("lower bound");

@@ -65,7 +65,7 @@ class CompareWritersTest {
     @Test
     void wasteBarReadsTheOffcutOfTheTable() throws Exception {
         // scrap 1.88 + remnant 3.84 (each rounded) = 5.72, where the offcut itself rounds to 5.71
-        OptionSummary option = new OptionSummary("k", 6, 300, 750, 2.0, 80, 480_000.0, 5000.0, 5.71, 1.88, 3.84,
+        OptionSummary option = new OptionSummary("k", 6, 300, 750, 2.0, 80, 480_000.0, 5000.0, 4950.0, 5.71, 1.88, 3.84,
                 1500.0, 1700.0, 2635.0, 30, 2, 1, 900.0, kitwright.model.Status.OPTIMAL);
         String html = CompareHtml.render(List.of(option));
         assertThat(html).contains("5.71 %").doesNotContain("5.72");

@@ -40,7 +40,7 @@ class PlannerTest {
     /** What every plan folder holds besides the files of {@link PlanFiles}. */
     private static final List<String> FOLDER_EXTRAS = List.of("timing.json", OutputFolder.MARKER);
     private static final List<String> CHAIN_FILES = List.of("report.html", "plan.json", "summary.json", "order.csv",
-            "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv");
+            "rack-pull.csv", "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv");
 
     static Stream<Path> sampleKits() throws Exception {
         try (Stream<Path> kits = Files.list(Path.of("sample-kits"))) {

@@ -98,7 +98,7 @@ class PlanFiguresJsonTest {
                 "lossProbability", "expectedLosses", "perMarkLevel", "coverage", "sparesNeeded", "alreadyInKit",
                 "toMake", "fromOffcuts", "bought", "missing");
         assertThat(fieldNames(json.get("figures"))).containsExactly("marks", "bars", "members", "reuseRatio",
-                "stockPieces", "boughtPieces", "stockLengthMm", "boughtLengthMm", "cost", "offcutPct", "scrapPct",
+                "stockPieces", "boughtPieces", "stockLengthMm", "boughtLengthMm", "cost", "payableCost", "offcutPct", "scrapPct",
                 "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg", "carbon");
     }
 
@@ -210,6 +210,10 @@ class PlanFiguresJsonTest {
         assertThat(f.get("stockLengthMm").asDouble()).isCloseTo(stock, within(0.05));
         assertThat(f.get("boughtLengthMm").asDouble()).isCloseTo(bought, within(0.05));
         assertThat(f.get("cost").asDouble()).isCloseTo(price(result.cutting(), catalogPrices()), within(0.0051));
+        Map<String, Double> millPrices = new HashMap<>(catalogPrices());
+        millPrices.replaceAll((row, price) -> row.contains("|RACK|") ? 0.0 : price);
+        assertThat(f.get("payableCost").asDouble()).as("mill stock only, at the catalog's prices")
+                .isCloseTo(price(result.cutting(), millPrices), within(0.0051));
         assertThat(f.get("offcutPct").asDouble()).isCloseTo(100 * offcut / stock, within(0.0051));
         assertThat(f.get("scrapPct").asDouble()).isCloseTo(100 * scrap / stock, within(0.0051));
         assertThat(f.get("remnantPct").asDouble()).isCloseTo(100 * remnant / stock, within(0.0051));
