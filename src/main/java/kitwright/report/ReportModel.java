@@ -80,7 +80,7 @@ public record ReportModel(String kitName, String description, LocalDate date, Li
             List<CuttingFigures> figures = plans.stream().map(p -> CuttingFigures.of(kit, p)).toList();
             sections.add(SummarySection.of(kit, figures));
             if (cutting != null) {
-                sections.add(PurchaseOrderSection.of(kit, figures));
+                sections.add(PurchaseOrderSection.of(kit, figures, date.toString()));
                 sections.add(SawSheetSection.of(kit, plans, date.toString()));
             }
             sections.addAll(extra);

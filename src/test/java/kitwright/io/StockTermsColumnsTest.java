@@ -20,7 +20,7 @@ class StockTermsColumnsTest {
     @Test
     void pricesPerMetreAndPerKilogramAreTurnedIntoPricesPerPiece(@TempDir Path dir) throws Exception {
         Kit kit = KitReader.read(kitWith(dir, HEADER
-                + "CHS 48.3x3.2,steel,48.3,3.2,6000,5.10,,mill,m,eur,S355J2H,EN 10219-1,Mill A\n"
+                + "CHS 48.3x3.2,steel,48.3,3.2,6000,5.10,,mill,m,eur,S355J2H,EN 10210-1,Mill A\n"
                 + "CHS 48.3x3.2,steel,48.3,3.2,3200,2.00,3,rack,,EUR,,,\n"
                 + "CHS 33.7x2.6,steel,33.7,2.6,6000,1.20,,mill,kg,GBP,S235JRH,,Mill B\n"));
         StockLength perMetre = kit.catalog().stockFor("CHS 48.3x3.2").get(0);
@@ -29,7 +29,7 @@ class StockTermsColumnsTest {
         assertThat(perMetre.terms().quotedPrice()).isEqualTo(5.10);
         assertThat(perMetre.terms().currency()).as("ISO 4217 codes upper-cased").isEqualTo("EUR");
         assertThat(perMetre.terms().grade()).isEqualTo("S355J2H");
-        assertThat(perMetre.terms().standard()).isEqualTo("EN 10219-1");
+        assertThat(perMetre.terms().standard()).isEqualTo("EN 10210-1");
         assertThat(perMetre.terms().supplier()).isEqualTo("Mill A");
         StockLength rack = kit.catalog().stockFor("CHS 48.3x3.2").get(1);
         assertThat(rack.terms().basis()).as("piece is the default").isEqualTo(PriceBasis.PIECE);

@@ -57,11 +57,20 @@ class CuttingFilesTest {
     }
 
     @Test
-    void orderListsMillStockThenTheRackOffcutsApart() {
+    void orderListsOnlyTheMillStockSoItsTotalIsWhatIsPaid() {
+        CutPlanValidator.validate(kit(), plan());
         assertThat(OrderCsv.format(kit(), plan()).lines()).containsExactly(
-                "section,origin,stock_length_mm,pieces,unit_price,total",
-                "CHS 48.3x3.2,mill,6000,1,30,30",
-                "CHS 48.3x3.2,rack,3200,1,2,2");
+                "section,material,outer_diameter_mm,wall_mm,stock_length_mm,pieces,mass_kg,unit_price,price_basis,"
+                        + "currency,total",
+                "CHS 48.3x3.2,steel,48.3,3.2,6000,1,,30.00,piece,,30.00");
+    }
+
+    @Test
+    void rackPullListsTheRackOffcutsToTakeAtTheirRackValue() {
+        CutPlanValidator.validate(kit(), plan());
+        assertThat(RackPullCsv.format(kit(), plan()).lines()).containsExactly(
+                "section,material,outer_diameter_mm,wall_mm,length_mm,pieces,mass_kg,unit_price,total",
+                "CHS 48.3x3.2,steel,48.3,3.2,3200,1,,2.00,2.00");
     }
 
     @Test

@@ -1,0 +1,91 @@
+package kitwright.report.cutting;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.List;
+import kitwright.cutting.Cut;
+import kitwright.cutting.CutPattern;
+import kitwright.cutting.CutPlan;
+import kitwright.cutting.SectionCutPlan;
+import kitwright.io.KitFiles;
+import kitwright.io.KitReader;
+import kitwright.metrics.KitMetricsCalculator;
+import kitwright.model.Kit;
+import kitwright.model.Origin;
+import kitwright.model.Status;
+import kitwright.validate.CutPlanValidator;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * order.csv and rack-pull.csv of a catalog that quotes per metre and per kilogram, with grade, supplier and
+ * currency, read from files as a user gives them. Masses by the EN 10219-2 formula M = pi (D - T) T rho 1e-6 kg/m
+ * with rho = 7850 kg/m3 (EN 1993-1-1 3.2.6); every other figure worked by hand beside it.
+ */
+class OrderTermsTest {
+    /** 1.20 per kg x 6 m x pi x 31.1 x 2.6 x 7850e-6 kg/m. */
+    private static final double PER_KG_PIECE = 1.2 * 6 * Math.PI * 31.1 * 2.6 * 7850e-6;
+    private static final String STOCK = """
+            section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin,price_basis,currency,grade,supplier
+            CHS 48.3x3.2,steel,48.3,3.2,6000,5.1,,mill,m,EUR,S355J2H,Mill A
+            CHS 48.3x3.2,steel,48.3,3.2,12000,4.5,,mill,m,EUR,S355J2H,Mill A
+            CHS 48.3x3.2,steel,48.3,3.2,3200,2,3,rack,,EUR,,
+            CHS 33.7x2.6,steel,33.7,2.6,6000,1.2,,mill,kg,GBP,S235JRH,Mill B
+            """;
+
+    @Test
+    void orderCarriesBasisCurrencyGradeAndSupplierWithFixedDecimalsPerColumn(@TempDir Path dir) throws Exception {
+        Kit kit = kit(dir);
+        CutPlan plan = plan();
+        CutPlanValidator.validate(kit, plan);
+
+        // 48.3x3.2: 3.559148 kg/m (EN 10219-2 tables: 3.56); 1 x 6 m = 21.355 kg, 2 x 12 m = 85.420 kg. 33.7x2.6: 1.994116 kg/m x 6 m = 11.965.
+        // Totals: 5.10 x 6 = 30.60; 4.50 x 12 x 2 = 108.00; 1.20 x 11.96470 kg = 14.36 (GBP).
+        assertThat(OrderCsv.format(kit, plan).lines()).containsExactly(
+                "section,material,outer_diameter_mm,wall_mm,stock_length_mm,pieces,mass_kg,unit_price,price_basis,"
+                        + "currency,total,grade,supplier",
+                "CHS 48.3x3.2,steel,48.3,3.2,6000,1,21.355,5.10,m,EUR,30.60,S355J2H,Mill A",
+                "CHS 48.3x3.2,steel,48.3,3.2,12000,2,85.420,4.50,m,EUR,108.00,S355J2H,Mill A",
+                "CHS 33.7x2.6,steel,33.7,2.6,6000,1,11.965,1.20,kg,GBP,14.36,S235JRH,Mill B");
+        // 3200 mm x 3.559148 kg/m = 11.389 kg; the rack price is per piece.
+        assertThat(RackPullCsv.format(kit, plan).lines()).containsExactly(
+                "section,material,outer_diameter_mm,wall_mm,length_mm,pieces,mass_kg,unit_price,total",
+                "CHS 48.3x3.2,steel,48.3,3.2,3200,1,11.389,2.00,2.00");
+        assertThat(KitMetricsCalculator.stockCost(kit, plan)).as("EUR and GBP cannot be added into one cost")
+                .isNull();
+    }
+
+    @Test
+    void decimalsFollowTheFinestValueOfTheColumn() {
+        List<String> header = List.of("length_mm", "mass_kg", "total");
+        List<List<Object>> rows = List.of(List.of(6000.0, 1.5, 845.7), List.of(2345.25, 2.0, 221.13),
+                List.of(12000.0, 1.23456, 1.0));
+        assertThat(CsvText.of(header, ColumnFormat.apply(header, java.util.Set.of("total"), rows)).lines())
+                .containsExactly("length_mm,mass_kg,total", "6000.00,1.500,845.70", "2345.25,2.000,221.13",
+                        "12000.00,1.235,1.00");
+    }
+
+    private static Kit kit(Path dir) throws Exception {
+        KitFiles.kit(dir, "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,2900,9\nB,CHS 33.7x2.6,2900,2\n");
+        KitFiles.write(dir, "stock.csv", STOCK);
+        KitFiles.write(dir, "kit.json", "{\"name\": \"terms\", \"kerfMm\": 2, \"trimMm\": 5, \"minRemnantMm\": 500}");
+        return KitReader.read(dir);
+    }
+
+    /** Kerf 2, trim 5: offcut = L - 10 - lengths - n x 2, a remnant from 500 mm. */
+    private static CutPlan plan() {
+        CutPattern six = new CutPattern(6000, Origin.MILL, 1, List.of(new Cut("A", 2900), new Cut("A", 2900)),
+                186, "scrap");
+        CutPattern twelve = new CutPattern(12000, Origin.MILL, 2, List.of(new Cut("A", 2900), new Cut("A", 2900),
+                new Cut("A", 2900)), 3284, "remnant");
+        CutPattern rack = new CutPattern(3200, Origin.RACK, 1, List.of(new Cut("A", 2900)), 288, "scrap");
+        CutPattern small = new CutPattern(6000, Origin.MILL, 1, List.of(new Cut("B", 2900), new Cut("B", 2900)),
+                186, "scrap");
+        return new CutPlan(List.of(
+                new SectionCutPlan("CHS 48.3x3.2", 2, 5, 500, "cost", Status.OPTIMAL, null, 140.6, 140.6, 0.0, 4,
+                        List.of(six, twelve, rack), List.of()),
+                new SectionCutPlan("CHS 33.7x2.6", 2, 5, 500, "cost", Status.OPTIMAL, null, PER_KG_PIECE, PER_KG_PIECE, 0.0, 1,
+                        List.of(small), List.of())));
+    }
+}
