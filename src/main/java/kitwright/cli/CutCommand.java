@@ -95,8 +95,9 @@ public final class CutCommand implements Callable<Integer> {
     Path out;
 
     @Option(names = "--spares-from-offcuts",
-            description = "Fill offcuts with spare bars of the section's marks, most-used first, buying nothing"
-                    + " more.")
+            description = "Without a spares policy in kit.json: fill offcuts with spare bars of the section's"
+                    + " marks, most-used first, buying nothing more. With a policy, the policy sets the spares"
+                    + " (see check --help).")
     boolean sparesFromOffcuts;
 
     @Spec

@@ -163,7 +163,7 @@ public final class KitJsonReader {
         Optional<Double> loss = json.required(spares, "spares.", "lossRatePerCycle").flatMap(k -> json.number(
                 spares, "spares.", k, 0, true, "a share of bars lost per cycle, from 0 up to below 1"));
         Optional<Integer> cycles = json.required(spares, "spares.", "cycles").flatMap(k -> json.whole(
-                spares, "spares.", k, 1, "a whole number of assembly cycles, at least 1"));
+                spares, "spares.", k, 1, Limits.MAX_CYCLES, "a whole number of assembly cycles, at least 1"));
         Optional<Double> level = json.required(spares, "spares.", "serviceLevel").flatMap(k -> json.number(
                 spares, "spares.", k, 0, false, "a probability above 0 and below 1, e.g. 0.95"));
         loss = loss.filter(p -> json.below(spares, "spares.", "lossRatePerCycle", p, 1,
