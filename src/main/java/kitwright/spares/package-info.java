@@ -2,8 +2,8 @@
  * Service-life spares: how many extra bars of each mark a kit needs so that, with a stated probability, every mark
  * still has enough bars after all its assembly cycles.
  *
- * <p>Model (src/docs/sources.md, Reuse and spares): a mark has {@code n} bars in service at once; at each of {@code
- * c} cycles each bar in service is lost with probability {@code p}, and a lost bar is replaced from the spares (the
+ * <p>Model (src/docs/sources.md, Reuse and spares): a mark has {@code n} bars in service at once; at each of
+ * {@code c} cycles each bar in service is lost with probability {@code p}, and a lost bar is replaced from the spares (the
  * replacement can be lost too), so the mark's losses over the life follow Binomial(n c, p), the last cycle's losses
  * included. The kit's service level {@code L} (all marks covered) is split over the {@code m} marks in service as
  * {@code L^(1/m)} each, which is exact when the marks' losses are independent (common practice). The spares of a mark
