@@ -42,6 +42,15 @@ public final class KitwrightCommand implements Runnable {
         cl.setUsageHelpWidth(110);
         cl.setExitCodeExceptionMapper(KitwrightCommand::exitCodeOf);
         cl.setExecutionExceptionHandler(KitwrightCommand::handleExecutionException);
+        // Errors (out of memory) pass picocli's handler by; catch them here so they too print one line.
+        CommandLine.IExecutionStrategy last = new CommandLine.RunLast();
+        cl.setExecutionStrategy(parsed -> {
+            try {
+                return last.execute(parsed);
+            } catch (Error e) {
+                return Failures.report(e, parsed.commandSpec().commandLine().getErr());
+            }
+        });
         cl.setParameterExceptionHandler((ex, args) -> {
             PrintWriter err = ex.getCommandLine().getErr();
             err.println("kitwright: " + ex.getMessage());
@@ -75,10 +84,6 @@ public final class KitwrightCommand implements Runnable {
             err.flush();
             return ExitCode.INVALID_INPUT.code();
         }
-        err.println("kitwright: internal error: " + ex);
-        ex.printStackTrace(err);
-        err.println("This is a bug or an environment problem; nothing was written.");
-        err.flush();
-        return ExitCode.INTERNAL_ERROR.code();
+        return Failures.report(ex, err);
     }
 }
