@@ -19,7 +19,8 @@ import picocli.CommandLine.Command;
         },
         footer = {
             "",
-            "Exit codes: 0 ok, 1 internal error, 2 invalid input (bad arguments or data), 3 no feasible plan.",
+            "Exit codes: 0 ok, 1 out of memory, I/O error or internal error (one line says which), 2 invalid input (bad",
+            "arguments or data, or an output that would replace an input or a file of yours), 3 no feasible plan.",
             "",
             "kitwright plans material and logistics only. It does not check structural capacity, joints, lifting",
             "or load securing; follow local codes and licensed professionals."
