@@ -66,7 +66,8 @@ class VehicleCatalogTest {
         insideAtLeast(LoadFixtures.CONTAINER_40, 11_998, 2330, 2350);
         // EU 96/53/EC Annex I 1.6 (from memory): a semi-trailer is at most 12.00 m from king-pin to rear with a
         // front swing radius of at most 2.04 m, so its load floor is at most 14.04 m long
-        assertThat(LoadFixtures.SEMI.deckLengthMm()).as("semi-trailer load length, 96/53/EC").isLessThanOrEqualTo(14_040);
+        assertThat(LoadFixtures.SEMI.deckLengthMm()).as("semi-trailer load length, 96/53/EC")
+                .isLessThanOrEqualTo(14_040);
         // a 7.5 t box truck carries less than its 7500 kg gross vehicle mass (EU driving licence category C1)
         assertThat(LoadFixtures.BOX_TRUCK.payloadKg()).as("7.5 t gross").isLessThan(7500);
     }

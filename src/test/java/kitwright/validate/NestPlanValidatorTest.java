@@ -229,7 +229,8 @@ class NestPlanValidatorTest {
                 "OPTIMAL with 2 bundles but bound 1.0");
         rejects(new NestPlan(NestTolerance.WORST_CASE, 2.0, Status.FEASIBLE, 3, good.bundles()),
                 "lower bound 3.0 above the 2 bundles");
-        rejects(new NestPlan(NestTolerance.NOMINAL, 2.0, Status.OPTIMAL, 2, good.bundles()), "plan uses NOMINAL, kit asks WORST_CASE");
+        rejects(new NestPlan(NestTolerance.NOMINAL, 2.0, Status.OPTIMAL, 2, good.bundles()),
+                "plan uses NOMINAL, kit asks WORST_CASE");
         rejects(new NestPlan(NestTolerance.WORST_CASE, 1.0, Status.OPTIMAL, 2, good.bundles()),
                 "clearance 1.0 but the rule says 2.0");
     }
