@@ -20,7 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
 
 /**
- * One line for every failure, never a stack trace (issue 17, section 4). The failures come through seams: a
+ * One line for every failure, never a stack trace (README, exit codes). The failures come through seams: a
  * planner that runs out of memory or meets a full disk (compare plans on worker threads, so the failure arrives
  * wrapped), and a command whose own thread runs out of memory. A real full disk (a 256 KB tmpfs) gives the same
  * line; that run is described in the README's exit codes.

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * No user file is ever overwritten or deleted: {@code --json FILE} and {@code --out DIR} are never inputs of the
- * run, never hold one, and replace only what kitwright wrote (issue 17, section 2). Every refusal comes before any
+ * run, never hold one, and replace only what kitwright wrote (README, output folders). Every refusal comes before any
  * planning (no progress lines), exit code 2, with the input untouched.
  */
 class OutputGuardsTest {
