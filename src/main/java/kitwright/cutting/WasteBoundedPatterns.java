@@ -1,6 +1,5 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -9,6 +8,7 @@ import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.natives.SolverLibraries;
 
 /**
  * Decides whether one stock length can cover the demand with T pieces, by a complete model over the only patterns
@@ -49,7 +49,7 @@ final class WasteBoundedPatterns {
      */
     static Outcome solve(IntegerInstance instance, int stock, int[] demand, long pieces, int maxPatterns,
                          double deterministicTime, Deadline deadline) {
-        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
+        SolverLibraries.load(); // the model objects need the natives, not only the solver
         long capacity = instance.capacity[stock];
         long waste = pieces * capacity - instance.load(demand);
         if (waste < 0) {

@@ -96,7 +96,7 @@ public final class CuttingBenchmark {
     }
 
     /** The 1-minute load average from /proc/loadavg, or "unknown". */
-    private static String loadAverage() {
+    static String loadAverage() {
         try {
             return Files.readString(Path.of("/proc/loadavg")).split(" ")[0];
         } catch (IOException | RuntimeException e) {
@@ -263,7 +263,7 @@ public final class CuttingBenchmark {
                 100 * gaps[gaps.length - 1]));
     }
 
-    private static double median(double[] sorted) {
+    static double median(double[] sorted) {
         int n = sorted.length;
         return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
     }

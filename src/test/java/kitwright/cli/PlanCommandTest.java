@@ -21,6 +21,7 @@ class PlanCommandTest {
         CliRun run = CliRun.of("plan", "sample-kits/cinema-6", "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
+        WrittenPlans.planFolder(Path.of("sample-kits", "cinema-6"), out, java.time.LocalDate.of(2025, 6, 30));
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
                 "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
