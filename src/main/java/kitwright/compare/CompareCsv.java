@@ -5,6 +5,7 @@ import java.io.Writer;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.report.SpreadsheetCell;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -16,7 +17,7 @@ import org.apache.commons.csv.CSVPrinter;
 public final class CompareCsv {
     /** The header: the compare.json keys in their order. */
     public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
-            "stockLengthMm", "cost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
+            "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
             "bundles", "crates", "vehicles", "tripCost", "status");
 
     private CompareCsv() {
@@ -26,7 +27,7 @@ public final class CompareCsv {
         CSVFormat format = CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get();
         try (CSVPrinter printer = new CSVPrinter(out, format)) {
             for (OptionSummary o : options) {
-                printer.printRecord(row(o));
+                printer.printRecord(SpreadsheetCell.row(row(o)));
             }
         }
     }
@@ -41,6 +42,7 @@ public final class CompareCsv {
         cells.add(Integer.toString(o.stockPieces()));
         cells.add(number(o.stockLengthMm()));
         cells.add(number(o.cost()));
+        cells.add(number(o.payableCost()));
         cells.add(number(o.offcutPct()));
         cells.add(number(o.scrapPct()));
         cells.add(number(o.remnantPct()));
