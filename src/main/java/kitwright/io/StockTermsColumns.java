@@ -16,7 +16,8 @@ import kitwright.model.StockTerms;
  * The tube catalog's optional buying columns, {@code price_basis,currency,grade,standard,supplier}, for one catalog.
  * {@code price_basis} is {@code piece} (the default), {@code m} or {@code kg}; a price per kg needs the material's
  * density, so it is invalid without a materials catalog. {@code currency} is an ISO 4217 code (three letters) or
- * blank. Every row of one section must give the same currency: the cutting stage adds the prices of a section's
+ * blank. {@code grade}, {@code standard} and {@code supplier} are names (one line, no formula start) or blank.
+ * Every row of one section must give the same currency: the cutting stage adds the prices of a section's
  * rows, mill and rack, into one objective, and a sum of two currencies means nothing.
  */
 final class StockTermsColumns {
@@ -56,8 +57,24 @@ final class StockTermsColumns {
             row.problem("currency", "'" + currency + "' is not a currency code (expected an ISO 4217 code of three"
                     + " letters, e.g. EUR, GBP, USD, or blank)");
         }
-        return new StockTerms(basis, price, currency.toUpperCase(Locale.ROOT), row.text("grade").trim(),
-                row.text("standard").trim(), row.text("supplier").trim());
+        return new StockTerms(basis, price, currency.toUpperCase(Locale.ROOT),
+                name(row, "grade", "the steel grade, e.g. S355J2H"),
+                name(row, "standard", "the product standard, e.g. EN 10219"),
+                name(row, "supplier", "the supplier's name"));
+    }
+
+    /**
+     * An optional name column: blank, or a name as {@link Names} allows, since it goes onto order.csv and the
+     * purchase order as it is; empty after reporting a bad one.
+     */
+    private static String name(CsvRow row, String column, String expected) {
+        String text = row.text(column);
+        if (text.isEmpty()) {
+            return text;
+        }
+        Optional<String> problem = Names.problem(text, expected);
+        problem.ifPresent(p -> row.problem(column, p));
+        return problem.isPresent() ? "" : text;
     }
 
     /** False, with a problem on the row, when a section's rows give two currencies. */
