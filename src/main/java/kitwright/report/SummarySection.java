@@ -61,8 +61,7 @@ final class SummarySection {
             figures.add(new Figure("Stock to buy", ShopFormat.count(mill) + " pieces",
                     ShopFormat.metres(millMm) + " m of tube" + (rack > 0 ? ", and " + ShopFormat.count(rack)
                             + " rack offcut" + (rack == 1 ? "" : "s") + " to use" : "")));
-            figures.add(new Figure("Stock cost", ReportFormat.money(cost),
-                    cost == null ? "a price is missing in the catalog" : "catalog prices, catalog currency"));
+            figures.add(StockCostFigure.of(sections));
             double share = stockMm == 0 ? 0 : offcutMm / stockMm;
             figures.add(new Figure("Offcut", ShopFormat.percent(share) + "\u00A0%",
                     "remnant " + ShopFormat.percent(stockMm == 0 ? 0 : remnantMm / stockMm) + "\u00A0%, scrap "

@@ -67,6 +67,20 @@ class PurchaseOrderSectionTest {
                 .containsPattern("\\.po-sheet[^{]*\\{[^}]*break-after: page");
     }
 
+    @Test
+    void theSummarySaysWhatIsPayableAndAddsNoTwoCurrencies(@TempDir Path dir) throws Exception {
+        Kit kit = PurchaseOrderFixtures.kit(dir);
+        List<CuttingFigures> figures = PurchaseOrderFixtures.plan(kit).sections().stream()
+                .map(s -> CuttingFigures.of(kit, s)).toList();
+
+        // EUR: mill 61.20 + 39.20 = 100.40, rack 2.00, cost 102.40; GBP: mill 14.36
+        assertThat(StockCostFigure.of(figures)).isEqualTo(new SummarySection.Figure("Stock cost",
+                "several currencies", "payable to suppliers 100.40\u00A0EUR, 14.36\u00A0GBP: see the purchase order"));
+        List<CuttingFigures> euro = figures.stream().filter(f -> !f.plan().section().equals("CHS 33.7x2.6")).toList();
+        assertThat(StockCostFigure.of(euro)).isEqualTo(new SummarySection.Figure("Stock cost", "102.40\u00A0EUR",
+                "payable to suppliers 100.40\u00A0EUR; rack offcuts 2.00 at their rack price"));
+    }
+
     /** The sheet's total rows as "currency|pieces|total". */
     private static List<String> totals(String sheet) {
         Matcher m = Pattern.compile("<tr class=\"po-total\"><th>([^<]*)</th>.*?<th class=\"num\">([^<]*)</th>"

@@ -57,6 +57,33 @@ class OrderTermsTest {
     }
 
     @Test
+    void rackPullWritesEveryRowOfAColumnToTheSameDecimals(@TempDir Path dir) throws Exception {
+        KitFiles.kit(dir, "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1500,2\n");
+        KitFiles.write(dir, "stock.csv", """
+                section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin
+                CHS 48.3x3.2,steel,48.3,3.2,6000,31.00,,mill
+                CHS 48.3x3.2,steel,48.3,3.2,3200,2,1,rack
+                CHS 48.3x3.2,steel,48.3,3.2,1950.5,1.5,1,rack
+                """);
+        KitFiles.write(dir, "kit.json", "{\"kerfMm\": 2, \"trimMm\": 5, \"minRemnantMm\": 500}");
+        Kit kit = KitReader.read(dir);
+        // kerf 2, trim 5: 3200 - 10 - 1500 - 2 = 1688 (a remnant), 1950.5 - 10 - 1500 - 2 = 438.5 (scrap)
+        CutPlan plan = new CutPlan(List.of(new SectionCutPlan("CHS 48.3x3.2", 2, 5, 500, "cost", Status.OPTIMAL,
+                null, 3.5, 3.5, 0.0, 2, List.of(
+                        new CutPattern(3200, Origin.RACK, 1, List.of(new Cut("A", 1500)), 1688, "remnant"),
+                        new CutPattern(1950.5, Origin.RACK, 1, List.of(new Cut("A", 1500)), 438.5, "scrap")),
+                List.of())));
+        CutPlanValidator.validate(kit, plan);
+
+        // 3.559148 kg/m x 3.2 m = 11.389 kg, x 1.9505 m = 6.942 kg; lengths to the 0.1 mm the finest one needs
+        assertThat(RackPullCsv.format(kit, plan).lines()).containsExactly(
+                "section,material,outer_diameter_mm,wall_mm,length_mm,pieces,mass_kg,unit_price,total",
+                "CHS 48.3x3.2,steel,48.3,3.2,3200.0,1,11.389,2.00,2.00",
+                "CHS 48.3x3.2,steel,48.3,3.2,1950.5,1,6.942,1.50,1.50");
+        assertThat(OrderCsv.format(kit, plan).lines()).as("nothing bought").hasSize(1);
+    }
+
+    @Test
     void decimalsFollowTheFinestValueOfTheColumn() {
         List<String> header = List.of("length_mm", "mass_kg", "total");
         List<List<Object>> rows = List.of(List.of(6000.0, 1.5, 845.7), List.of(2345.25, 2.0, 221.13),
