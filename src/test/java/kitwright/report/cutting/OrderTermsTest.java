@@ -2,6 +2,7 @@ package kitwright.report.cutting;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.io.StringReader;
 import java.nio.file.Path;
 import java.util.List;
 import kitwright.cutting.Cut;
@@ -15,6 +16,9 @@ import kitwright.model.Kit;
 import kitwright.model.Origin;
 import kitwright.model.Status;
 import kitwright.validate.CutPlanValidator;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -54,6 +58,37 @@ class OrderTermsTest {
                 "CHS 48.3x3.2,steel,48.3,3.2,3200,1,11.389,2.00,2.00");
         assertThat(KitMetricsCalculator.stockCost(kit, plan)).as("EUR and GBP cannot be added into one cost")
                 .isNull();
+    }
+
+    @Test
+    void rackAfterRowsGoBackIntoTheCatalogWithTheirSectionsCurrency(@TempDir Path dir) throws Exception {
+        Kit kit = kit(dir);
+        CutPlan plan = plan();
+        CutPlanValidator.validate(kit, plan);
+
+        String rackAfter = RackAfterCsv.format(kit, plan);
+
+        // 3 rack offcuts of 3200 less the 1 taken; 2 remnants of 3284 from the 12 m pieces
+        assertThat(rackAfter.lines()).containsExactly(
+                "section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin,weld_bead_mm,"
+                        + "od_tolerance_mm,wall_tolerance_pct,currency",
+                "CHS 48.3x3.2,steel,48.3,3.2,3200,2,2,rack,,,,EUR",
+                "CHS 48.3x3.2,steel,48.3,3.2,3284,,2,rack,,,,EUR");
+        // the next job's catalog: the mill rows as they were, the rack rows as rack-after.csv gives them, column by
+        // column under the catalog's header; it reads without a currency conflict
+        StringBuilder next = new StringBuilder(STOCK.lines().filter(l -> !l.contains(",rack,"))
+                .map(l -> l + "\n").collect(java.util.stream.Collectors.joining()));
+        List<String> header = List.of(STOCK.lines().findFirst().orElseThrow().split(","));
+        try (CSVParser rows = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+                .parse(new StringReader(rackAfter))) {
+            for (CSVRecord row : rows) {
+                next.append(header.stream().map(c -> row.isMapped(c) ? row.get(c) : "")
+                        .collect(java.util.stream.Collectors.joining(","))).append('\n');
+            }
+        }
+        Path nextJob = KitFiles.kit(dir.resolve("next"), "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,2900,1\n");
+        KitFiles.write(nextJob, "stock.csv", next.toString());
+        assertThat(KitReader.read(nextJob).catalog().stockFor("CHS 48.3x3.2")).hasSize(4);
     }
 
     @Test
