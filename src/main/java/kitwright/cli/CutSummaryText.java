@@ -7,6 +7,7 @@ import java.util.stream.Collectors;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Kit;
 import kitwright.model.Origin;
 import kitwright.model.Section;
@@ -70,8 +71,11 @@ final class CutSummaryText {
             table.row(cells);
         }
         sb.append(table.render(""));
+        Double payable = allPriced ? KitMetricsCalculator.payableCost(kit, plan) : null;
         sb.append('\n').append("Total: cost ").append(fixed(cost, 2))
-                .append(allPriced ? "" : " (sections without prices left out)").append("; ").append(fixed(stockLength / 1000, 1)).append(" m of stock, ")
+                .append(allPriced ? "" : " (sections without prices left out)")
+                .append(payable == null ? "" : ", payable to suppliers " + fixed(payable, 2) + " (order.csv)")
+                .append("; ").append(fixed(stockLength / 1000, 1)).append(" m of stock, ")
                 .append(stockLength > 0 ? fixed(100 * offcut / stockLength, 1) : "0").append(" % offcut");
         if (masses) {
             sb.append("; ").append(fixed(bought, 1)).append(" kg bought from the mill");

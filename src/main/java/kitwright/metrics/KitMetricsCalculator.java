@@ -87,7 +87,7 @@ public final class KitMetricsCalculator {
         Double co2e = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::co2eKg).sum() : null;
         return new KitMetrics(kit.bars().size(), bars, members, bars == 0 ? 0 : (double) members / bars,
                 stockPieces, boughtPieces, stockLength, boughtLength, stockCost(kit, plan),
-                stockCost(kit, plan, EnumSet.of(Origin.MILL)),
+                payableCost(kit, plan),
                 percent(offcut, stockLength), percent(scrap, stockLength), percent(remnant, stockLength),
                 kitMass(kit).orElse(null), boughtMass, co2e, massKnown ? carbon : List.of());
     }
@@ -123,6 +123,11 @@ public final class KitMetricsCalculator {
      */
     public static Double stockCost(Kit kit, CutPlan plan) {
         return stockCost(kit, plan, EnumSet.allOf(Origin.class));
+    }
+
+    /** Price of the mill stock a plan buys, the amount payable to suppliers; null as for {@link #stockCost}. */
+    public static Double payableCost(Kit kit, CutPlan plan) {
+        return stockCost(kit, plan, EnumSet.of(Origin.MILL));
     }
 
     /** As {@link #stockCost(Kit, CutPlan)}, over the stock of the given origins only. */

@@ -72,8 +72,10 @@ class BuyerFilesTest {
         CutPlanValidator.validate(kit, plan);
 
         checkFiles(kit, plan, out);
-        assertThat(sum(read(out.resolve("order.csv"), ORDER_COLUMNS), "total"))
-                .isCloseTo(priced(kit, plan, Origin.MILL), within(0.005));
+        double payable = sum(read(out.resolve("order.csv"), ORDER_COLUMNS), "total");
+        assertThat(payable).isCloseTo(priced(kit, plan, Origin.MILL), within(0.005));
+        assertThat(run.out()).contains(String.format(java.util.Locale.ROOT, ", payable to suppliers %.2f (order.csv)",
+                payable));
     }
 
     /** Both files: exact headers; order rows are mill rows, rack-pull rows rack rows, pieces as the plan cuts. */
