@@ -18,7 +18,7 @@ import java.util.List;
  *                         at 0), null when a mill row has no price or the stock used is priced in several
  *                         currencies: what the cutting stage minimises
  * @param payableCost      price of the mill stock bought, the amount payable to suppliers (rack offcuts are already
- *                         paid for), null as for cost
+ *                         paid for): order.csv's line totals, each to the cent, summed; null as for cost
  * @param offcutPct        offcut length / stockLengthMm * 100 (offcut = remnant + scrap; kerf and trim not included)
  * @param scrapPct         scrap offcuts (shorter than minRemnant) / stockLengthMm * 100
  * @param remnantPct       remnant offcuts (back on the rack) / stockLengthMm * 100

@@ -1,5 +1,7 @@
 package kitwright.metrics;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.EnumSet;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -125,9 +127,28 @@ public final class KitMetricsCalculator {
         return stockCost(kit, plan, EnumSet.allOf(Origin.class));
     }
 
-    /** Price of the mill stock a plan buys, the amount payable to suppliers; null as for {@link #stockCost}. */
+    /**
+     * Price of the mill stock a plan buys, the amount payable to suppliers, as an order adds it up: each line
+     * (section and stock length) at pieces x price per piece rounded half-up to the cent, then the lines summed, so
+     * that it equals the sum of order.csv's {@code total} column. Null as for {@link #stockCost}.
+     */
     public static Double payableCost(Kit kit, CutPlan plan) {
-        return stockCost(kit, plan, EnumSet.of(Origin.MILL));
+        if (stockCost(kit, plan, EnumSet.of(Origin.MILL)) == null) {
+            return null;
+        }
+        Map<StockLength, Integer> pieces = new LinkedHashMap<>();
+        for (SectionCutPlan section : plan.sections()) {
+            for (CutPattern p : section.patterns()) {
+                if (p.origin() == Origin.MILL) {
+                    pieces.merge(stockRow(kit, section.section(), p).orElseThrow(), p.count(), Integer::sum);
+                }
+            }
+        }
+        BigDecimal sum = BigDecimal.ZERO;
+        for (Map.Entry<StockLength, Integer> line : pieces.entrySet()) {
+            sum = sum.add(BigDecimal.valueOf(line.getValue() * line.getKey().price()).setScale(2, RoundingMode.HALF_UP));
+        }
+        return sum.doubleValue();
     }
 
     /** As {@link #stockCost(Kit, CutPlan)}, over the stock of the given origins only. */

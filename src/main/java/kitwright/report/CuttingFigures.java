@@ -40,6 +40,11 @@ public record CuttingFigures(SectionCutPlan plan, List<OrderLine> lines, double 
      */
     public record OrderLine(String section, double stockLengthMm, Origin origin, int pieces, Double unitPrice,
                             Double total, StockTerms terms, Double massKg) {
+        /** The total as an order states it, rounded half-up to the cent; null when unknown. */
+        public Double totalInCents() {
+            return total == null ? null
+                    : java.math.BigDecimal.valueOf(total).setScale(2, java.math.RoundingMode.HALF_UP).doubleValue();
+        }
     }
 
     public CuttingFigures {

@@ -115,7 +115,10 @@ final class PurchaseOrderSection {
         return kit.catalog().section(section).map(s -> s.material()).orElse("");
     }
 
-    /** Pieces, length, mass and cost of some lines; mass and cost null when one line's is unknown. */
+    /**
+     * Pieces, length, mass and cost of some lines, the cost as the sum of the line totals in cents (as an order adds
+     * up); mass and cost null when one line's is unknown.
+     */
     private record Sum(int pieces, double lengthMm, Double mass, Double cost) {
         static Sum of(List<OrderLine> lines) {
             int pieces = 0;
@@ -126,7 +129,7 @@ final class PurchaseOrderSection {
                 pieces += l.pieces();
                 lengthMm += l.stockLengthMm() * l.pieces();
                 mass = mass == null || l.massKg() == null ? null : mass + l.massKg();
-                cost = cost == null || l.total() == null ? null : cost + l.total();
+                cost = cost == null || l.total() == null ? null : cost + l.totalInCents();
             }
             return new Sum(pieces, lengthMm, mass, cost);
         }

@@ -27,7 +27,7 @@ final class StockCostFigure {
                     return new Figure("Stock cost", ShopFormat.UNKNOWN, "a price is missing in the catalog");
                 }
                 Map<String, Double> into = line.origin() == Origin.MILL ? payable : rack;
-                into.merge(line.terms().currency(), line.total() == null ? 0.0 : line.total(), Double::sum);
+                into.merge(line.terms().currency(), line.total() == null ? 0.0 : line.totalInCents(), Double::sum);
                 payable.putIfAbsent(line.terms().currency(), 0.0);
             }
         }

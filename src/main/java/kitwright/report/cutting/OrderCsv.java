@@ -56,7 +56,7 @@ public final class OrderCsv {
                 row.add(line.unitPrice() == null ? null : terms.quotedPrice());
                 row.add(terms.basis().code());
                 row.add(terms.currency());
-                row.add(line.total());
+                row.add(line.totalInCents());
                 optional.forEach(i -> row.add(OPTIONAL_VALUES.get(i).apply(terms)));
                 rows.add(row);
             }

@@ -1,6 +1,7 @@
 package kitwright.report.cutting;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.io.StringReader;
 import java.nio.file.Path;
@@ -89,6 +90,38 @@ class OrderTermsTest {
         Path nextJob = KitFiles.kit(dir.resolve("next"), "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,2900,1\n");
         KitFiles.write(nextJob, "stock.csv", next.toString());
         assertThat(KitReader.read(nextJob).catalog().stockFor("CHS 48.3x3.2")).hasSize(4);
+    }
+
+    @Test
+    void thePayableCostIsTheSumOfTheOrdersLineTotalsInCents(@TempDir Path dir) throws Exception {
+        KitFiles.kit(dir, "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,2900,8\n");
+        KitFiles.write(dir, "stock.csv", """
+                section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin,price_basis
+                CHS 48.3x3.2,steel,48.3,3.2,6000,1.05,,mill,kg
+                CHS 48.3x3.2,steel,48.3,3.2,12000,1.05,,mill,kg
+                """);
+        KitFiles.write(dir, "kit.json", "{\"kerfMm\": 2, \"trimMm\": 5, \"minRemnantMm\": 500}");
+        Kit kit = KitReader.read(dir);
+        // 1.05 per kg x 3.559148 kg/m: 6 m = 22.4226 a piece, 12 m = 44.8453; kerf 2, trim 5: 12000 - 10 - 4 x 2900
+        // - 4 x 2 = 382 scrap
+        double six = 1.05 * 6 * Math.PI * 45.1 * 3.2 * 7850e-6;
+        CutPlan plan = new CutPlan(List.of(new SectionCutPlan("CHS 48.3x3.2", 2, 5, 500, "cost", Status.OPTIMAL,
+                null, 4 * six, 4 * six, 0.0, 3, List.of(
+                        new CutPattern(6000, Origin.MILL, 2, List.of(new Cut("A", 2900), new Cut("A", 2900)), 186,
+                                "scrap"),
+                        new CutPattern(12000, Origin.MILL, 1, List.of(new Cut("A", 2900), new Cut("A", 2900),
+                                new Cut("A", 2900), new Cut("A", 2900)), 382, "scrap")),
+                List.of())));
+        CutPlanValidator.validate(kit, plan);
+
+        // each line 2 x 22.4226 = 1 x 44.8453 = 44.8453, written 44.85: the order adds up to 89.70, not the 89.69
+        // that the unrounded sum 89.6905 rounds to
+        assertThat(OrderCsv.format(kit, plan).lines()).extracting(l -> l.substring(l.lastIndexOf(',') + 1))
+                .containsExactly("total", "44.85", "44.85");
+        assertThat(4 * six).isCloseTo(89.6905, within(0.0001));
+        assertThat(KitMetricsCalculator.payableCost(kit, plan)).isEqualTo(89.70);
+        assertThat(KitMetricsCalculator.stockCost(kit, plan)).as("the objective stays unrounded")
+                .isCloseTo(4 * six, within(1e-9));
     }
 
     @Test
