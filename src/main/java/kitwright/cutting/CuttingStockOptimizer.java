@@ -33,7 +33,8 @@ import kitwright.model.Status;
  * the plan's cost ({@link AchievableValues}; for one stock length and price, value = ceil(LP bound)), or when a
  * complete model proves it. When the section's lengths had to be rounded ({@link LengthScale}), the bounds above
  * hold for the rounded sizes only, and the bound claimed is the one of sizes rounded the other way
- * ({@link AchievableValues#trueLengthBound}). The reported lower bound is the best proven one; gap = (value - lowerBound) / value,
+ * ({@link AchievableValues#trueLengthBound}). The reported lower bound is the best proven one;
+ * gap = (value - lowerBound) / value,
  * so OPTIMAL has gap 0. Deterministic for given limits: one CP-SAT worker, deterministic work limits; the
  * wall-clock limit is only a safety net, and when it strikes the best plan so far is returned with its gap.
  *

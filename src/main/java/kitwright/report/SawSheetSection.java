@@ -161,7 +161,8 @@ final class SawSheetSection {
             SawLayout.Segment last = pieces.get(j);
             String sequence = i == j ? String.valueOf(first.sequence())
                     : first.sequence() + "\u2013" + last.sequence();
-            rows.add(new CutRow(sequence, first.mark(), ShopFormat.sawMm(first.lengthMm()), tolerance(kit, first.mark()),
+            rows.add(new CutRow(sequence, first.mark(), ShopFormat.sawMm(first.lengthMm()),
+                    tolerance(kit, first.mark()),
                     ShopFormat.count(j - i + 1), ShopFormat.sawMm(first.startMm()),
                     ShopFormat.sawMm(last.endMm())));
             i = j + 1;

@@ -39,9 +39,10 @@ class ExactReferenceTest {
 
     /**
      * Pieces j go to bins b (bin_j &lt;= j breaks the symmetry of bin names, bars of one mark fill bins in
-     * order); each bin b takes a stock type or none (an empty bin takes none); load_b &lt;= capacity(type_b); at most available_k bins of a limited type; minimise the sum of the
-     * bins' prices (or stock lengths). Lengths, kerf, trim and prices are read as exact hundredths (the test data
-     * has no finer decimal; a finer one throws), independent of the optimiser's own scaling.
+     * order); each bin b takes a stock type or none (an empty bin takes none); load_b &lt;= capacity(type_b);
+     * at most available_k bins of a limited type; minimise the sum of the bins' prices (or stock lengths).
+     * Lengths, kerf, trim and prices are read as exact hundredths (the test data has no finer decimal; a finer one
+     * throws), independent of the optimiser's own scaling.
      */
     static Double chocoOptimum(SectionProblem problem) {
         boolean cost = problem.objective().equals("cost");

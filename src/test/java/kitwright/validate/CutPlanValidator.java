@@ -113,7 +113,8 @@ public final class CutPlanValidator {
                 check(exact(d.lengthMm()).compareTo(exact(c.lengthMm())) == 0, at + "cut length of " + c.mark()
                         + " is " + c.lengthMm() + ", the mark is " + d.lengthMm());
                 BigDecimal end = start.add(exact(c.lengthMm()));
-                check(end.compareTo(farTrimLine) <= 0, at + "does not fit: cut " + sequence + " ends at " + end.toPlainString()
+                check(end.compareTo(farTrimLine) <= 0, at + "does not fit: cut " + sequence + " ends at "
+                        + end.toPlainString()
                         + ", past the far trim line " + farTrimLine.toPlainString());
                 start = end.add(k);
                 lengths = lengths.add(exact(c.lengthMm()));

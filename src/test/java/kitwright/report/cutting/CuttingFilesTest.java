@@ -64,7 +64,8 @@ class CuttingFilesTest {
     @Test
     void sawSheetInHundredthsPlacesNothingPastTheStockEnd() {
         Kit kit = KitFixtures.kit(List.of(chs(SECTION, 48.3, 3.2)),
-                List.of(new StockLength(SECTION, 6000, 30.0, null, Origin.MILL)), List.of(bar("A", SECTION, 599.06, 10)),
+                List.of(new StockLength(SECTION, 6000, 30.0, null, Origin.MILL)),
+                List.of(bar("A", SECTION, 599.06, 10)),
                 KitSettings.defaults("files").withKerfMm(1.04).withTrimMm(0).withMinRemnantMm(500));
         CutPattern full = new CutPattern(6000, Origin.MILL, 1, java.util.Collections.nCopies(10, new Cut("A", 599.06)),
                 0, "scrap");
