@@ -14,7 +14,7 @@ import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
-import kitwright.io.OutputFile;
+import kitwright.io.RunInputs;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
@@ -93,6 +93,10 @@ public final class NestCommand implements Callable<Integer> {
             description = "Date printed on the report (default: today). Fix it to get byte-identical output.")
     LocalDate date;
 
+    @Option(names = "--force",
+            description = "Let --json replace a file that kitwright did not write (never an input of the run).")
+    boolean force;
+
     @Spec
     CommandSpec spec;
 
@@ -108,11 +112,12 @@ public final class NestCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
+        RunInputs inputs = RunInputs.ofKit(kitDir);
         if (out != null) {
-            OutputFolder.check(out);
+            OutputGuards.checkFolder(out, inputs);
         }
         if (json != null) {
-            OutputFile.check(json);
+            OutputGuards.checkJson(json, out, inputs, force);
         }
         if (tolerance != null) {
             kit = kit.withSettings(kit.settings().withNestTolerance(tolerance));
@@ -151,7 +156,7 @@ public final class NestCommand implements Callable<Integer> {
             }
         }
         if (json != null) {
-            OutputFile.write(json, PrettyJson.write(plan));
+            OutputGuards.writeJson(json, PrettyJson.write(plan), inputs, force);
         }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(summary(kit, result));

@@ -12,6 +12,7 @@ import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
+import kitwright.io.RunInputs;
 import kitwright.model.Kit;
 import kitwright.plan.PlanProgress;
 import kitwright.plan.PlanResult;
@@ -81,7 +82,7 @@ public final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
-        OutputFolder.check(out);
+        OutputGuards.checkFolder(out, RunInputs.ofKit(kitDir));
         PrintWriter err = spec.commandLine().getErr();
         PlanResult result = Planner.run(kit, new Planner.Options(sparesFromOffcuts), progress(err));
         LocalDate day = date != null ? date : LocalDate.now();

@@ -52,11 +52,9 @@ final class PatternIntegerPhase {
         for (int p = 0; p < columns.size(); p++) {
             Pattern pattern = columns.get(p);
             long upper = types.get(pattern.hostType()).count();
-            for (int t = 0; t < n; t++) {
-                int a = pattern.counts().get(t);
-                if (a > 0) {
-                    upper = Math.min(upper, types.get(t).count() / a);
-                }
+            TypeCounts counts = pattern.counts();
+            for (int i = 0; i < counts.size(); i++) {
+                upper = Math.min(upper, types.get(counts.type(i)).count() / counts.count(i));
             }
             x[p] = model.newIntVar(0, upper, "x_" + pattern.hostType() + "_" + p);
             if (hint != null) {
@@ -74,12 +72,12 @@ final class PatternIntegerPhase {
             Pattern pattern = columns.get(p);
             hosts[pattern.hostType()].add(x[p]);
             long value = 0;
-            for (int t = 0; t < n; t++) {
-                int a = pattern.counts().get(t);
-                if (a > 0) {
-                    supply[t].addTerm(x[p], a);
-                    value += a * weight[t];
-                }
+            TypeCounts counts = pattern.counts();
+            for (int i = 0; i < counts.size(); i++) {
+                int t = counts.type(i);
+                int a = counts.count(i);
+                supply[t].addTerm(x[p], a);
+                value += a * weight[t];
             }
             objective.addTerm(x[p], value);
         }

@@ -116,8 +116,8 @@ final class SawSheetSection {
         for (int j = 0; j < patterns.size(); j++) {
             cards.add(card(kit, plan, patterns.get(j), "s" + index + "-p" + (j + 1), j + 1, scale, palette));
         }
-        String settings = "kerf " + ShopFormat.mmUnit(plan.kerfMm()) + " \u00B7 end trim "
-                + ShopFormat.mmUnit(plan.trimMm()) + " each end \u00B7 remnant from "
+        String settings = "kerf " + ShopFormat.sawMmUnit(plan.kerfMm()) + " \u00B7 end trim "
+                + ShopFormat.sawMmUnit(plan.trimMm()) + " each end \u00B7 remnant from "
                 + ShopFormat.mmUnit(plan.minRemnantMm());
         int pieces = patterns.stream().mapToInt(CutPattern::count).sum();
         String totals = ShopFormat.count(pieces) + " stock piece" + (pieces == 1 ? "" : "s") + " in "
@@ -138,14 +138,14 @@ final class SawSheetSection {
 
     private static PatternCard card(Kit kit, SectionCutPlan plan, CutPattern p, String id, int number,
                                     double scale, MarkPalette palette) {
-        String stock = ShopFormat.mmUnit(p.stockLengthMm());
+        String stock = ShopFormat.sawMmUnit(p.stockLengthMm());
         String origin = p.origin() == Origin.RACK ? "rack offcut" : "mill stock";
         String offcut = p.offcutMm() <= 0 ? "no offcut"
-                : p.offcutKind() + " " + ShopFormat.mmUnit(p.offcutMm())
+                : p.offcutKind() + " " + ShopFormat.sawMmUnit(p.offcutMm())
                 + ("remnant".equals(p.offcutKind()) ? ": back to the rack" : ": to the scrap bin");
         String title = "Pattern " + number + " of " + plan.section() + ": " + stock + " " + origin + ", "
                 + p.count() + " times; cuts " + p.cuts().stream()
-                .map(c -> c.mark() + " " + ShopFormat.mmUnit(c.lengthMm())).collect(Collectors.joining(", "))
+                .map(c -> c.mark() + " " + ShopFormat.sawMmUnit(c.lengthMm())).collect(Collectors.joining(", "))
                 + "; " + offcut;
         String svg = SawSheetDrawing.draw(id, title, p, plan.kerfMm(), plan.trimMm(), scale, palette);
         List<CutRow> rows = cutRows(kit, SawLayout.of(p, plan.kerfMm(), plan.trimMm()).pieces());
@@ -176,8 +176,10 @@ final class SawSheetSection {
             SawLayout.Segment last = pieces.get(j);
             String sequence = i == j ? String.valueOf(first.sequence())
                     : first.sequence() + "\u2013" + last.sequence();
-            rows.add(new CutRow(sequence, first.mark(), ShopFormat.mm(first.lengthMm()), tolerance(kit, first.mark()),
-                    ShopFormat.count(j - i + 1), ShopFormat.mm(first.startMm()), ShopFormat.mm(last.endMm())));
+            rows.add(new CutRow(sequence, first.mark(), ShopFormat.sawMm(first.lengthMm()),
+                    tolerance(kit, first.mark()),
+                    ShopFormat.count(j - i + 1), ShopFormat.sawMm(first.startMm()),
+                    ShopFormat.sawMm(last.endMm())));
             i = j + 1;
         }
         return List.copyOf(rows);
@@ -202,7 +204,7 @@ final class SawSheetSection {
         for (String mark : palette.marks()) {
             Bar bar = kit.bar(mark).orElse(null);
             double length = bar != null ? bar.lengthMm() : lengths.getOrDefault(mark, 0.0);
-            items.add(new LegendItem(mark, Swatches.mark(palette.fill(mark)), ShopFormat.mm(length),
+            items.add(new LegendItem(mark, Swatches.mark(palette.fill(mark)), ShopFormat.sawMm(length),
                     tolerance(kit, mark), bar == null ? ShopFormat.UNKNOWN : ShopFormat.count(bar.quantity()),
                     ShopFormat.count(cut.getOrDefault(mark, 0))));
         }

@@ -21,6 +21,7 @@ class PlanSparesCommandTest {
         CliRun run = CliRun.of("plan", kit.toString(), "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
+        WrittenPlans.planFolder(kit, out, java.time.LocalDate.of(2025, 6, 30));
         JsonNode spares = PrettyJson.mapper().readTree(out.resolve("plan.json").toFile()).get("spares");
         JsonNode totals = spares.get("totals");
         String line = "Service-life spares: " + totals.get("toMake").asInt() + " bars to make (5 % of the bars in"

@@ -61,7 +61,7 @@ public final class NestPlanValidator {
     }
 
     /** Outside diameter and bore by the rule: EN 10219-2 worst case for steel, catalog tolerances otherwise. */
-    static double[] sizes(Section section, NestTolerance tolerance) {
+    public static double[] sizes(Section section, NestTolerance tolerance) {
         double d = section.outerDiameterMm();
         double t = section.wallMm();
         if (tolerance == NestTolerance.NOMINAL) {
