@@ -9,9 +9,9 @@ import kitwright.metrics.KitMetrics;
 import kitwright.model.Status;
 
 /**
- * The figures of one kit option, with exactly the keys of {@code compare.json} (issue 7), in that order. Lengths in
- * millimetres, masses in kilograms, money in the catalogs' currency, percentages of the stock length cut. A figure
- * that is not known (no prices, no materials, a stage that did not run) is null.
+ * The figures of one kit option, with exactly the keys of {@code compare.json} (src/docs/compare.md), in that
+ * order. Lengths in millimetres, masses in kilograms, money in the catalogs' currency, percentages of the stock
+ * length cut. A figure that is not known (no prices, no materials, a stage that did not run) is null.
  *
  * @param kit            the kit's name
  * @param marks          bar types

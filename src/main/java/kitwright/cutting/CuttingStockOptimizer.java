@@ -31,7 +31,10 @@ import kitwright.model.Status;
  *
  * <p>Guarantee: the status is OPTIMAL only when proven: when no achievable cost lies between the lower bound and
  * the plan's cost ({@link AchievableValues}; for one stock length and price, value = ceil(LP bound)), or when a
- * complete model proves it. The reported lower bound is the best proven one; gap = (value - lowerBound) / value,
+ * complete model proves it. When the section's lengths had to be rounded ({@link LengthScale}), the bounds above
+ * hold for the rounded sizes only, and the bound claimed is the one of sizes rounded the other way
+ * ({@link AchievableValues#trueLengthBound}). The reported lower bound is the best proven one;
+ * gap = (value - lowerBound) / value,
  * so OPTIMAL has gap 0. Deterministic for given limits: one CP-SAT worker, deterministic work limits; the
  * wall-clock limit is only a safety net, and when it strikes the best plan so far is returned with its gap.
  *
@@ -83,6 +86,8 @@ public final class CuttingStockOptimizer implements SectionSolver {
         private boolean provenByModel;
         private double linearBound = Double.NaN;
         private Double firstFitValue;
+        /** Whether the wall-clock deadline cut a step short or left one out. */
+        private boolean timedOut;
 
         Search(SectionProblem problem, CutProgress progress) {
             this.problem = problem;
@@ -151,9 +156,10 @@ public final class CuttingStockOptimizer implements SectionSolver {
                 if (!proven() && !deadline.passed() && incumbent != null
                         && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
                     StockCountBound.Result whole = StockCountBound.raise(instance, generation, lowerCost(),
-                            incumbentCost, COUNT_TESTS, deadline);
+                            incumbentCost, COUNT_TESTS, limits.stockCountSteps(), deadline);
                     bound = Math.max(bound, whole.bound());
                     counts = whole.counts();
+                    timedOut |= whole.timedOut();
                     report("lower bound");
                 }
                 if (!proven() && !deadline.passed()) {
@@ -201,8 +207,12 @@ public final class CuttingStockOptimizer implements SectionSolver {
             Packing plan = RemnantConsolidation.consolidate(instance, incumbent);
             long cost = plan.cost(instance);
             long lower = provenByModel ? cost : AchievableValues.nextAchievable(instance, bound, cost);
+            lower = Math.min(lower, AchievableValues.trueLengthBound(instance, lower, cost));
             Status status = cost <= lower ? Status.OPTIMAL : Status.FEASIBLE;
-            return done(PlanAssembler.plan(instance, plan, status, Math.min(lower, cost)));
+            SectionCutPlan assembled = PlanAssembler.plan(instance, plan, status, Math.min(lower, cost));
+            // a step the deadline cut short makes the plan depend on the machine's speed: say so
+            boolean stoppedByClock = status == Status.FEASIBLE && (timedOut || deadline.passed());
+            return done(stoppedByClock ? assembled.withReason(SectionCutPlan.STOPPED_BY_TIME_LIMIT) : assembled);
         }
 
         private Outcome done(SectionCutPlan plan) {

@@ -20,7 +20,7 @@ import kitwright.model.StructureCount;
  * Computes {@link KitMetrics} from a kit and its cutting plan.
  *
  * <ul>
- *   <li>Reuse ratio = members in all structures / bars in the kit (DOMAIN.md section 6).</li>
+ *   <li>Reuse ratio = members in all structures / bars in the kit (src/docs/sources.md, Reuse and spares).</li>
  *   <li>Embodied carbon is counted on the stock bought, not on the kit: bought mass = sum over mill pieces of
  *       length x mass per metre (M = pi (D - T) T rho 1e-6 kg/m, the EN 10219-2 formula), times the material's
  *       factor from materials.csv. Rack offcuts carry no new carbon: it was counted when they were bought.</li>

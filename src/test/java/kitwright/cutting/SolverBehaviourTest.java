@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 class SolverBehaviourTest {
 
     @Test
-    void anExpiredTimeLimitStillReturnsThePlanAtHandWithItsGap() {
+    void anExpiredTimeLimitStillReturnsThePlanAtHandWithItsGapAndSaysSo() {
         SectionProblem problem = Instances.kitSection("timed", 30, 3, 2, 40, 11, TestSections.LIMITS)
                 .withLimits(TestSections.LIMITS.withTimeLimitSeconds(1e-6));
         SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
@@ -22,6 +22,7 @@ class SolverBehaviourTest {
         assertThat(plan.status()).isEqualTo(Status.FEASIBLE);
         assertThat(plan.patterns()).isNotEmpty();
         assertThat(plan.gap()).isPositive();
+        assertThat(plan.reason()).isEqualTo("stopped by the time limit");
     }
 
     @Test
@@ -70,7 +71,8 @@ class SolverBehaviourTest {
         Packing gathered = RemnantConsolidation.consolidate(instance, spread);
         assertThat(gathered.cost(instance)).isEqualTo(spread.cost(instance));
         assertThat(gathered.pieces()).extracting(p -> (instance.capacity[0] - instance.load(p.counts()))
-                * instance.unit / 10.0).containsExactlyInAnyOrder(0.0, 400.0); // free millimetres
+                * instance.unit / Math.pow(10, instance.lengthScale.decimals())) // free millimetres
+                .containsExactlyInAnyOrder(0.0, 400.0);
     }
 
     @Test

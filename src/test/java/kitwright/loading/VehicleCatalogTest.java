@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The vehicle catalog against the published limits: EU Directive 96/53/EC as amended by 2015/719 (width 2.55 m,
  * articulated vehicle 16.5 m, 40 t gross for 5 axles) and ISO 668 container sizes (1CC 20 ft outside 6058 x 2438 x
- * 2591 mm, 1AA 40 ft 12192 x 2438 x 2591 mm, rated gross 30 480 kg), as quoted in DOMAIN.md section 4.
+ * 2591 mm, 1AA 40 ft 12192 x 2438 x 2591 mm, rated gross 30 480 kg), as src/docs/sources.md quotes them.
  */
 class VehicleCatalogTest {
     private static final Path CATALOG = Path.of("stock-catalogs", "vehicles.csv");

@@ -87,7 +87,7 @@ class KitMetricsCalculatorTest {
         Map<String, Material> materials = MetricsFixtures.materials();
         KitMetrics m = KitMetricsCalculator.of(MetricsFixtures.kit(materials), plan());
         // Bought: 42 m of CHS 48.3x3.2 and 12 m of CHS 60.3x3.2; the 2.5 m rack piece is not bought.
-        // EN 10219-2 table masses (DOMAIN.md section 3): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
+        // EN 10219-2 table masses (from memory, src/docs/sources.md): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
         double tableMass = 42 * 3.56 + 12 * 4.51;
         assertThat(m.boughtMassKg()).isCloseTo(tableMass, within(54 * 0.01));
         // The factor and its source are the ones in stock-catalogs/materials.csv (read by the project's reader).
@@ -131,7 +131,7 @@ class KitMetricsCalculatorTest {
     }
 
     @Test
-    @DisplayName("Reuse ratio from structures on a hand-made case: 300 bars serving 750 members = 2.5 (DOMAIN.md 6)")
+    @DisplayName("Reuse ratio from structures on a hand-made case: 300 bars serving 750 members = 2.5 (src/docs/sources.md)")
     void reuseRatio() {
         // Kit quantity per mark is the largest count any one structure needs: A 200, B 100 -> 300 bars.
         Kit base = MetricsFixtures.kit(Map.of());
@@ -163,7 +163,7 @@ class KitMetricsCalculatorTest {
         KitMetrics m = KitMetricsCalculator.of(kit, new CutPlan(List.of()));
         assertThat(m.bars()).isEqualTo(300);
         assertThat(m.members()).isEqualTo(750);
-        assertThat(m.reuseRatio()).as("DOMAIN.md section 6 worked figure").isEqualTo(2.5);
+        assertThat(m.reuseRatio()).as("src/docs/sources.md worked figure").isEqualTo(2.5);
     }
 
     @Test

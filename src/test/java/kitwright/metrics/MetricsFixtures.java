@@ -64,8 +64,8 @@ public final class MetricsFixtures {
     }
 
     /**
-     * A cutting pattern whose offcut follows the saw model of issue 3: offcut = stock - 2 trim - sum(lengths) -
-     * pieces x kerf, floored at 0; a remnant from MIN_REMNANT up.
+     * A cutting pattern whose offcut follows the saw model (src/docs/sources.md): offcut = stock - 2 trim
+     * - sum(lengths) - pieces x kerf, floored at 0; a remnant from MIN_REMNANT up.
      */
     public static CutPattern pattern(double stock, Origin origin, int count, Cut... cuts) {
         double used = 0;

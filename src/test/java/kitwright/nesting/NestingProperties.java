@@ -21,7 +21,7 @@ class NestingProperties {
 
     @BeforeContainer
     static void loadSolvers() {
-        com.google.ortools.Loader.loadNativeLibraries();
+        kitwright.natives.SolverLibraries.load();
     }
 
     @Provide

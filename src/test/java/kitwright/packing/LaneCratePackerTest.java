@@ -29,7 +29,7 @@ class LaneCratePackerTest {
     }
 
     @Test
-    @DisplayName("105 bundles of d = 100 fill one 1000 x 1000 section in staggered rows (hand count, DOMAIN.md 4)")
+    @DisplayName("105 bundles of d = 100 fill one 1000 x 1000 section in staggered rows (hand count, src/docs/sources.md)")
     void reachesTheStaggeredCount() {
         List<CrateType> crates = List.of(crate("cube", 2000, 1000, 1000, 50, 100_000, 100.0));
         assertThat(pack(bundles(105, 2000, 100, 10), List.of(), crates).crates()).hasSize(1);

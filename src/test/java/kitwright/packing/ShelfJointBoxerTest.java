@@ -13,7 +13,7 @@ class ShelfJointBoxerTest {
     private final ShelfJointBoxer boxer = new ShelfJointBoxer();
 
     @Test
-    @DisplayName("square grid: d = 100 in 600 x 400 x 300 holds 6 * 4 * 3 = 72 (DOMAIN.md 4, 52 % fill)")
+    @DisplayName("square grid: d = 100 in 600 x 400 x 300 holds 6 * 4 * 3 = 72 (src/docs/sources.md, 52 % fill)")
     void squareGridCount() {
         List<JointBoxLoad> boxes = boxer.box(List.of(new Joint("N", 100, 0.2, 150)), JointBox.DEFAULT);
         assertThat(boxes).extracting(JointBoxLoad::jointCount).containsExactly(72, 72, 6);

@@ -34,8 +34,8 @@ import org.junit.jupiter.api.Test;
  * other tests prove nothing.
  *
  * <p>Hand-made kit (invented lengths, steel CHS, 2 mm clearance, 10 mm end allowance): H 60.3x3.2 x 2000, A 48.3x3.2
- * x 1900, B 50.0x2.0 x 1900 (an invented size), E 21.3x2.0 x 900 twice. Worst case by EN 10219-1 (from memory):
- * outside diameter +1 % (at least 0.5 mm), wall +10 % for T &lt;= 5 mm, and the 1 mm weld bead the project assumes:
+ * x 1900, B 50.0x2.0 x 1900 (an invented size), E 21.3x2.0 x 900 twice. Worst case by EN 10219-2 (from memory,
+ * src/docs/sources.md): outside diameter +1 % (at least 0.5 mm), wall +10 % for T &lt;= 5 mm, and the 1 mm weld bead the project assumes:
  * <ul>
  *   <li>H: outside 60.3 + 0.603 = 60.903, bore 60.3 - 0.603 - 2 x 3.52 - 1 = 51.657;</li>
  *   <li>A: outside 48.3 + 0.5 = 48.8, bore 48.3 - 0.5 - 2 x 3.52 - 1 = 39.76 (48.8 + 2 = 50.8 &lt;= 51.657: A fits
