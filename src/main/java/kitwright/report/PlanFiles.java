@@ -9,6 +9,8 @@ import kitwright.plan.PlanResult;
 import kitwright.report.cutting.CutListCsv;
 import kitwright.report.cutting.OrderCsv;
 import kitwright.report.cutting.RackAfterCsv;
+import kitwright.report.labels.LabelSet;
+import kitwright.report.labels.LabelsHtml;
 
 /**
  * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
@@ -32,6 +34,8 @@ public final class PlanFiles {
         files.put("cut-list.csv", CutListCsv.format(kit, result.cutting()));
         files.put("rack-after.csv", RackAfterCsv.format(kit, result.cutting()));
         files.putAll(NestingFiles.files(result.nesting().plan()));
+        files.put(LabelsHtml.FILE, LabelsHtml.render(kit.name(), date.toString(), LabelSet.of(kit,
+                result.cutting(), result.nesting().plan().bundles(), result.crates(), date.toString())));
         if (result.logisticsPlanned()) {
             files.put(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(result.crates(),
                     result.nesting().plan().bundles()));
