@@ -24,7 +24,7 @@ class PlanCommandTest {
         WrittenPlans.planFolder(Path.of("sample-kits", "cinema-6"), out, java.time.LocalDate.of(2025, 6, 30));
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
-                "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
+                "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "labels.html", "nests.csv",
                 "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);
