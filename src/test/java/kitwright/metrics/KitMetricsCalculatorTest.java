@@ -144,15 +144,17 @@ class KitMetricsCalculatorTest {
     }
 
     @Test
-    @DisplayName("Without structures.csv the members are the bars the kit needs; without materials masses are null")
+    @DisplayName("Without structures.csv there are no members and no reuse ratio (null, as check has it);"
+            + " without materials masses are null")
     void withoutStructuresOrMaterials() {
         Kit kit = new Kit(null, KitSettings.defaults("plain"),
                 List.of(MetricsFixtures.bar("A", CHS_48, 2900, 12, 10), MetricsFixtures.bar("B", CHS_48, 1800, 3, 3)),
                 List.of(), List.of(), MetricsFixtures.catalog(), Map.of(), List.of(), List.of());
         KitMetrics m = KitMetricsCalculator.of(kit, plan());
-        assertThat(m.members()).isEqualTo(13);
-        assertThat(m.reuseRatio()).isCloseTo(13.0 / 15, within(1e-12));
+        assertThat(m.members()).isNull();
+        assertThat(m.reuseRatio()).isNull();
         assertThat(m.kitMassKg()).isNull();
+        assertThat(m.usedStockMassKg()).isNull();
         assertThat(m.boughtMassKg()).isNull();
         assertThat(m.co2eKg()).isNull();
         assertThat(m.carbon()).isEmpty();
