@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.model.Kit;
+import kitwright.plan.JointClearance;
 import kitwright.plan.KitSummary;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -16,7 +17,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = {
             "Reads and validates a kit folder and its catalogs, then prints a summary: marks, bars, total cut"
-                    + " length and mass per section, joints, members per structure, the reuse ratio and the spares.",
+                    + " length and mass per section, joints, members per structure, the reuse ratio and the"
+                    + " spares; a warning for each bar end that would sit inside the smallest joint of joints.csv.",
             "",
             "Every problem is listed as FILE:LINE: COLUMN: what is wrong (what was expected); nothing is"
                     + " written. Exit code 0 when the kit is valid, 2 when it has problems."
@@ -40,6 +42,9 @@ public final class CheckCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         out.print(SummaryText.format(KitSummary.of(kit)));
         out.println();
+        for (String warning : JointClearance.warnings(kit)) {
+            out.println("Warning: " + warning);
+        }
         out.println("Tube catalog: " + kit.catalog().file());
         out.println("The kit is valid.");
         out.flush();

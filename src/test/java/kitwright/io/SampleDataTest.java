@@ -100,7 +100,7 @@ class SampleDataTest {
     }
 
     @Test
-    void theCinemaOptionsDescribeTheSameStructuresWithDifferentMarks() throws Exception {
+    void theCinemaOptionsReshapeTheSameStructuresToTheirOwnMarks() throws Exception {
         Set<String> nestingChain = Set.of("CHS 88.9x3.2", "CHS 76.1x3.2", "CHS 60.3x3.2", "CHS 48.3x3.2",
                 "CHS 33.7x2.6");
         Map<String, Integer> firstMembers = null;
@@ -115,7 +115,10 @@ class SampleDataTest {
             assertThat(members).as(name + ": members per structure").isEqualTo(firstMembers);
             assertThat(summary.bars()).as(name + ": bars").isBetween(200, 600);
             assertThat(kit.bars()).allMatch(b -> nestingChain.contains(b.section())
-                    && b.lengthMm() >= 700 && b.lengthMm() <= 3000);
+                    && b.lengthMm() >= 600 && b.lengthMm() <= 3000);
+            // every member is exactly its mark's length: node to node minus the deduction at each end
+            assertThat(kit.bars()).allSatisfy(b -> assertThat(b.lengthMm()).as(name + " " + b.mark())
+                    .isEqualTo(b.nodeToNodeMm() - b.startDeductionMm() - b.endDeductionMm()));
             assertThat(kit.joints()).isNotEmpty();
         }
         assertThat(firstMembers).containsOnlyKeys("screen-frame", "ticket-canopy", "lighting-mast");
