@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import java.util.function.Consumer;
 import kitwright.compare.CompareFiles;
@@ -15,6 +17,7 @@ import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
 import kitwright.io.Problem;
+import kitwright.io.RunInputs;
 import kitwright.model.Status;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -89,9 +92,15 @@ public final class CompareCommand implements Callable<Integer> {
             err.flush();
             return ExitCode.INVALID_INPUT.code();
         }
+        refuseRepeatedKits();
         if (planner == null) {
             checkKits(); // the whole chain reads kit folders; another planner reads what it likes
         }
+        RunInputs inputs = new RunInputs(List.of());
+        for (Path kitDir : kitDirs) {
+            inputs = inputs.and(RunInputs.ofKit(kitDir));
+        }
+        inputs.refuseFolder(out);
         Consumer<String> progress = line -> {
             synchronized (err) {
                 err.println(line);
@@ -120,6 +129,19 @@ public final class CompareCommand implements Callable<Integer> {
             return ExitCode.NO_FEASIBLE_PLAN.code();
         }
         return ExitCode.OK.code();
+    }
+
+    /** One kit given twice (under any spelling) would be compared with itself: bad arguments. */
+    private void refuseRepeatedKits() throws InvalidInputException {
+        Map<Path, Path> seen = new HashMap<>();
+        for (Path kitDir : kitDirs) {
+            Path first = seen.putIfAbsent(new RunInputs(List.of(kitDir)).paths().get(0), kitDir);
+            if (first != null) {
+                String spelling = first.equals(kitDir) ? "" : " (as " + first + " and " + kitDir + ")";
+                throw new InvalidInputException(new Problem(null, 0, "KIT_DIR", "the kit " + kitDir
+                        + " is given twice" + spelling + " (expected different kit options to compare)"));
+            }
+        }
     }
 
     /** Reads every option before planning any, so that bad input in the last one costs no planning time. */

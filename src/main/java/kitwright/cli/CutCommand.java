@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.CutProgress;
@@ -11,9 +12,10 @@ import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
-import kitwright.io.OutputFile;
+import kitwright.io.RunInputs;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
+import kitwright.io.Problem;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
 import kitwright.model.Status;
@@ -95,9 +97,14 @@ public final class CutCommand implements Callable<Integer> {
     Path out;
 
     @Option(names = "--spares-from-offcuts",
-            description = "Fill offcuts with spare bars of the section's marks, most-used first, buying nothing"
-                    + " more.")
+            description = "Without a spares policy in kit.json: fill offcuts with spare bars of the section's"
+                    + " marks, most-used first, buying nothing more. With a policy, the policy sets the spares"
+                    + " (see check --help).")
     boolean sparesFromOffcuts;
+
+    @Option(names = "--force",
+            description = "Let --json replace a file that kitwright did not write (never an input of the run).")
+    boolean force;
 
     @Spec
     CommandSpec spec;
@@ -110,11 +117,12 @@ public final class CutCommand implements Callable<Integer> {
             err.println("kitwright: warning: no materials, so masses are left out"
                     + (kitDir == null ? " (give --materials FILE)" : ""));
         }
+        RunInputs inputs = kitDir != null ? RunInputs.ofKit(kitDir) : RunInputs.of(barsFile, stockFile, materialsFile);
         if (json != null) {
-            OutputFile.check(json);
+            OutputGuards.checkJson(json, out, inputs, force);
         }
         if (out != null) {
-            OutputFolder.check(out);
+            OutputGuards.checkFolder(out, inputs);
         }
         long start = System.nanoTime();
         CutProgress progress = (stage, section, bound, best) -> {
@@ -127,7 +135,7 @@ public final class CutCommand implements Callable<Integer> {
         err.flush();
         String planJson = PrettyJson.write(plan);
         if (json != null) {
-            OutputFile.write(json, planJson);
+            OutputGuards.writeJson(json, planJson, inputs, force);
         }
         if (out != null) {
             try (OutputFolder folder = OutputFolder.create(out)) {
@@ -164,12 +172,19 @@ public final class CutCommand implements Callable<Integer> {
         check(trim, "--trim", true);
         check(minRemnant, "--min-remnant", true);
         check(timeLimit, "--time-limit", false);
+        Kit kit;
         if (kitDir != null) {
-            Kit kit = KitReader.read(kitDir);
-            return kit.withSettings(override(kit.settings()));
+            kit = KitReader.read(kitDir);
+            kit = kit.withSettings(override(kit.settings()));
+        } else {
+            String name = String.valueOf(barsFile.toAbsolutePath().getParent().getFileName());
+            kit = KitReader.fromFiles(barsFile, stockFile, materialsFile, override(KitSettings.defaults(name)));
         }
-        String name = String.valueOf(barsFile.toAbsolutePath().getParent().getFileName());
-        return KitReader.fromFiles(barsFile, stockFile, materialsFile, override(KitSettings.defaults(name)));
+        Optional<String> kerfProblem = KitReader.kerfProblem(kit.settings().kerfMm(), kit.catalog());
+        if (kerfProblem.isPresent()) {
+            throw new InvalidInputException(new Problem(null, 0, "--kerf", kerfProblem.get()));
+        }
+        return kit;
     }
 
     private KitSettings override(KitSettings settings) {

@@ -80,6 +80,9 @@ final class CutSummaryText {
         for (SectionCutPlan s : plan.sections()) {
             if (s.status() == Status.INFEASIBLE) {
                 sb.append(s.section()).append(": INFEASIBLE: ").append(s.reason()).append('\n');
+            } else if (s.reason() != null) {
+                sb.append(s.section()).append(": ").append(s.status()).append(", ").append(s.reason())
+                        .append(" (this plan may differ on a faster or slower machine)\n");
             }
             if (!s.spares().isEmpty()) {
                 sb.append(s.section()).append(": spares cut: ").append(s.spares().stream()

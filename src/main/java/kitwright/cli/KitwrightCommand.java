@@ -19,7 +19,8 @@ import picocli.CommandLine.Command;
         },
         footer = {
             "",
-            "Exit codes: 0 ok, 1 internal error, 2 invalid input (bad arguments or data), 3 no feasible plan.",
+            "Exit codes: 0 ok, 1 out of memory, I/O error or internal error (one line says which), 2 invalid input (bad",
+            "arguments or data, or an output that would replace an input or a file of yours), 3 no feasible plan.",
             "",
             "kitwright plans material and logistics only. It does not check structural capacity, joints, lifting",
             "or load securing; follow local codes and licensed professionals."
@@ -42,6 +43,15 @@ public final class KitwrightCommand implements Runnable {
         cl.setUsageHelpWidth(110);
         cl.setExitCodeExceptionMapper(KitwrightCommand::exitCodeOf);
         cl.setExecutionExceptionHandler(KitwrightCommand::handleExecutionException);
+        // Errors (out of memory) pass picocli's handler by; catch them here so they too print one line.
+        CommandLine.IExecutionStrategy last = new CommandLine.RunLast();
+        cl.setExecutionStrategy(parsed -> {
+            try {
+                return last.execute(parsed);
+            } catch (Error e) {
+                return Failures.report(e, parsed.commandSpec().commandLine().getErr());
+            }
+        });
         cl.setParameterExceptionHandler((ex, args) -> {
             PrintWriter err = ex.getCommandLine().getErr();
             err.println("kitwright: " + ex.getMessage());
@@ -75,10 +85,6 @@ public final class KitwrightCommand implements Runnable {
             err.flush();
             return ExitCode.INVALID_INPUT.code();
         }
-        err.println("kitwright: internal error: " + ex);
-        ex.printStackTrace(err);
-        err.println("This is a bug or an environment problem; nothing was written.");
-        err.flush();
-        return ExitCode.INTERNAL_ERROR.code();
+        return Failures.report(ex, err);
     }
 }

@@ -14,7 +14,7 @@ import kitwright.spares.SparesStage;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
-import kitwright.io.OutputFile;
+import kitwright.io.RunInputs;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
@@ -49,9 +49,10 @@ import picocli.CommandLine.Spec;
             "",
             "Fit rule: a tube fits another when its largest outside diameter plus",
             "the clearance (kit.json nestClearanceMm, default 2.0 mm, diametral) is",
-            "at most the other's smallest bore. worst-case: steel by EN 10219-1",
+            "at most the other's smallest bore. worst-case: steel by EN 10219-2",
             "(outside diameter +/-1 %%, 0.5 to 10 mm; wall +/-10 %% up to 5 mm,",
-            "+/-0.5 mm above) less the weld bead (catalog weld_bead_mm, else 1.0 mm",
+            "+/-0.5 mm above; above 406.4 mm diameter +/-10 %%, at most 2 mm)",
+            "less the weld bead (catalog weld_bead_mm, else 1.0 mm",
             "for steel); other materials by the catalog's od_tolerance_mm and",
             "wall_tolerance_pct. nominal: nominal sizes. Out-of-roundness and",
             "straightness are not counted. Guests keep nestEndAllowanceMm (default",
@@ -92,6 +93,10 @@ public final class NestCommand implements Callable<Integer> {
             description = "Date printed on the report (default: today). Fix it to get byte-identical output.")
     LocalDate date;
 
+    @Option(names = "--force",
+            description = "Let --json replace a file that kitwright did not write (never an input of the run).")
+    boolean force;
+
     @Spec
     CommandSpec spec;
 
@@ -107,11 +112,12 @@ public final class NestCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
+        RunInputs inputs = RunInputs.ofKit(kitDir);
         if (out != null) {
-            OutputFolder.check(out);
+            OutputGuards.checkFolder(out, inputs);
         }
         if (json != null) {
-            OutputFile.check(json);
+            OutputGuards.checkJson(json, out, inputs, force);
         }
         if (tolerance != null) {
             kit = kit.withSettings(kit.settings().withNestTolerance(tolerance));
@@ -150,7 +156,7 @@ public final class NestCommand implements Callable<Integer> {
             }
         }
         if (json != null) {
-            OutputFile.write(json, PrettyJson.write(plan));
+            OutputGuards.writeJson(json, PrettyJson.write(plan), inputs, force);
         }
         PrintWriter stdout = spec.commandLine().getOut();
         stdout.print(summary(kit, result));

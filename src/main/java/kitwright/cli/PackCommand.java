@@ -10,7 +10,7 @@ import java.util.function.Function;
 import java.util.stream.Collectors;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
-import kitwright.io.OutputFile;
+import kitwright.io.RunInputs;
 import kitwright.io.OutputFolder;
 import kitwright.io.Problem;
 import kitwright.loading.LoadPlan;
@@ -88,6 +88,10 @@ public final class PackCommand implements Callable<Integer> {
                     + " to FILE. Default: none.")
     Path json;
 
+    @Option(names = "--force",
+            description = "Let --json replace a file that kitwright did not write (never an input of the run).")
+    boolean force;
+
     @Spec
     CommandSpec spec;
 
@@ -109,11 +113,12 @@ public final class PackCommand implements Callable<Integer> {
         Kit kit = KitReader.read(kitDir);
         checkCatalogs(kit);
         checkStructure(kit);
+        RunInputs inputs = RunInputs.ofKit(kitDir);
         if (out != null) {
-            OutputFolder.check(out);
+            OutputGuards.checkFolder(out, inputs);
         }
         if (json != null) {
-            OutputFile.check(json);
+            OutputGuards.checkJson(json, out, inputs, force);
         }
         long start = System.nanoTime();
         stderr.println("pack: cutting and nesting " + kit.bars().stream().mapToInt(b -> b.quantity()).sum()
@@ -162,7 +167,7 @@ public final class PackCommand implements Callable<Integer> {
             writeFolder(crates, loads, upstreamBundles.plan().bundles());
         }
         if (json != null) {
-            OutputFile.write(json, LogisticsJson.write(crates, loads));
+            OutputGuards.writeJson(json, LogisticsJson.write(crates, loads), inputs, force);
         }
         stdout.print(PackSummary.text(kit.name(), share, crates, loads, kit.crates()));
         LogisticsCautions.all().forEach(c -> stdout.println("Caution, " + c.heading().toLowerCase(java.util.Locale.ROOT)

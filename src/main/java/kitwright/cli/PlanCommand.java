@@ -12,6 +12,7 @@ import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.io.OutputFolder;
 import kitwright.io.PrettyJson;
+import kitwright.io.RunInputs;
 import kitwright.model.Kit;
 import kitwright.plan.PlanProgress;
 import kitwright.plan.PlanResult;
@@ -41,6 +42,9 @@ import picocli.CommandLine.Spec;
             "  plan.json          every stage as data; summary.json the kit summary",
             "  timing.json        seconds per stage (the only file that changes between identical runs)",
             "",
+            "With a spares policy in kit.json, the service-life spares that check states are cut from offcuts",
+            "first and bought only for the rest (the model: check --help).",
+            "",
             "Progress goes to stderr. The folder is written beside DIR and moved into place only when",
             "complete; an existing DIR is replaced only when kitwright wrote it. Exit code 2 on invalid input",
             "(nothing written), 3 when some part has no feasible plan (the rest is still written)."
@@ -67,8 +71,9 @@ public final class PlanCommand implements Callable<Integer> {
     LocalDate date;
 
     @Option(names = "--spares-from-offcuts",
-            description = "Fill offcuts with spare bars of the section's marks (most-used first), buying nothing"
-                    + " more.")
+            description = "Without a spares policy in kit.json: fill offcuts with spare bars of the section's"
+                    + " marks (most-used first), buying nothing more. With a policy, the policy sets the spares"
+                    + " (see check --help).")
     boolean sparesFromOffcuts;
 
     @Spec
@@ -77,7 +82,7 @@ public final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() throws InvalidInputException, IOException {
         Kit kit = KitReader.read(kitDir);
-        OutputFolder.check(out);
+        OutputGuards.checkFolder(out, RunInputs.ofKit(kitDir));
         PrintWriter err = spec.commandLine().getErr();
         PlanResult result = Planner.run(kit, new Planner.Options(sparesFromOffcuts), progress(err));
         LocalDate day = date != null ? date : LocalDate.now();

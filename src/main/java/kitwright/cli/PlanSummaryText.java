@@ -4,8 +4,6 @@ import java.util.Locale;
 import kitwright.nesting.NestPlan;
 import kitwright.nesting.NestResult;
 import kitwright.plan.PlanResult;
-import kitwright.model.SparesPolicy;
-import kitwright.spares.SparesOutcome;
 
 /** The short text {@code plan} prints when it has finished: stock, bundles, crates and trips with their bounds. */
 final class PlanSummaryText {
@@ -15,7 +13,7 @@ final class PlanSummaryText {
     static String format(PlanResult result) {
         StringBuilder sb = new StringBuilder(CutSummaryText.format(result.kit(), result.cutting()));
         if (result.spares() != null) {
-            sb.append(spares(result.spares())).append(System.lineSeparator());
+            sb.append(SparesText.outcome(result.spares())).append(System.lineSeparator());
         }
         NestResult nesting = result.nesting();
         NestPlan nest = nesting.plan();
@@ -35,24 +33,6 @@ final class PlanSummaryText {
         sb.append(System.lineSeparator()).append("Material and logistics planning only: no structural, lifting or"
                 + " load-securing check. Follow local codes and licensed professionals.").append(System.lineSeparator());
         return sb.toString();
-    }
-
-    /** One line on the service-life spares: the policy, where the spares came from, their cost, the kit's level. */
-    static String spares(SparesOutcome spares) {
-        SparesPolicy p = spares.sizing().policy();
-        return String.format(Locale.ROOT, "Service-life spares (%s %% of bars lost per cycle, %d cycles, kit level %s"
-                        + " %%): %d to make, %d cut from offcuts, %d bought%s, extra stock cost %s; every mark"
-                        + " covered with probability %.1f %%.",
-                plain(100 * p.lossRatePerCycle()), p.cycles(), plain(100 * p.serviceLevel()),
-                spares.sizing().totalToMake(), spares.fromOffcuts(), spares.bought(),
-                spares.missing() > 0 ? ", " + spares.missing() + " MISSING (stock too short or too few)" : "",
-                spares.extraCost() == null ? "unknown (no prices)" : String.format(Locale.ROOT, "%.2f",
-                        spares.extraCost()), 100 * spares.sizing().kitLevel());
-    }
-
-    private static String plain(double value) {
-        return java.math.BigDecimal.valueOf(value).setScale(4, java.math.RoundingMode.HALF_UP).stripTrailingZeros()
-                .toPlainString();
     }
 
     /** A bundle-count bound: whole, or fractional with the whole count it proves ("154.33, so at least 155"). */

@@ -5,6 +5,7 @@ import java.io.Writer;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.report.SpreadsheetCell;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
@@ -26,7 +27,7 @@ public final class CompareCsv {
         CSVFormat format = CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get();
         try (CSVPrinter printer = new CSVPrinter(out, format)) {
             for (OptionSummary o : options) {
-                printer.printRecord(row(o));
+                printer.printRecord(SpreadsheetCell.row(row(o)));
             }
         }
     }

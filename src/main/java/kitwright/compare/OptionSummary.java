@@ -9,9 +9,9 @@ import kitwright.metrics.KitMetrics;
 import kitwright.model.Status;
 
 /**
- * The figures of one kit option, with exactly the keys of {@code compare.json} (issue 7), in that order. Lengths in
- * millimetres, masses in kilograms, money in the catalogs' currency, percentages of the stock length cut. A figure
- * that is not known (no prices, no materials, a stage that did not run) is null.
+ * The figures of one kit option, with exactly the keys of {@code compare.json} (src/docs/compare.md), in that
+ * order. Lengths in millimetres, masses in kilograms, money in the catalogs' currency, percentages of the stock
+ * length cut. A figure that is not known (no prices, no materials, a stage that did not run) is null.
  *
  * @param kit            the kit's name
  * @param marks          bar types
@@ -40,8 +40,8 @@ import kitwright.model.Status;
     "tripCost", "status"})
 public record OptionSummary(String kit, int marks, int bars, Integer members, Double reuseRatio, int stockPieces,
                             double stockLengthMm, Double cost, double offcutPct, double scrapPct, double remnantPct,
-                            Double kitMassKg, Double boughtMassKg, Double usedStockMassKg, Double co2eKg, Integer bundles, Integer crates,
-                            Integer vehicles, Double tripCost, Status status) {
+                            Double kitMassKg, Double boughtMassKg, Double usedStockMassKg, Double co2eKg,
+                            Integer bundles, Integer crates, Integer vehicles, Double tripCost, Status status) {
     public OptionSummary {
         Objects.requireNonNull(kit, "kit");
         Objects.requireNonNull(status, "status");

@@ -1,6 +1,5 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -12,6 +11,7 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The exact arc-flow model of cutting stock (Valério de Carvalho 1999, "Exact solution of bin-packing problems
@@ -50,7 +50,7 @@ final class ArcFlowModel {
      */
     static Outcome solve(IntegerInstance instance, int[] demand, int[] available, Packing hint, long lower,
                          long upper, double deterministicTime, int maxArcs, Deadline deadline) {
-        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
+        SolverLibraries.load(); // the model objects need the natives, not only the solver
         Graph graph = Graph.build(instance, demand, maxArcs);
         if (graph == null) {
             return null;

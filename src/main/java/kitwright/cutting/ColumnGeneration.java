@@ -1,6 +1,5 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
@@ -8,6 +7,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The linear relaxation of cutting stock over all stock types, solved by column generation (Gilmore and Gomory
@@ -74,7 +74,7 @@ final class ColumnGeneration implements AutoCloseable {
     }
 
     ColumnGeneration(IntegerInstance instance, int iterationLimit, Deadline deadline) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         this.instance = instance;
         this.iterationLimit = iterationLimit;
         this.deadline = deadline;

@@ -1,7 +1,7 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpSolver;
+import kitwright.natives.SolverLibraries;
 
 /** CP-SAT settings shared by the integer models: one worker, fixed seed, deterministic work limit first. */
 final class CpSatRun {
@@ -10,7 +10,7 @@ final class CpSatRun {
 
     /** A solver that runs one worker for at most {@code deterministicTime} units or until the deadline. */
     static CpSolver solver(double deterministicTime, Deadline deadline) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         CpSolver solver = new CpSolver();
         solver.getParameters()
                 .setNumWorkers(1)

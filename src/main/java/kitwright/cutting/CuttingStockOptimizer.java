@@ -83,6 +83,8 @@ public final class CuttingStockOptimizer implements SectionSolver {
         private boolean provenByModel;
         private double linearBound = Double.NaN;
         private Double firstFitValue;
+        /** Whether the wall-clock deadline cut a step short or left one out. */
+        private boolean timedOut;
 
         Search(SectionProblem problem, CutProgress progress) {
             this.problem = problem;
@@ -151,9 +153,10 @@ public final class CuttingStockOptimizer implements SectionSolver {
                 if (!proven() && !deadline.passed() && incumbent != null
                         && instance.totalPieces(demand) <= BACKTRACKING_PIECES) {
                     StockCountBound.Result whole = StockCountBound.raise(instance, generation, lowerCost(),
-                            incumbentCost, COUNT_TESTS, deadline);
+                            incumbentCost, COUNT_TESTS, limits.stockCountSteps(), deadline);
                     bound = Math.max(bound, whole.bound());
                     counts = whole.counts();
+                    timedOut |= whole.timedOut();
                     report("lower bound");
                 }
                 if (!proven() && !deadline.passed()) {
@@ -202,7 +205,10 @@ public final class CuttingStockOptimizer implements SectionSolver {
             long cost = plan.cost(instance);
             long lower = provenByModel ? cost : AchievableValues.nextAchievable(instance, bound, cost);
             Status status = cost <= lower ? Status.OPTIMAL : Status.FEASIBLE;
-            return done(PlanAssembler.plan(instance, plan, status, Math.min(lower, cost)));
+            SectionCutPlan assembled = PlanAssembler.plan(instance, plan, status, Math.min(lower, cost));
+            // a step the deadline cut short makes the plan depend on the machine's speed: say so
+            boolean stoppedByClock = status == Status.FEASIBLE && (timedOut || deadline.passed());
+            return done(stoppedByClock ? assembled.withReason(SectionCutPlan.STOPPED_BY_TIME_LIMIT) : assembled);
         }
 
         private Outcome done(SectionCutPlan plan) {

@@ -1,6 +1,5 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -13,6 +12,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The integer phase over the generated patterns: the master problem of column generation with whole counts,
@@ -39,7 +39,7 @@ final class PatternSelection {
      */
     static Packing solve(IntegerInstance instance, List<Pattern> pool, int[] demand, int[] available, Packing hint,
                          long lower, long upper, double deterministicTime, Deadline deadline) {
-        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
+        SolverLibraries.load(); // the model objects need the natives, not only the solver
         Set<Pattern> unique = new LinkedHashSet<>();
         for (Pattern p : pool) {
             Pattern capped = capped(p, demand);

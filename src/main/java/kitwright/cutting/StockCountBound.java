@@ -23,31 +23,43 @@ import java.util.List;
  * (Scheithauer and Terno 1995, EJOR 84) applied to the stock counts.
  */
 final class StockCountBound {
+    /** Most count vectors kept, and most numbers they hold together (memory: 8 bytes each). */
     private static final int MAX_VECTORS = 20_000;
+    private static final long MAX_CELLS = 4_000_000;
+    /** The deadline is read once per this many steps of work. */
+    private static final int CLOCK_EVERY = 1024;
 
     private StockCountBound() {
     }
 
     /**
-     * @param bound  the raised lower bound, integer cost units
-     * @param counts a cheapest count vector whose relaxation covers the demand, or null when none was decided
+     * @param bound    the raised lower bound, integer cost units
+     * @param counts   a cheapest count vector whose relaxation covers the demand, or null when none was decided
+     * @param timedOut whether the wall-clock deadline, rather than the work limits, ended the search early
      */
-    record Result(long bound, int[] counts) {
+    record Result(long bound, int[] counts, boolean timedOut) {
     }
 
+    /**
+     * @param maxTests relaxations solved at most
+     * @param maxWork  steps of the listing (search nodes and dominance checks) at most: a deterministic limit
+     */
     static Result raise(IntegerInstance instance, ColumnGeneration generation, long lower, long incumbent,
-                        int maxTests, Deadline deadline) {
+                        int maxTests, long maxWork, Deadline deadline) {
         int[] demand = instance.demands();
         int pieces = instance.totalPieces(demand);
         int[] most = new int[instance.stocks()];
         for (int k = 0; k < most.length; k++) {
             most[k] = instance.limited(k) ? Math.min(instance.limit[k], pieces) : pieces;
         }
-        List<long[]> vectors = new ArrayList<>(); // {cost, m_0, ..., m_K-1}
-        long[] current = new long[instance.stocks() + 1];
-        if (!enumerate(instance, most, instance.load(demand), lower, incumbent, 0, 0, 0, current, vectors)) {
-            return new Result(lower, null);
+        if (deadline.passed()) {
+            return new Result(lower, null, true);
         }
+        Listing listing = new Listing(instance, most, instance.load(demand), lower, incumbent, maxWork, deadline);
+        if (!listing.complete()) {
+            return new Result(lower, null, listing.timedOut);
+        }
+        List<long[]> vectors = listing.out;
         vectors.sort(Comparator.<long[]>comparingLong(v -> v[0]).thenComparing(Arrays::compare));
         List<int[]> infeasible = new ArrayList<>();
         int tests = 0;
@@ -56,23 +68,27 @@ final class StockCountBound {
             for (int k = 0; k < counts.length; k++) {
                 counts[k] = (int) vector[k + 1];
             }
+            // every cheaper vector is decided here, so this vector's cost is a valid bound if the work stops now
+            if (!listing.spend(infeasible.size())) {
+                return new Result(vector[0], null, listing.timedOut);
+            }
             if (infeasible.stream().anyMatch(known -> below(counts, known))) {
                 continue;
             }
             if (tests >= maxTests || generation.exhausted() || deadline.passed()) {
-                return new Result(vector[0], null);
+                return new Result(vector[0], null, deadline.passed());
             }
             tests++;
             ColumnGeneration.Relaxation relaxation = generation.solve(demand, counts);
             if (relaxation.kind() == ColumnGeneration.Kind.INFEASIBLE) {
                 infeasible.add(counts);
             } else if (relaxation.kind() == ColumnGeneration.Kind.UNDECIDED) {
-                return new Result(vector[0], null);
+                return new Result(vector[0], null, deadline.passed());
             } else {
-                return new Result(vector[0], counts);
+                return new Result(vector[0], counts, false);
             }
         }
-        return new Result(incumbent, null);
+        return new Result(incumbent, null, false);
     }
 
     private static boolean below(int[] counts, int[] other) {
@@ -85,31 +101,90 @@ final class StockCountBound {
     }
 
     /**
-     * Lists count vectors with cost in [lower, incumbent) and capacity at least the pieces' size; false when there
-     * are more than MAX_VECTORS of them. Free stock types are taken at their limit.
+     * Lists count vectors with cost in [lower, incumbent) and capacity at least the pieces' size, depth first over
+     * the stock types, free ones taken at their limit. A branch is cut when even the stock types after it at their
+     * most cannot reach the size or the lower cost, which leaves the list unchanged. The listing stops, incomplete,
+     * after more than MAX_VECTORS vectors, when the work limit is spent, or when the deadline has passed.
      */
-    private static boolean enumerate(IntegerInstance instance, int[] most, long size, long lower, long incumbent,
-                                     int k, long cost, long capacity, long[] current, List<long[]> out) {
-        if (k == instance.stocks()) {
-            if (cost >= lower && cost < incumbent && capacity >= size) {
-                current[0] = cost;
-                out.add(current.clone());
+    private static final class Listing {
+        private final IntegerInstance instance;
+        private final int[] most;
+        private final long size;
+        private final long lower;
+        private final long incumbent;
+        private final long[] capacityAfter;
+        private final long[] costAfter;
+        private final int maxVectors;
+        private final Deadline deadline;
+        private final long[] current;
+        final List<long[]> out = new ArrayList<>(); // {cost, m_0, ..., m_K-1}
+        private long work;
+        private boolean timedOut;
+        private boolean stopped;
+
+        Listing(IntegerInstance instance, int[] most, long size, long lower, long incumbent, long maxWork,
+                Deadline deadline) {
+            this.instance = instance;
+            this.most = most;
+            this.size = size;
+            this.lower = lower;
+            this.incumbent = incumbent;
+            this.deadline = deadline;
+            this.work = maxWork;
+            int stocks = instance.stocks();
+            this.maxVectors = (int) Math.min(MAX_VECTORS, MAX_CELLS / (stocks + 1));
+            this.current = new long[stocks + 1];
+            capacityAfter = new long[stocks + 1];
+            costAfter = new long[stocks + 1];
+            for (int k = stocks - 1; k >= 0; k--) {
+                capacityAfter[k] = capacityAfter[k + 1] + (long) most[k] * instance.capacity[k];
+                costAfter[k] = costAfter[k + 1] + (instance.cost[k] == 0 ? 0 : most[k] * instance.cost[k]);
             }
-            return out.size() <= MAX_VECTORS;
+            visit(0, 0, 0);
         }
-        if (instance.cost[k] == 0) {
-            current[k + 1] = most[k];
-            return enumerate(instance, most, size, lower, incumbent, k + 1, cost,
-                    capacity + (long) most[k] * instance.capacity[k], current, out);
+
+        boolean complete() {
+            return !stopped;
         }
-        for (int m = 0; m <= most[k] && cost + m * instance.cost[k] < incumbent; m++) {
-            current[k + 1] = m;
-            if (!enumerate(instance, most, size, lower, incumbent, k + 1, cost + m * instance.cost[k],
-                    capacity + (long) m * instance.capacity[k], current, out)) {
-                return false;
+
+        /** Takes {@code steps} steps of work (at least one); false when the work limit or the deadline ends it. */
+        boolean spend(long steps) {
+            long before = work;
+            work -= Math.max(1, steps);
+            if (work < 0) {
+                stopped = true;
+            } else if (before / CLOCK_EVERY != work / CLOCK_EVERY && deadline.passed()) {
+                stopped = true;
+                timedOut = true;
             }
+            return !stopped;
         }
-        current[k + 1] = 0;
-        return true;
+
+        private void visit(int k, long cost, long capacity) {
+            if (stopped || !spend(1)) {
+                return;
+            }
+            if (capacity + capacityAfter[k] < size || cost + costAfter[k] < lower) {
+                return;
+            }
+            if (k == instance.stocks()) {
+                if (cost < incumbent) {
+                    current[0] = cost;
+                    out.add(current.clone());
+                    stopped = out.size() > maxVectors;
+                }
+                return;
+            }
+            if (instance.cost[k] == 0) {
+                current[k + 1] = most[k];
+                visit(k + 1, cost, capacity + (long) most[k] * instance.capacity[k]);
+                return;
+            }
+            for (int m = 0; m <= most[k] && cost + m * instance.cost[k] < incumbent && !stopped; m++) {
+                current[k + 1] = m;
+                visit(k + 1, cost + m * instance.cost[k], capacity + (long) m * instance.capacity[k]);
+            }
+            current[k + 1] = 0;
+        }
     }
 }

@@ -1,6 +1,5 @@
 package kitwright.cutting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -9,6 +8,7 @@ import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.natives.SolverLibraries;
 
 /**
  * Decides whether one stock length can cover the demand with T pieces, by a complete model over the only patterns
@@ -16,7 +16,8 @@ import java.util.List;
  *
  * <p>With T pieces of capacity C, the waste of the whole plan is at most {@code W = T*C - sum_i size_i d_i}, so every
  * pattern of the plan wastes at most W. All patterns of load at least C - W (and at most C) are enumerated
- * (depth first over the item types, at most {@code maxPatterns} of them); then CP-SAT solves
+ * (depth first over the item types, at most {@code maxPatterns} of them in at most 1,000 nodes per pattern, while
+ * the deadline has not passed); then CP-SAT solves
  * <pre>
  *   sum_p a_ip x_p &gt;= d_i  for every item type i,   sum_p x_p &lt;= T,   sum_p (C - load_p) x_p &lt;= W,
  *   x_p &gt;= 0 integer
@@ -28,6 +29,10 @@ import java.util.List;
  * (Delorme, Iori and Martello 2016, EJOR 255, section 4).
  */
 final class WasteBoundedPatterns {
+    /** Search nodes allowed for each pattern the enumeration may keep (a deterministic work limit). */
+    private static final long STEPS_PER_PATTERN = 1000;
+    /** The deadline is read once per this many nodes. */
+    private static final long CLOCK_EVERY = 1024;
     private WasteBoundedPatterns() {
     }
 
@@ -39,19 +44,22 @@ final class WasteBoundedPatterns {
     }
 
     /**
-     * @return the outcome, or null when there are more than {@code maxPatterns} patterns
+     * @return the outcome, or null when there are more than {@code maxPatterns} patterns or the listing ran out of
+     *         steps or time
      */
     static Outcome solve(IntegerInstance instance, int stock, int[] demand, long pieces, int maxPatterns,
                          double deterministicTime, Deadline deadline) {
-        Loader.loadNativeLibraries(); // the model objects need the natives, not only the solver
+        SolverLibraries.load(); // the model objects need the natives, not only the solver
         long capacity = instance.capacity[stock];
         long waste = pieces * capacity - instance.load(demand);
         if (waste < 0) {
             return new Outcome(null, true);
         }
         List<int[]> patterns = new ArrayList<>();
+        // the search may visit many nodes for each pattern it keeps: bound its steps, and watch the clock
+        long[] steps = {STEPS_PER_PATTERN * maxPatterns};
         if (!enumerate(instance, demand, capacity - waste, capacity, 0, 0, new int[instance.types()], patterns,
-                maxPatterns)) {
+                maxPatterns, steps, deadline)) {
             return null;
         }
         if (patterns.isEmpty()) {
@@ -105,9 +113,16 @@ final class WasteBoundedPatterns {
         return new Outcome(new Packing(plan), false);
     }
 
-    /** Depth first over the types from {@code type} on; false when the pattern limit is passed. */
+    /**
+     * Depth first over the types from {@code type} on; false when the pattern limit is passed, the steps left
+     * ({@code steps[0]}) are spent or the deadline has passed.
+     */
     private static boolean enumerate(IntegerInstance instance, int[] demand, long minLoad, long capacity, int type,
-                                     long load, int[] counts, List<int[]> out, int maxPatterns) {
+                                     long load, int[] counts, List<int[]> out, int maxPatterns, long[] steps,
+                                     Deadline deadline) {
+        if (--steps[0] < 0 || (steps[0] % CLOCK_EVERY == 0 && deadline.passed())) {
+            return false;
+        }
         if (type == instance.types()) {
             if (load >= minLoad && load > 0) {
                 out.add(counts.clone());
@@ -128,7 +143,7 @@ final class WasteBoundedPatterns {
         for (int c = most; c >= 0; c--) {
             counts[type] = c;
             if (!enumerate(instance, demand, minLoad, capacity, type + 1, load + (long) c * size, counts, out,
-                    maxPatterns)) {
+                    maxPatterns, steps, deadline)) {
                 counts[type] = 0;
                 return false;
             }

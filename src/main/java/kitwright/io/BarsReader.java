@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -57,6 +58,7 @@ public final class BarsReader {
             problems.add(file, 2, "", "no bars under the header (expected one row per mark)");
         }
         Map<String, Integer> firstLine = new HashMap<>();
+        Map<String, Sourced<String>> byCase = new HashMap<>(); // marks in lower case: A1 and a1 read alike
         for (CsvRow row : table.rows()) {
             String mark = row.required("mark", "the mark, the name of the bar type");
             String section = row.required("section", "a section of the tube catalog, e.g. CHS 48.3x3.2");
@@ -79,6 +81,13 @@ public final class BarsReader {
             if (earlier != null) {
                 row.problem("mark", "mark " + mark + " is already on line " + earlier
                         + " (expected each mark on one row only)");
+                continue;
+            }
+            Sourced<String> alike = byCase.putIfAbsent(mark.toLowerCase(Locale.ROOT), row.sourced(mark));
+            if (alike != null) {
+                row.problem("mark", "mark " + mark + " differs from mark " + alike.value() + " on line "
+                        + alike.line() + " only in letter case, which a saw sheet or label does not tell apart"
+                        + " (expected marks that differ in more than letter case)");
                 continue;
             }
             bars.add(row.sourced(new BarLine(mark, section, length, quantity, nodeToNode, tolerance, start, end,

@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.regex.Pattern;
 
 /**
@@ -69,15 +70,9 @@ public final class CsvRow {
             problem(column, "the value is blank (expected " + expected + ")");
             return null;
         }
-        if (text.chars().anyMatch(Character::isISOControl)) {
-            problem(column, "the name '" + text + "' holds a line break, tab or other control character (expected "
-                    + expected + ", on one line)");
-            return null;
-        }
-        if ("=+@".indexOf(text.charAt(0)) >= 0) {
-            // A cell starting so is run as a formula by spreadsheets that open the CSV outputs (OWASP: CSV injection).
-            problem(column, "the name '" + text + "' starts with '" + text.charAt(0) + "', which a spreadsheet would"
-                    + " run as a formula (expected " + expected + ", starting with a letter or digit)");
+        Optional<String> unsafe = Names.problem(text, expected);
+        if (unsafe.isPresent()) {
+            problem(column, unsafe.get());
             return null;
         }
         return text;

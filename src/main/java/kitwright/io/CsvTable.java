@@ -82,11 +82,15 @@ public final class CsvTable {
             problems.add(InputBytes.tooLarge(file, what + ", a CSV file with the columns " + columns.header()));
             return Optional.empty();
         } catch (IOException e) {
-            problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()
-                    + " (expected a readable CSV file)"));
+            problems.add(Problem.ofFile(file, "cannot read the file: " + InputBytes.reason(e)));
             return Optional.empty();
         }
         Optional<String> text = decode(file, bytes, problems);
+        Optional<Problem> hidden = InputBytes.textProblem(file, bytes, "UTF-8; save it as 'CSV UTF-8'");
+        if (text.isPresent() && hidden.isPresent()) {
+            problems.add(hidden.get());
+            return Optional.empty();
+        }
         if (text.isEmpty()) {
             return Optional.empty();
         }
@@ -104,11 +108,7 @@ public final class CsvTable {
         CharBuffer out = CharBuffer.allocate(bytes.length + 1);
         CoderResult result = decoder.decode(in, out, true);
         if (result.isError()) {
-            int line = 1;
-            for (int i = 0; i < in.position(); i++) {
-                line += bytes[i] == '\n' ? 1 : 0;
-            }
-            problems.add(file, line, "", "the file is not UTF-8 text (expected UTF-8; save it as 'CSV UTF-8')");
+            problems.add(file, InputBytes.lineOf(bytes, in.position()), "", "the file is not UTF-8 text (expected UTF-8; save it as 'CSV UTF-8')");
             return Optional.empty();
         }
         decoder.flush(out);

@@ -70,8 +70,12 @@ public final class KitJsonReader {
             problems.add(InputBytes.tooLarge(file, "the kit's settings as a JSON object of a few lines"));
             return Optional.empty();
         } catch (IOException e) {
-            problems.add(Problem.ofFile(file, "cannot read the file: " + e.getMessage()
-                    + " (expected a readable JSON file)"));
+            problems.add(Problem.ofFile(file, "cannot read the file: " + InputBytes.reason(e)));
+            return Optional.empty();
+        }
+        Optional<Problem> hidden = InputBytes.textProblem(file, bytes, "UTF-8 text");
+        if (hidden.isPresent()) {
+            problems.add(hidden.get());
             return Optional.empty();
         }
         Map<String, Integer> lines = new HashMap<>();
@@ -106,6 +110,11 @@ public final class KitJsonReader {
         String name = json.text(root, "", "name", "the kit's name").orElse(defaults.name());
         if (name.isBlank()) {
             json.report("", "name", "the name is blank (expected a name, or leave the key out to use the folder's)");
+            name = defaults.name();
+        }
+        Optional<String> unsafe = Names.problem(name, "the kit's name");
+        if (unsafe.isPresent()) {
+            json.report("", "name", unsafe.get());
             name = defaults.name();
         }
         String description = json.text(root, "", "description", "a description of the kit").orElse("");
@@ -163,7 +172,7 @@ public final class KitJsonReader {
         Optional<Double> loss = json.required(spares, "spares.", "lossRatePerCycle").flatMap(k -> json.number(
                 spares, "spares.", k, 0, true, "a share of bars lost per cycle, from 0 up to below 1"));
         Optional<Integer> cycles = json.required(spares, "spares.", "cycles").flatMap(k -> json.whole(
-                spares, "spares.", k, 1, "a whole number of assembly cycles, at least 1"));
+                spares, "spares.", k, 1, Limits.MAX_CYCLES, "a whole number of assembly cycles, at least 1"));
         Optional<Double> level = json.required(spares, "spares.", "serviceLevel").flatMap(k -> json.number(
                 spares, "spares.", k, 0, false, "a probability above 0 and below 1, e.g. 0.95"));
         loss = loss.filter(p -> json.below(spares, "spares.", "lossRatePerCycle", p, 1,
@@ -215,7 +224,18 @@ public final class KitJsonReader {
         if (first.startsWith("Trailing token")) {
             return "more text after the closing } (one JSON object per file)";
         }
+        if (first.contains("nesting depth")) {
+            return "objects and lists are nested too deeply; kit.json is one object of settings, a few of them"
+                    + " objects in turn";
+        }
+        if (first.startsWith("Unexpected end-of-input")) {
+            return "the file ends before the JSON is closed; close every {, [ and quote";
+        }
         String plain = first.replaceAll("\\s*\\(not recognized as one since Feature [^)]*\\)", "")
+                .replaceAll("\\s*\\(start marker at [^)]*\\)\\)?", "")
+                .replaceAll("\\b(VALUE_STRING|VALUE_NUMBER_INT|VALUE_NUMBER_FLOAT|VALUE_TRUE|VALUE_FALSE|VALUE_NULL)\\b",
+                        "a value")
+                .replaceAll("\\b(START_OBJECT|END_OBJECT|START_ARRAY|END_ARRAY|FIELD_NAME)\\b", "a bracket or key")
                 .replaceAll(":\\s*enable `[^`]*` to allow", "")
                 .replaceAll("\\s*\\(bound as `[^`]*`\\)", "")
                 .replaceAll(":\\s*not allowed as per `[^`]*`", "").strip();

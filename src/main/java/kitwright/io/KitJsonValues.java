@@ -117,7 +117,13 @@ final class KitJsonValues {
     }
 
     Optional<Integer> whole(JsonNode object, String prefix, String key, int minimum, String expected) {
-        Optional<Double> number = number(object, prefix, key, minimum, true, expected);
+        return whole(object, prefix, key, minimum, Limits.MAX_NUMBER, expected);
+    }
+
+    /** A whole number from {@code minimum} up to {@code maximum}. */
+    Optional<Integer> whole(JsonNode object, String prefix, String key, int minimum, double maximum,
+                            String expected) {
+        Optional<Double> number = number(object, prefix, key, minimum, true, maximum, expected);
         if (number.isPresent() && (number.get() != Math.rint(number.get()) || number.get() > Integer.MAX_VALUE)) {
             report(prefix, key, value(object, key).asText() + " is not a whole number (expected " + expected + ")");
             return Optional.empty();

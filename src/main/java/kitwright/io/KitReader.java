@@ -1,15 +1,20 @@
 package kitwright.io;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import kitwright.model.Bar;
 import kitwright.model.CrateType;
 import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
 import kitwright.model.Material;
+import kitwright.model.StockLength;
 import kitwright.model.StructureCount;
 import kitwright.model.TubeCatalog;
 import kitwright.model.VehicleType;
@@ -37,9 +42,13 @@ public final class KitReader {
             throw new InvalidInputException(Problem.ofFile(kitDir, wrong
                     + " (expected a kit folder holding bars.csv and kit.json)"));
         }
+        if (!Files.isReadable(kitDir) || !Files.isExecutable(kitDir)) {
+            throw new InvalidInputException(Problem.ofFile(kitDir, "cannot read the folder: permission denied"
+                    + " (expected a kit folder you may read; check its permissions)"));
+        }
         Path kitJsonFile = kitDir.resolve(KIT_JSON);
         KitJson kitJson = KitJsonReader.defaults(kitDir);
-        if (Files.exists(kitJsonFile)) {
+        if (present(kitJsonFile)) {
             kitJson = KitJsonReader.read(kitJsonFile, kitDir, problems).orElse(null);
             if (kitJson == null) {
                 problems.throwIfAny(); // without settings the other files cannot be judged
@@ -51,23 +60,25 @@ public final class KitReader {
         TubeCatalog catalog = catalog(kitJson.stockCatalog(), catalogNamed, materials, kitJson.materialsFile(),
                 problems);
         List<CrateType> crates = List.of();
-        if (kitJson.crateCatalog() != null || Files.exists(kitJson.crateCatalogFile())) {
+        if (kitJson.crateCatalog() != null || present(kitJson.crateCatalogFile())) {
             crates = CrateCatalogReader.read(kitJson.crateCatalogFile(), problems);
         }
         List<VehicleType> vehicles = List.of();
-        if (kitJson.vehicleCatalog() != null || Files.exists(kitJson.vehicleCatalogFile())) {
+        if (kitJson.vehicleCatalog() != null || present(kitJson.vehicleCatalogFile())) {
             vehicles = VehicleCatalogReader.read(kitJson.vehicleCatalogFile(), problems);
         }
         BarsReader.Rows lines = BarsReader.readRows(kitDir.resolve(BARS), problems);
         Path structuresFile = kitDir.resolve(STRUCTURES);
         int beforeStructures = problems.count();
-        List<Sourced<StructureCount>> structures = Files.exists(structuresFile)
+        List<Sourced<StructureCount>> structures = present(structuresFile)
                 ? StructuresReader.read(structuresFile, problems) : List.of();
         boolean structuresReadable = problems.count() == beforeStructures;
         Path jointsFile = kitDir.resolve(JOINTS);
-        List<Joint> joints = Files.exists(jointsFile)
+        List<Joint> joints = present(jointsFile)
                 ? JointsReader.read(jointsFile, settings.jointBox(), problems) : List.of();
         List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, catalog, problems);
+        kerfProblem(settings.kerfMm(), catalog).ifPresent(message -> problems.add(kitJsonFile,
+                lineOf(kitJsonFile, "\"kerfMm\""), "kerfMm", message));
         problems.throwIfAny();
         return new Kit(kitDir, settings, bars, structures.stream().map(Sourced::value).toList(), joints, catalog,
                 materials == null ? Map.of() : materials, crates, vehicles);
@@ -91,9 +102,49 @@ public final class KitReader {
                 materials == null ? Map.of() : materials, List.of(), List.of());
     }
 
+    /**
+     * Why a kerf cannot be the saw's, or empty when it can: a kerf at least as long as a stock length of the
+     * catalog (a typing slip, 13000 for 1.3) would plan one piece per stock length and offcuts past its end.
+     *
+     * @param catalog the tube catalog, or null when it could not be read (no check)
+     */
+    public static Optional<String> kerfProblem(double kerfMm, TubeCatalog catalog) {
+        if (catalog == null) {
+            return Optional.empty();
+        }
+        return catalog.stock().stream().min(Comparator.comparingDouble(StockLength::lengthMm))
+                .filter(shortest -> kerfMm >= shortest.lengthMm())
+                .map(shortest -> "the kerf " + Figures.plain(kerfMm) + " mm is not shorter than the stock length "
+                        + Figures.plain(shortest.lengthMm()) + " mm of " + shortest.section() + " (expected a saw"
+                        + " kerf of a few millimetres, shorter than every stock length)");
+    }
+
+    /** The first line of a small text file holding {@code text}, or 0 (the whole file) when none does. */
+    private static int lineOf(Path file, String text) {
+        try {
+            List<String> lines = Files.readAllLines(file);
+            for (int i = 0; i < lines.size(); i++) {
+                if (lines.get(i).contains(text)) {
+                    return i + 1;
+                }
+            }
+        } catch (IOException | UncheckedIOException e) {
+            return 0; // the file was read before; a line number is a courtesy
+        }
+        return 0;
+    }
+
+    /**
+     * True unless the file is known to be absent: a file in a folder one may not read is neither known to exist
+     * nor known to be absent, and is read so that the reader reports "permission denied", not "file not found".
+     */
+    static boolean present(Path file) {
+        return !Files.notExists(file);
+    }
+
     /** The materials, or null when a defaulted file is absent or the file has problems (no material check). */
     private static Map<String, Material> materials(Path file, boolean named, Problems problems) {
-        if (!named && !Files.exists(file)) {
+        if (!named && !present(file)) {
             return null;
         }
         int before = problems.count();
@@ -104,7 +155,7 @@ public final class KitReader {
     /** The tube catalog, or null when it is missing or has problems (section checks would mislead). */
     private static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
                                        Path materialsFile, Problems problems) {
-        if (!Files.exists(file)) {
+        if (!present(file)) {
             String hint = named ? "check the path; kit.json paths are relative to the kit folder"
                     : "put stock.csv in the kit folder or name the catalog in kit.json as \"stockCatalog\"";
             problems.add(Problem.ofFile(file, "file not found (expected a tube catalog with the columns "

@@ -11,6 +11,11 @@ public final class Limits {
     public static final double MAX_LENGTH_MM = 1_000_000;
     /** Most items in one row: bars of a mark, joints of a mark, bars of a mark one structure uses. */
     public static final int MAX_COUNT = 100_000;
+    /**
+     * Most assembly cycles of a spares policy: 10,000, a kit put up and taken down every day for 27 years. It keeps
+     * a mark's bar-cycles (bars x cycles, at most {@link #MAX_COUNT} x this) within an {@code int}.
+     */
+    public static final int MAX_CYCLES = 10_000;
     /** Largest other number: prices, masses, densities, costs, seconds. */
     public static final double MAX_NUMBER = 1e9;
     /** Largest input file, in bytes (64 MiB); also stops a device such as /dev/zero from being read forever. */

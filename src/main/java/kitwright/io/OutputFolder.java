@@ -9,20 +9,24 @@ import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.nio.file.SimpleFileVisitor;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * A result folder that appears whole or not at all. Files are written into a hidden temporary folder beside the
  * target (same parent, so the same file system); {@link #commit} then moves it into place with an atomic rename
  * where the file system allows. An existing target is replaced only after the new folder is complete, and only
- * when kitwright wrote it (it holds the marker file {@value #MARKER}) or it is empty, so that a mistyped
- * {@code --out} never wipes a folder of the user's. Closing without commit deletes the temporary folder.
+ * when it is empty or kitwright wrote it: its marker file {@value #MARKER} lists the files kitwright wrote and the
+ * folder holds nothing else ({@link OutputMarker}), so that a mistyped {@code --out} never wipes a folder of the
+ * user's. Closing without commit deletes the temporary folder; temporary and old folders that a killed run left
+ * beside the target are deleted by the next run into it.
  *
  * <pre>{@code
  * try (OutputFolder out = OutputFolder.create(dir)) {
@@ -33,9 +37,9 @@ import java.util.concurrent.ThreadLocalRandom;
  */
 public final class OutputFolder implements AutoCloseable {
     /** Marks a folder as kitwright's output, which the next run may replace whole. */
-    public static final String MARKER = ".kitwright-output";
-    private static final String MARKER_TEXT = "Written by kitwright. The next run into this folder replaces it"
-            + " whole; keep your own files elsewhere.\n";
+    public static final String MARKER = OutputMarker.NAME;
+    private static final String PARTIAL = ".partial-";
+    private static final String OLD = ".old-";
 
     private final Path target;
     private final Path temporary;
@@ -57,13 +61,15 @@ public final class OutputFolder implements AutoCloseable {
         Path temporary;
         try {
             Files.createDirectories(parent);
-            temporary = newFolder(parent, "." + absolute.getFileName() + ".partial-");
+            removeLeftovers(absolute);
+            temporary = newFolder(parent, "." + absolute.getFileName() + PARTIAL);
         } catch (FileSystemException e) {
             throw new InvalidInputException(cannotWrite(target, e));
         }
         OutputFolder folder = new OutputFolder(absolute, temporary);
         try {
-            Files.writeString(temporary.resolve(MARKER), MARKER_TEXT, StandardCharsets.UTF_8);
+            // a marker from the start, so that a run killed midway leaves a folder the next run knows as its own
+            Files.writeString(temporary.resolve(MARKER), OutputMarker.text(Set.of()), StandardCharsets.UTF_8);
         } catch (IOException e) {
             folder.close(); // leave no empty temporary folder behind
             throw e;
@@ -82,11 +88,18 @@ public final class OutputFolder implements AutoCloseable {
             throw new InvalidInputException(Problem.ofFile(target, "the root of the file system cannot be replaced"
                     + " (expected a new or empty folder, or one kitwright wrote before)"));
         }
-        if (Files.exists(absolute) && !replaceable(absolute)) {
-            String why = Files.isDirectory(absolute) ? "the folder exists and was not written by kitwright"
-                    : "this is a file, not a folder";
-            throw new InvalidInputException(Problem.ofFile(target, why + " (expected a new or empty folder, or"
-                    + " one kitwright wrote before, which is then replaced)"));
+        if (Files.isSymbolicLink(absolute) && !Files.exists(absolute)) {
+            throw new InvalidInputException(Problem.ofFile(target, "this is a symbolic link to "
+                    + Files.readSymbolicLink(absolute) + ", which does not exist (expected a folder, or a link to"
+                    + " one; remove the link or make its folder)"));
+        }
+        if (Files.exists(absolute)) {
+            Optional<String> refusal = Files.isDirectory(absolute) ? OutputMarker.refusal(absolute)
+                    : Optional.of("this is a file, not a folder");
+            if (refusal.isPresent()) {
+                throw new InvalidInputException(Problem.ofFile(target, refusal.get() + " (expected a new or empty"
+                        + " folder, or one kitwright wrote before holding only its files, which is then replaced)"));
+            }
         }
         Optional<Problem> parent = parentProblem(target, absolute);
         if (parent.isPresent()) {
@@ -146,8 +159,15 @@ public final class OutputFolder implements AutoCloseable {
     /** Writes a UTF-8 text file of the result, creating sub-folders as needed. */
     public Path write(String name, String text) throws IOException {
         Path file = resolve(name);
-        Files.createDirectories(file.getParent());
-        return Files.writeString(file, text, StandardCharsets.UTF_8);
+        try {
+            Files.createDirectories(file.getParent());
+            return Files.writeString(file, text, StandardCharsets.UTF_8);
+        } catch (FileSystemException e) {
+            throw e;
+        } catch (IOException e) {
+            // a full disk says only "No space left on device": name the file the user asked for
+            throw new FileSystemException(target.resolve(name).toString(), null, e.getMessage());
+        }
     }
 
     /** Moves the complete folder into place, replacing a previous kitwright result. */
@@ -155,9 +175,11 @@ public final class OutputFolder implements AutoCloseable {
         if (committed) {
             return;
         }
+        Files.writeString(temporary.resolve(MARKER), OutputMarker.text(OutputMarker.files(temporary)),
+                StandardCharsets.UTF_8);
         Path old = null;
         if (Files.exists(target)) {
-            old = target.resolveSibling(temporary.getFileName().toString().replace(".partial-", ".old-"));
+            old = target.resolveSibling(temporary.getFileName().toString().replace(PARTIAL, OLD));
             move(target, old);
         }
         try {
@@ -204,16 +226,31 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    private static boolean replaceable(Path folder) throws IOException {
-        if (!Files.isDirectory(folder)) {
-            return false;
+    /**
+     * Deletes the temporary ({@code .NAME.partial-*}) and old ({@code .NAME.old-*}) folders a killed run left
+     * beside {@code target}: only folders of exactly that name form that hold a kitwright marker. Two runs into the
+     * same target at the same time are not supported (the second would delete the first one's temporary folder).
+     */
+    static void removeLeftovers(Path target) throws IOException {
+        String base = "." + target.getFileName();
+        try (DirectoryStream<Path> entries = Files.newDirectoryStream(target.getParent(),
+                entry -> leftover(entry.getFileName().toString(), base))) {
+            for (Path entry : entries) {
+                if (Files.isDirectory(entry, LinkOption.NOFOLLOW_LINKS) && OutputMarker.listed(entry).isPresent()) {
+                    deleteTree(entry);
+                }
+            }
         }
-        if (Files.exists(folder.resolve(MARKER))) {
-            return true;
+    }
+
+    /** A name {@link #newEntry} gives: the base, {@code .partial-} or {@code .old-}, then a base-36 number. */
+    static boolean leftover(String name, String base) {
+        for (String kind : new String[] {PARTIAL, OLD}) {
+            if (name.startsWith(base + kind) && name.substring((base + kind).length()).matches("[0-9a-z]{1,13}")) {
+                return true;
+            }
         }
-        try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder)) {
-            return !entries.iterator().hasNext();
-        }
+        return false;
     }
 
     private static void move(Path from, Path to) throws IOException {
@@ -224,7 +261,7 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    private static void deleteTree(Path root) throws IOException {
+    static void deleteTree(Path root) throws IOException {
         if (!Files.exists(root)) {
             return;
         }

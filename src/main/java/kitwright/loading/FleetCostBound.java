@@ -1,6 +1,5 @@
 package kitwright.loading;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
@@ -10,10 +9,11 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
 import kitwright.model.VehicleType;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The fleet-cost lower bound of the issue: the linear relaxation over vehicle types of "enough payload, floor area
- * and load volume" (DOMAIN.md section 4; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
+ * and load volume" (src/docs/sources.md; Bortfeldt &amp; Wäscher 2013 survey such limits), solved by GLOP:
  * <pre>
  *   minimise  sum_v cost_v y_v
  *   subject to, for every set F of vehicle types that is the set some crate fits (and F = all types):
@@ -35,7 +35,7 @@ final class FleetCostBound {
 
     /** The LP value; 0 when there is nothing to load or GLOP stops without an optimum. */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         boolean[][] fit = new boolean[classes.size()][vehicles.size()];
         Set<List<Integer>> sets = new LinkedHashSet<>();
         List<Integer> all = new ArrayList<>();

@@ -1,12 +1,12 @@
 package kitwright.loading;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
 import java.util.List;
 import kitwright.model.VehicleType;
+import kitwright.natives.SolverLibraries;
 
 /**
  * A tighter fleet-cost bound than {@link FleetCostBound}: whole vehicles, crates assigned to vehicle types
@@ -103,7 +103,7 @@ final class WholeVehicleBound {
 
     /** The bound, or NaN when no MIP solver is at hand or it proved nothing. */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("SCIP");
         if (solver == null) {
             return Double.NaN;

@@ -9,7 +9,7 @@ import java.util.List;
  * @param marks            bar types in the kit
  * @param bars             bars in the kit (bars.csv quantities, surplus included)
  * @param members          members in all structures (structures.csv counts), null without structures.csv
- * @param reuseRatio       members / bars (DOMAIN.md section 6: 750 members on 300 bars is 2.5), null without
+ * @param reuseRatio       members / bars (src/docs/sources.md: 750 members on 300 bars is 2.5), null without
  *                         structures.csv: without structures there is no reuse to count
  * @param stockPieces      stock pieces cut, mill and rack
  * @param boughtPieces     mill pieces bought

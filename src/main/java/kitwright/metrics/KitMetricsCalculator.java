@@ -19,8 +19,8 @@ import kitwright.model.StructureCount;
  * Computes {@link KitMetrics} from a kit and its cutting plan.
  *
  * <ul>
- *   <li>Reuse ratio = members in all structures / bars in the kit (DOMAIN.md section 6); none (null) without
- *       structures.csv, as the kit summary has it.</li>
+ *   <li>Reuse ratio = members in all structures / bars in the kit (src/docs/sources.md, Reuse and spares); none
+ *       (null) without structures.csv, as the kit summary has it.</li>
  *   <li>Kit mass: {@link KitMass}, the bars of bars.csv and the spares the plan cuts, plus the joints. Used stock
  *       mass: every stock piece cut, mill and rack; bought mass: the mill pieces only.</li>
  *   <li>Embodied carbon is counted on the stock bought, not on the kit: bought mass = sum over mill pieces of

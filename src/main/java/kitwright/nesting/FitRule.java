@@ -8,9 +8,10 @@ import kitwright.model.Section;
  * Whether one tube slides into another: a guest fits when its largest outside diameter plus the diametral handling
  * clearance is at most the host's smallest bore.
  *
- * <p><b>Worst case</b> (the default). Structural steel follows EN 10219-1 for cold-formed welded hollow sections
- * (from memory, see DOMAIN.md section 3): outside diameter within plus or minus 1 % of D, at least 0.5 mm and at
- * most 10 mm; wall thickness within plus or minus 10 % of T for T up to 5 mm, 0.5 mm above. The largest outside
+ * <p><b>Worst case</b> (the default). Structural steel follows EN 10219-2 for cold-formed welded hollow sections
+ * (from memory, see src/docs/sources.md, "Tube sections"): outside diameter within plus or minus 1 % of D, at least
+ * 0.5 mm and at most 10 mm; wall thickness, for D up to 406.4 mm, within plus or minus 10 % of T for T up to 5 mm,
+ * 0.5 mm above, and for D above 406.4 mm within plus or minus 10 % of T, at most 2 mm. The largest outside
  * diameter is D + tolerance; the smallest bore is (D - tolerance) - 2 (T + wall tolerance) - weld bead, with the
  * catalog's {@code weld_bead_mm} or 1.0 mm for steel (welded tube carries an internal bead unless it is removed).
  * Other materials use the catalog's {@code od_tolerance_mm} and {@code wall_tolerance_pct} (0 when absent) and
@@ -21,8 +22,10 @@ import kitwright.model.Section;
  * <p>Sizes are rounded to the nearest micrometre so that the JSON shows the values the rule compared.
  */
 public final class FitRule {
-    /** Default weld bead height for welded steel tube, in mm (kitwright's default, stated in issue 5). */
+    /** Default weld bead height for welded steel tube, in mm (kitwright's own default, see src/docs/sources.md). */
     public static final double DEFAULT_STEEL_WELD_BEAD_MM = 1.0;
+    /** The outside diameter above which EN 10219-2 gives the large-diameter wall tolerance (from memory). */
+    static final double LARGE_DIAMETER_MM = 406.4;
 
     private final NestTolerance tolerance;
     private final double clearanceMm;
@@ -58,7 +61,7 @@ public final class FitRule {
         double bead;
         if (isStructuralSteel(section.material())) {
             outerTolerance = steelOuterDiameterToleranceMm(d);
-            wallTolerance = steelWallToleranceMm(t);
+            wallTolerance = steelWallToleranceMm(d, t);
             bead = section.weldBeadMm() != null ? section.weldBeadMm() : DEFAULT_STEEL_WELD_BEAD_MM;
         } else {
             outerTolerance = section.odToleranceMm() != null ? section.odToleranceMm() : 0;
@@ -83,13 +86,19 @@ public final class FitRule {
         return guestOuterMm + clearanceMm <= hostBoreMm + 1e-6;
     }
 
-    /** EN 10219-1 outside-diameter tolerance (from memory): 1 % of D, at least 0.5 mm, at most 10 mm. */
+    /** EN 10219-2 outside-diameter tolerance (from memory): 1 % of D, at least 0.5 mm, at most 10 mm. */
     public static double steelOuterDiameterToleranceMm(double outerDiameterMm) {
         return Math.min(10.0, Math.max(0.5, 0.01 * outerDiameterMm));
     }
 
-    /** EN 10219-1 wall tolerance (from memory): 10 % of T for T up to 5 mm, 0.5 mm above. */
-    public static double steelWallToleranceMm(double wallMm) {
+    /**
+     * EN 10219-2 wall tolerance (from memory): for D up to 406.4 mm, 10 % of T for T up to 5 mm, 0.5 mm above; for
+     * D above 406.4 mm, 10 % of T, at most 2 mm.
+     */
+    public static double steelWallToleranceMm(double outerDiameterMm, double wallMm) {
+        if (outerDiameterMm > LARGE_DIAMETER_MM) {
+            return Math.min(2.0, 0.1 * wallMm);
+        }
         return wallMm <= 5.0 ? 0.1 * wallMm : 0.5;
     }
 
@@ -109,8 +118,9 @@ public final class FitRule {
     public String description() {
         String counted = tolerance == NestTolerance.NOMINAL
                 ? "Nominal sizes: outside diameter D and bore D - 2T, no tolerances, no weld bead"
-                : "Worst case: largest outside diameter against smallest bore; steel by EN 10219-1 (outside"
-                + " diameter +/-1 %, at least 0.5 mm, at most 10 mm; wall +/-10 % up to 5 mm, +/-0.5 mm above) minus"
+                : "Worst case: largest outside diameter against smallest bore; steel by EN 10219-2 (outside"
+                + " diameter +/-1 %, at least 0.5 mm, at most 10 mm; wall +/-10 % up to 5 mm, +/-0.5 mm above,"
+                + " above 406.4 mm diameter +/-10 % at most 2 mm) minus"
                 + " the weld bead (1.0 mm for welded steel unless the catalog says otherwise); other materials by the"
                 + " catalog's od_tolerance_mm and wall_tolerance_pct";
         return counted + "; diametral clearance " + format(clearanceMm) + " mm. Out-of-roundness and straightness"

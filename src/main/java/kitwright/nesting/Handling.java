@@ -2,7 +2,7 @@ package kitwright.nesting;
 
 /**
  * Manual handling flag for bundles: above about 25 kg a bundle is for two people or a hoist (a common practice
- * figure for one person's lift; manual handling guidance differs by country and task, see DOMAIN.md section 5).
+ * figure for one person's lift; manual handling guidance differs by country and task, see src/docs/sources.md).
  */
 public final class Handling {
     /** Mass one person may lift, kg (common practice). */

@@ -6,13 +6,13 @@ import java.util.List;
  * A nesting pattern: which guests one host of a given type carries directly, and how they lie in its bore.
  *
  * @param hostType index of the host's {@link TubeType}
- * @param counts   guests of each type (indexed like the types)
+ * @param counts   guests of each type, the types with none left out
  * @param segments the layout, in order along the host: each segment's channel count and, per channel, the guest
  *                 types end to end
  */
-record Pattern(int hostType, List<Integer> counts, List<Segment> segments) {
+record Pattern(int hostType, TypeCounts counts, List<Segment> segments) {
     Pattern {
-        counts = List.copyOf(counts);
+        java.util.Objects.requireNonNull(counts, "counts");
         segments = List.copyOf(segments);
     }
 
@@ -27,15 +27,6 @@ record Pattern(int hostType, List<Integer> counts, List<Segment> segments) {
     }
 
     int guests() {
-        return counts.stream().mapToInt(Integer::intValue).sum();
-    }
-
-    /** Weighted value sum_t weight_t * a_t. */
-    double value(double[] weight) {
-        double sum = 0;
-        for (int t = 0; t < counts.size(); t++) {
-            sum += weight[t] * counts.get(t);
-        }
-        return sum;
+        return counts.total();
     }
 }

@@ -1,6 +1,5 @@
 package kitwright.nesting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
@@ -9,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The linear-programming relaxation of the nesting pattern model, solved by column generation (GLOP master,
@@ -42,7 +42,7 @@ final class PatternColumnGeneration implements AutoCloseable {
      * solution over them (phase 2 weights), the phase 1 LP value (tubes nested, over the columns known at its last
      * solve), the bound on tubes nested, and the rounds run.
      */
-    record Result(List<Pattern> columns, List<List<Integer>> lpCounts, double[] lpValues, double phaseOneValue,
+    record Result(List<Pattern> columns, List<TypeCounts> lpCounts, double[] lpValues, double phaseOneValue,
                   double nestedUpperBound, int iterations) {
     }
 
@@ -52,18 +52,20 @@ final class PatternColumnGeneration implements AutoCloseable {
     private final MPConstraint[] supply;
     private final MPConstraint[] hosts;
     private final MPObjective objective;
-    private final List<int[]> rows = new ArrayList<>();
+    /** Per column, the knapsack's rows of each guest type; sparse, as a kit may have thousands of types. */
+    private final List<TypeCounts> rows = new ArrayList<>();
     private final List<Integer> hostOf = new ArrayList<>();
-    private final List<List<Integer>> lpCounts = new ArrayList<>();
+    private final List<TypeCounts> lpCounts = new ArrayList<>();
     private final List<MPVariable> variables = new ArrayList<>();
-    private final Set<List<Integer>> seen = new HashSet<>();
+    /** The columns added so far, as (host type, guest counts). */
+    private final Set<List<Object>> seen = new HashSet<>();
     private final int[] guestsLeft;
     private double[] weight;
     private double[] pi;
     private int iterations;
 
     PatternColumnGeneration(List<TubeType> types, PatternPricing pricing) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         this.types = types;
         this.pricing = pricing;
         int n = types.size();
@@ -124,7 +126,7 @@ final class PatternColumnGeneration implements AutoCloseable {
     double generate(double[] weights, int maxRounds) {
         weight = weights;
         for (int c = 0; c < variables.size(); c++) {
-            objective.setCoefficient(variables.get(c), value(lpCounts.get(c), weight));
+            objective.setCoefficient(variables.get(c), lpCounts.get(c).value(weight));
         }
         double value = 0;
         int n = types.size();
@@ -148,11 +150,10 @@ final class PatternColumnGeneration implements AutoCloseable {
                 if (best[h] == null) {
                     continue;
                 }
-                List<Integer> counts = pricing.rowCounts(h, best[h]);
-                List<Integer> key = new ArrayList<>(counts);
-                key.add(h);
-                if (value(counts, reduced) - mu[h] > 1e-7 && seen.add(key)) {
-                    add(h, best[h], counts);
+                TypeCounts columnRows = TypeCounts.of(best[h]);
+                TypeCounts counts = pricing.rowCounts(h, columnRows);
+                if (counts.value(reduced) - mu[h] > 1e-7 && seen.add(List.of(h, counts))) {
+                    add(h, columnRows, counts);
                     added = true;
                 }
             }
@@ -163,15 +164,13 @@ final class PatternColumnGeneration implements AutoCloseable {
         return value;
     }
 
-    private void add(int host, int[] columnRows, List<Integer> counts) {
+    private void add(int host, TypeCounts columnRows, TypeCounts counts) {
         MPVariable x = solver.makeNumVar(0, MPSolver.infinity(), "x_" + host + "_" + variables.size());
-        for (int t = 0; t < types.size(); t++) {
-            if (counts.get(t) > 0) {
-                supply[t].setCoefficient(x, counts.get(t)); // a_tp in sum_{h,p} a_tp x_hp <= s_t
-            }
+        for (int i = 0; i < counts.size(); i++) {
+            supply[counts.type(i)].setCoefficient(x, counts.count(i)); // a_tp in sum_{h,p} a_tp x_hp <= s_t
         }
         hosts[host].setCoefficient(x, 1); // in sum_p x_hp <= m_h
-        objective.setCoefficient(x, value(counts, weight));
+        objective.setCoefficient(x, counts.value(weight));
         rows.add(columnRows);
         hostOf.add(host);
         lpCounts.add(counts);
@@ -215,14 +214,6 @@ final class PatternColumnGeneration implements AutoCloseable {
             bound += types.get(h).count() * Math.max(0, hostValue[h]);
         }
         return bound;
-    }
-
-    private static double value(List<Integer> counts, double[] weight) {
-        double sum = 0;
-        for (int t = 0; t < counts.size(); t++) {
-            sum += weight[t] * counts.get(t);
-        }
-        return sum;
     }
 
     private void solveOrThrow() {

@@ -61,17 +61,15 @@ final class PatternDiving {
                                List<Pattern> patterns, List<Long> counts) {
         Pattern p = cg.realisable(column, guests);
         long k = Math.min(wanted, freeHosts[p.hostType()]);
-        for (int t = 0; t < guests.length; t++) {
-            int a = p.counts().get(t);
-            if (a > 0) {
-                k = Math.min(k, guests[t] / a);
-            }
+        TypeCounts used = p.counts();
+        for (int i = 0; i < used.size(); i++) {
+            k = Math.min(k, guests[used.type(i)] / used.count(i));
         }
         if (k <= 0 || p.guests() == 0) {
             return false;
         }
-        for (int t = 0; t < guests.length; t++) {
-            guests[t] -= (int) (k * p.counts().get(t));
+        for (int i = 0; i < used.size(); i++) {
+            guests[used.type(i)] -= (int) (k * used.count(i));
         }
         freeHosts[p.hostType()] -= (int) k;
         patterns.add(p);

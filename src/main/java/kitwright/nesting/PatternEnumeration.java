@@ -53,7 +53,7 @@ final class PatternEnumeration {
                 ok = false;
                 break;
             }
-            out.add(new Pattern(host, java.util.Arrays.stream(counts).boxed().toList(), layout));
+            out.add(new Pattern(host, TypeCounts.of(counts), layout));
             ok = extend(problem, types, host, guestTypes, position + 1, counts, guests, out, maxPatterns, maxGuests);
         }
         for (int i = 0; i < added; i++) {

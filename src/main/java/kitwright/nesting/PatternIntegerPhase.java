@@ -1,6 +1,5 @@
 package kitwright.nesting;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
@@ -8,6 +7,7 @@ import com.google.ortools.sat.IntVar;
 import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import java.util.List;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The integer phase: how many hosts of each type use each known pattern, solved by CP-SAT over the pattern columns
@@ -38,7 +38,7 @@ final class PatternIntegerPhase {
     /** Returns null when CP-SAT found no solution within its limits. */
     static Result solve(List<TubeType> types, List<Pattern> columns, double[] hint, double deterministicSeconds,
                         double wallSeconds) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         int n = types.size();
         long tubes = types.stream().mapToLong(TubeType::count).sum();
         long big = 1000 * (tubes + 1);
@@ -52,11 +52,9 @@ final class PatternIntegerPhase {
         for (int p = 0; p < columns.size(); p++) {
             Pattern pattern = columns.get(p);
             long upper = types.get(pattern.hostType()).count();
-            for (int t = 0; t < n; t++) {
-                int a = pattern.counts().get(t);
-                if (a > 0) {
-                    upper = Math.min(upper, types.get(t).count() / a);
-                }
+            TypeCounts counts = pattern.counts();
+            for (int i = 0; i < counts.size(); i++) {
+                upper = Math.min(upper, types.get(counts.type(i)).count() / counts.count(i));
             }
             x[p] = model.newIntVar(0, upper, "x_" + pattern.hostType() + "_" + p);
             if (hint != null) {
@@ -74,12 +72,12 @@ final class PatternIntegerPhase {
             Pattern pattern = columns.get(p);
             hosts[pattern.hostType()].add(x[p]);
             long value = 0;
-            for (int t = 0; t < n; t++) {
-                int a = pattern.counts().get(t);
-                if (a > 0) {
-                    supply[t].addTerm(x[p], a);
-                    value += a * weight[t];
-                }
+            TypeCounts counts = pattern.counts();
+            for (int i = 0; i < counts.size(); i++) {
+                int t = counts.type(i);
+                int a = counts.count(i);
+                supply[t].addTerm(x[p], a);
+                value += a * weight[t];
             }
             objective.addTerm(x[p], value);
         }

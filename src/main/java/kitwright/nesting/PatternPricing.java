@@ -211,31 +211,30 @@ final class PatternPricing {
     }
 
     /** Guests of each type in the rows, k_t per row, not capped: the LP column. */
-    List<Integer> rowCounts(int host, int[] rows) {
+    TypeCounts rowCounts(int host, TypeCounts rows) {
         HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(host).sample()));
-        List<Integer> counts = new ArrayList<>();
-        for (int t = 0; t < types.size(); t++) {
-            counts.add(rows[t] == 0 ? 0 : rows[t] * shape.mostChannels(types.get(t).sample().outerDiameterMm()));
+        int[] counts = new int[types.size()];
+        for (int i = 0; i < rows.size(); i++) {
+            int t = rows.type(i);
+            counts[t] = rows.count(i) * shape.mostChannels(types.get(t).sample().outerDiameterMm());
         }
-        return counts;
+        return TypeCounts.of(counts);
     }
 
     /** The layout of rows: one segment per channel count, rows stacked; copies capped at the supply. */
-    Pattern rowPattern(int host, int[] rows) {
+    Pattern rowPattern(int host, TypeCounts rows) {
         return rowPattern(host, rows, supplyOfAll());
     }
 
-    /** As {@link #rowPattern(int, int[])}, capped at the given supply per type. */
-    Pattern rowPattern(int host, int[] rows, int[] supply) {
+    /** As {@link #rowPattern(int, TypeCounts)}, capped at the given supply per type. */
+    Pattern rowPattern(int host, TypeCounts rows, int[] supply) {
         HostLoad shape = new HostLoad(0, problem.innerDiameterMm(types.get(host).sample()));
         Map<Integer, List<List<Integer>>> lanesByChannels = new java.util.TreeMap<>();
-        List<Integer> counts = new ArrayList<>();
-        for (int t = 0; t < types.size(); t++) {
-            counts.add(0);
-        }
-        for (int t = 0; t < types.size(); t++) {
+        int[] counts = new int[types.size()];
+        for (int i = 0; i < rows.size(); i++) {
+            int t = rows.type(i);
             int channels = shape.mostChannels(types.get(t).sample().outerDiameterMm());
-            int copies = Math.min(rows[t] * channels, supply[t]);
+            int copies = Math.min(rows.count(i) * channels, supply[t]);
             if (copies <= 0) {
                 continue;
             }
@@ -246,13 +245,13 @@ final class PatternPricing {
                 }
                 return l;
             });
-            counts.set(t, copies);
+            counts[t] = copies;
             for (int copy = 0; copy < copies; copy++) {
                 lanes.get(copy % channels).add(t);
             }
         }
         List<Pattern.Segment> segments = new ArrayList<>();
         lanesByChannels.forEach((k, lanes) -> segments.add(new Pattern.Segment(k, lanes)));
-        return new Pattern(host, counts, segments);
+        return new Pattern(host, TypeCounts.of(counts), segments);
     }
 }

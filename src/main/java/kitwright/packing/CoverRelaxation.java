@@ -1,10 +1,10 @@
 package kitwright.packing;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
+import kitwright.natives.SolverLibraries;
 
 /**
  * The linear relaxation of the pattern cover (the restricted master problem of column generation, Gilmore &amp;
@@ -21,7 +21,7 @@ public final class CoverRelaxation {
     }
 
     public Solution solve(int[][] counts, double[] cost, int[] demand) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("GLOP");
         try {
             MPVariable[] x = new MPVariable[counts.length];

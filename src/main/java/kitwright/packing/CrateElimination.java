@@ -23,7 +23,7 @@ import kitwright.model.CrateType;
 final class CrateElimination {
     /**
      * How much more bounding-box volume than its inside a crate may hold: staggered rows of bundles beat the
-     * squares (105 in 100, DOMAIN.md section 4), so a little more than 1, to skip hopeless fillings only.
+     * squares (105 in 100, src/docs/sources.md), so a little more than 1, to skip hopeless fillings only.
      */
     private static final double STAGGERED_GAIN = 1.2;
     private final CrateFiller filler = new CrateFiller();

@@ -1,15 +1,15 @@
 package kitwright.packing;
 
-import com.google.ortools.Loader;
 import com.google.ortools.linearsolver.MPConstraint;
 import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
 import java.util.List;
 import kitwright.model.CrateType;
+import kitwright.natives.SolverLibraries;
 
 /**
- * Lower bounds on the crating of a set of items, from volume and mass alone (DOMAIN.md section 4: "lower bounds
+ * Lower bounds on the crating of a set of items, from volume and mass alone (src/docs/sources.md: "lower bounds
  * that any packing must meet").
  * <ul>
  *   <li>count by volume: ceil(sum of the bundles' cylinder volumes pi/4 d^2 L and the boxes' volumes / the largest
@@ -85,7 +85,7 @@ final class CrateLowerBounds {
 
     /** The model's optimum (its proven bound for whole crates); 0 or NaN when the solver proves nothing. */
     private static double priceRelaxation(List<ItemType> types, List<CrateType> crates, boolean whole) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         double[] lengths = crates.stream().mapToDouble(CrateType::innerLengthMm).distinct().sorted().toArray();
         MPSolver solver = MPSolver.createSolver(whole ? "SCIP" : "GLOP");
         if (solver == null) {

@@ -1,12 +1,12 @@
 package kitwright.packing;
 
-import com.google.ortools.Loader;
 import com.google.ortools.sat.CpModel;
 import com.google.ortools.sat.CpSolver;
 import com.google.ortools.sat.CpSolverStatus;
 import com.google.ortools.sat.IntVar;
 import com.google.ortools.sat.LinearExpr;
 import java.util.Arrays;
+import kitwright.natives.SolverLibraries;
 
 /**
  * Chooses how many times to use each candidate filling (a crate or vehicle pattern) so that every item type is
@@ -47,7 +47,7 @@ public final class PatternCover {
      * @return the cover found, or the hint when CP-SAT finds nothing better within its limits
      */
     public Result solve(int[][] counts, double[] cost, int[] demand, int[] hint) {
-        Loader.loadNativeLibraries();
+        SolverLibraries.load();
         int patterns = counts.length;
         int types = demand.length;
         long hintTotal = hint == null ? Arrays.stream(demand).asLongStream().sum() : Arrays.stream(hint).sum();

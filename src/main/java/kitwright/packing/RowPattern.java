@@ -2,7 +2,7 @@ package kitwright.packing;
 
 /**
  * Equal circles of diameter d in rows across a W x H cross-section, the two layouts the trade uses for tubes
- * lying lengthwise (DOMAIN.md section 4):
+ * lying lengthwise (src/docs/sources.md, Rows of circles):
  * <ul>
  *   <li>{@link #SQUARE}: rows d apart, each holding floor(W/d) circles: floor(W/d) * floor(H/d) in all;</li>
  *   <li>{@link #STAGGERED}: rows d*sqrt(3)/2 apart, every second row shifted by d/2, so a circle rests in the dip

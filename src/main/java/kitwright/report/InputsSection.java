@@ -40,8 +40,8 @@ final class InputsSection {
         KitSettings s = kit.settings();
         List<Setting> settings = new ArrayList<>();
         settings.add(new Setting("Kit", kit.name()));
-        if (kit.dir() != null && kit.dir().getFileName() != null) {
-            settings.add(new Setting("Kit folder", kit.dir().getFileName().toString()));
+        if (kit.dir() != null) {
+            settings.add(new Setting("Kit folder", folderName(kit.dir())));
         }
         settings.add(new Setting("Tube catalog", file(kit.dir(), kit.catalog().file())));
         settings.add(new Setting("Kerf", ShopFormat.mmUnit(s.kerfMm())));
@@ -65,21 +65,28 @@ final class InputsSection {
                 !sections.isEmpty(), materials, !materials.isEmpty(), marks));
     }
 
-    /** A file as the reader should see it: relative to the kit folder when it lies below it, else its name. */
+    /**
+     * A file as the reader should see it: relative to the kit folder when it lies below it, else its name. Both
+     * paths are made absolute first, so that the kit folder typed relative or absolute names the file the same.
+     */
     static String file(Path kitDir, Path file) {
         if (file == null) {
             return ShopFormat.UNKNOWN;
         }
-        Path shown = file;
-        if (kitDir != null && file.isAbsolute() == kitDir.isAbsolute()) {
-            try {
-                shown = kitDir.normalize().relativize(file.normalize());
-            } catch (IllegalArgumentException differentRoots) {
-                shown = file.getFileName();
+        Path absolute = file.toAbsolutePath().normalize();
+        Path shown = absolute.getFileName();
+        if (kitDir != null) {
+            Path folder = kitDir.toAbsolutePath().normalize();
+            if (absolute.startsWith(folder) && !absolute.equals(folder)) {
+                shown = folder.relativize(absolute);
             }
-        } else if (file.isAbsolute()) {
-            shown = file.getFileName();
         }
         return shown.toString().replace('\\', '/');
+    }
+
+    /** The kit folder's own name, also when it was typed as "." or with a trailing "..". */
+    private static String folderName(Path kitDir) {
+        Path name = kitDir.toAbsolutePath().normalize().getFileName();
+        return name == null ? kitDir.toString() : name.toString();
     }
 }

@@ -15,7 +15,7 @@ import kitwright.spares.SparesSupply;
  * The report block "Kit figures and service-life spares": embodied carbon of the stock bought (bought mass x the
  * material's factor, with the factor's source from materials.csv) beside the kit's own mass, the reuse ratio
  * (members in all structures / bars in the kit), and, when kit.json sets a {@code spares} policy, the spares per
- * mark (bars in service, loss probability over the life, expected losses, spares needed, where they came from), the
+ * mark (bars in service, bar-cycles, expected losses, spares needed, where they came from), the
  * policy with its per-mark level and the independence assumption, and the extra stock cost. Without a policy, one
  * line says how to set one. Add it with {@code ReportModel.builder(...).section(KitFiguresSection.of(...))}.
  *
@@ -36,13 +36,13 @@ public final class KitFiguresSection {
     }
 
     /** Spares of one mark. */
-    record SparesRow(String mark, String section, String bars, String lossProbability, String expectedLosses,
+    record SparesRow(String mark, String section, String bars, String barCycles, String expectedLosses,
                      String coverage, String needed, String inKit, String fromOffcuts, String bought,
                      String missing) {
     }
 
     /** The policy and the figures around the spares table. */
-    record Spares(String lossRate, String cycles, String serviceLevel, String lossProbability, String marksInService,
+    record Spares(String lossRate, String cycles, String serviceLevel, String marksInService,
                   String perMarkLevel, String kitLevel, List<SparesRow> rows, SparesRow total, String extraCost,
                   String replans, String missing) {
     }
@@ -96,30 +96,31 @@ public final class KitFiguresSection {
         SparesPolicy policy = outcome.sizing().policy();
         List<SparesRow> rows = new ArrayList<>();
         int bars = 0;
+        long barCycles = 0;
         int needed = 0;
         int inKit = 0;
         int marksInService = 0;
         for (MarkSpares m : outcome.sizing().marks()) {
             SparesSupply s = outcome.supply(m.mark());
             rows.add(new SparesRow(m.mark(), section(kit, m.mark()), ShopFormat.count(m.bars()),
-                    percent(m.lossProbability()), ShopFormat.decimal(m.expectedLosses(), 2, true),
-                    percent(ServiceLifeSpares.coverage(m.bars(), m.lossProbability(), m.spares())),
+                    ShopFormat.count(m.barCycles()), ShopFormat.decimal(m.expectedLosses(), 2, true),
+                    percent(m.coverage()),
                     ShopFormat.count(m.spares()), ShopFormat.count(m.alreadyInKit()),
                     ShopFormat.count(s.fromOffcuts()), ShopFormat.count(s.bought()), ShopFormat.count(s.missing())));
             bars += m.bars();
+            barCycles += m.barCycles();
             needed += m.spares();
             inKit += m.alreadyInKit();
             marksInService += m.bars() > 0 ? 1 : 0;
         }
-        SparesRow total = new SparesRow("All marks", "", ShopFormat.count(bars), "",
+        SparesRow total = new SparesRow("All marks", "", ShopFormat.count(bars), ShopFormat.count(barCycles),
                 ShopFormat.decimal(outcome.sizing().totalExpectedLosses(), 2, true), percent(outcome.sizing()
                 .kitLevel()), ShopFormat.count(needed), ShopFormat.count(inKit),
                 ShopFormat.count(outcome.fromOffcuts()), ShopFormat.count(outcome.bought()),
                 ShopFormat.count(outcome.missing()));
         double perMarkLevel = ServiceLifeSpares.perMarkLevel(policy.serviceLevel(), marksInService);
-        double q = ServiceLifeSpares.lossProbability(policy.lossRatePerCycle(), policy.cycles());
         return new Spares(percent(policy.lossRatePerCycle()), ShopFormat.count(policy.cycles()),
-                percent(policy.serviceLevel()), percent(q), ShopFormat.count(marksInService), percent(perMarkLevel),
+                percent(policy.serviceLevel()), ShopFormat.count(marksInService), percent(perMarkLevel),
                 percent(outcome.sizing().kitLevel()), rows, total, ReportFormat.money(outcome.extraCost()),
                 outcome.rounds() == 1 ? "once" : ShopFormat.count(outcome.rounds()) + " times",
                 outcome.missing() == 0 ? null

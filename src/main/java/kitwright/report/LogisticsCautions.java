@@ -4,7 +4,7 @@ import java.util.List;
 
 /**
  * The cautions the crating and loading stages add to the report and print with {@code kitwright pack}
- * (DOMAIN.md section 5). Pass each to {@code ReportModel.Builder#caution(heading, text)}.
+ * (src/docs/sources.md, Cautions). Pass each to {@code ReportModel.Builder#caution(heading, text)}.
  */
 public final class LogisticsCautions {
     /** One caution: a short heading and its text. */

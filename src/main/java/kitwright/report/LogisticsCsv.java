@@ -45,13 +45,13 @@ public final class LogisticsCsv {
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
         StringWriter out = new StringWriter();
         try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
-            csv.printRecord("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids", "gross_kg",
-                    "max_gross_kg");
+            csv.printRecord(SpreadsheetCell.row("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids",
+                    "gross_kg", "max_gross_kg"));
             for (Crate c : plan.crates()) {
-                csv.printRecord(c.id(), c.type(), CrateContents.plainText(CrateContents.marks(c, byId, boxes)),
-                        c.items(ItemKind.BUNDLE).size(), CrateContents.refs(c, ItemKind.BUNDLE),
-                        c.items(ItemKind.BOX).size(), CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1),
-                        number(c.maxGrossKg(), 1));
+                csv.printRecord(SpreadsheetCell.row(c.id(), c.type(),
+                        CrateContents.plainText(CrateContents.marks(c, byId, boxes)), c.items(ItemKind.BUNDLE).size(),
+                        CrateContents.refs(c, ItemKind.BUNDLE), c.items(ItemKind.BOX).size(),
+                        CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1), number(c.maxGrossKg(), 1)));
             }
         } catch (IOException e) {
             throw new IllegalStateException(e);
@@ -62,13 +62,13 @@ public final class LogisticsCsv {
     public static String manifests(LoadPlan plan) {
         StringWriter out = new StringWriter();
         try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
-            csv.printRecord("vehicle", "type", "crates", "crate_ids", "mass_kg", "payload_kg", "floor_length_mm",
-                    "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip");
+            csv.printRecord(SpreadsheetCell.row("vehicle", "type", "crates", "crate_ids", "mass_kg", "payload_kg",
+                    "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"));
             for (VehicleLoad v : plan.vehicles()) {
-                csv.printRecord(v.id(), v.type(), v.crates().size(),
+                csv.printRecord(SpreadsheetCell.row(v.id(), v.type(), v.crates().size(),
                         v.crates().stream().map(PlacedCrate::ref).collect(Collectors.joining(" ")),
                         number(v.massKg(), 1), number(v.payloadKg(), 1), number(v.floorLengthMm(), 0),
-                        number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2));
+                        number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2)));
             }
         } catch (IOException e) {
             throw new IllegalStateException(e);

@@ -26,9 +26,9 @@ public final class NestingCsv {
     private static void write(List<String> header, List<List<String>> rows, Writer out) throws IOException {
         CSVFormat format = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
         CSVPrinter printer = new CSVPrinter(out, format);
-        printer.printRecord(header);
+        printer.printRecord(SpreadsheetCell.row(header));
         for (List<String> row : rows) {
-            printer.printRecord(row);
+            printer.printRecord(SpreadsheetCell.row(row));
         }
         printer.flush();
     }

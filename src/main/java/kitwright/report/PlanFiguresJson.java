@@ -9,7 +9,6 @@ import kitwright.metrics.KitMetrics;
 import kitwright.metrics.MaterialCarbon;
 import kitwright.model.SparesPolicy;
 import kitwright.spares.MarkSpares;
-import kitwright.spares.ServiceLifeSpares;
 import kitwright.spares.SparesOutcome;
 import kitwright.spares.SparesSupply;
 
@@ -66,19 +65,19 @@ public final class PlanFiguresJson {
     /**
      * One mark.
      *
-     * @param bars            bars in service (the structures' need)
-     * @param lossProbability chance that one bar is lost over the kit's life, 1 - (1 - p)^c
-     * @param expectedLosses  bars x lossProbability
+     * @param bars            bars in service at once (the structures' need), n
+     * @param barCycles       bars x cycles, n c: the trials of the mark's losses, lost bars being replaced
+     * @param expectedLosses  barCycles x lossRatePerCycle
      * @param perMarkLevel    serviceLevel^(1/marks in service)
-     * @param coverage        P(losses <= sparesNeeded) for Binomial(bars, lossProbability)
-     * @param sparesNeeded    the smallest s with coverage >= perMarkLevel
+     * @param coverage        P(losses <= alreadyInKit + toMake) for losses ~ Binomial(barCycles, lossRatePerCycle)
+     * @param sparesNeeded    the smallest s with P(losses <= s) >= perMarkLevel
      * @param alreadyInKit    surplus bars in bars.csv beyond the structures' need, counted as spares
      * @param toMake          sparesNeeded - alreadyInKit, at least 0
      * @param fromOffcuts     spares cut from offcuts of stock bought anyway
      * @param bought          spares for which stock was bought
      * @param missing         spares that could not be cut
      */
-    public record Mark(String mark, int bars, double lossProbability, double expectedLosses, double perMarkLevel,
+    public record Mark(String mark, int bars, int barCycles, double expectedLosses, double perMarkLevel,
                        double coverage, int sparesNeeded, int alreadyInKit, int toMake, int fromOffcuts, int bought,
                        int missing) {
     }
@@ -114,9 +113,8 @@ public final class PlanFiguresJson {
         int toMake = 0;
         for (MarkSpares m : outcome.sizing().marks()) {
             SparesSupply s = outcome.supply(m.mark());
-            double coverage = ServiceLifeSpares.coverage(m.bars(), m.lossProbability(), m.spares());
-            marks.add(new Mark(m.mark(), m.bars(), probability(m.lossProbability()), round(m.expectedLosses(), 3),
-                    probability(m.perMarkLevel()), probability(coverage), m.spares(), m.alreadyInKit(), m.toMake(),
+            marks.add(new Mark(m.mark(), m.bars(), m.barCycles(), round(m.expectedLosses(), 3),
+                    probability(m.perMarkLevel()), probability(m.coverage()), m.spares(), m.alreadyInKit(), m.toMake(),
                     s.fromOffcuts(), s.bought(), s.missing()));
             bars += m.bars();
             needed += m.spares();

@@ -10,11 +10,12 @@ final class ReportFormat {
     private ReportFormat() {
     }
 
-    /** "optimal (proven)", "feasible, gap 0.42 %" or "no plan". */
+    /** "optimal (proven)", "feasible, gap 0.42 %" (with the reason when the clock stopped it) or "no plan". */
     static String status(SectionCutPlan plan) {
         return switch (plan.status()) {
             case OPTIMAL -> "optimal (proven)";
-            case FEASIBLE -> "feasible, gap " + gap(plan.gap());
+            case FEASIBLE -> "feasible, gap " + gap(plan.gap())
+                    + (plan.reason() == null ? "" : ", " + plan.reason()); // e.g. stopped by the time limit
             case INFEASIBLE -> "no plan";
         };
     }

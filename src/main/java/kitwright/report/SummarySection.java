@@ -91,7 +91,8 @@ final class SummarySection {
                 ShopFormat.metres(f.stockMm()), planned ? ShopFormat.percent(f.offcutShare()) : ShopFormat.UNKNOWN,
                 ShopFormat.count(f.remnants()), planned ? ReportFormat.money(f.cost()) : ShopFormat.UNKNOWN,
                 ReportFormat.objective(p.objective(), p.value()),
-                ReportFormat.objective(p.objective(), p.lowerBound()), ReportFormat.gap(p.gap()), p.reason());
+                ReportFormat.objective(p.objective(), p.lowerBound()), ReportFormat.gap(p.gap()),
+                p.status() == Status.INFEASIBLE ? p.reason() : null);
     }
 
     /**

@@ -12,18 +12,32 @@ import org.apache.commons.statistics.distribution.BinomialDistribution;
  * <p><b>Problem.</b> Bars are lost or damaged at each assembly and take-down. How many spares per mark keep every
  * mark covered over the kit's whole life with a stated probability (the kit's service level)?
  *
+<<<<<<< HEAD
  * <p><b>Method.</b> A bar survives {@code c} cycles at loss rate {@code p} with probability {@code (1 - p)^c}
  * (each bar is lost at most once), so the losses of a mark of {@code n} bars in service follow
- * Binomial(n, q) with {@code q = 1 - (1 - p)^c}; the expected losses are {@code n q} (DOMAIN.md section 6). The
+ * Binomial(n, q) with {@code q = 1 - (1 - p)^c}; the expected losses are {@code n q} (src/docs/sources.md). The
  * kit's level {@code L} is split over the {@code m} marks that have bars in service as {@code L^(1/m)} per mark:
  * with independent marks the chance that all are covered is the product of the marks' chances, hence at least
  * {@code L} (common practice). A mark's spares are the Binomial quantile: the smallest {@code s} with
  * {@code P(losses <= s) >= L^(1/m)}, taken from Apache Commons Statistics' {@link BinomialDistribution} and
  * confirmed against its cumulative probability, so the definition holds exactly in that library's arithmetic.
+=======
+ * <p><b>Method.</b> A mark has {@code n} bars in service at once. At each of the {@code c} cycles every bar in
+ * service is lost with probability {@code p}, independently, and a lost bar is replaced from the spares before the
+ * next cycle, so {@code n} bars serve every cycle and a replacement can be lost in turn. The mark's losses over the
+ * life are then the successes of {@code n c} independent trials, Binomial(n c, p), with mean {@code n c p}; losses in
+ * the last cycle count too (the kit goes back into store complete). The mark runs short at some cycle exactly when
+ * its total losses exceed its spares, because the spares only ever go down. The kit's level {@code L} is split over
+ * the {@code m} marks that have bars in service as {@code L^(1/m)} per mark: with independent marks the chance that
+ * all are covered is the product of the marks' chances, hence at least {@code L} (common practice). A mark's spares
+ * are the Binomial quantile: the smallest {@code s} with {@code P(losses <= s) >= L^(1/m)}, taken from Apache
+ * Commons Statistics' {@link BinomialDistribution} and confirmed against its cumulative probability, so the
+ * definition holds exactly in that library's arithmetic.
+>>>>>>> spares
  *
- * <p><b>Simplifications (stated in the report).</b> The bars in service are the quantity the structures need
- * ({@link Bar#requiredQuantity()}); the kit's surplus over that counts towards the spares; the spares' own losses
- * after they enter service are not modelled.
+ * <p><b>Surplus.</b> The bars in service are the quantity the structures need ({@link Bar#requiredQuantity()}); the
+ * kit's surplus over that counts towards the spares, and a mark's coverage is that of the spares it then holds
+ * ({@link MarkSpares#held()}).
  *
  * <p>Pure functions: no state, no I/O.
  */
@@ -34,7 +48,8 @@ public final class ServiceLifeSpares {
     /**
      * Spares of every mark of a kit, in the order of {@code bars}.
      *
-     * @throws IllegalArgumentException when the policy is out of range (see {@link #checkPolicy})
+     * @throws IllegalArgumentException when the policy is out of range (see {@link #checkPolicy}) or a mark has more
+     *                                  bar-cycles than an {@code int} holds
      */
     public static SparesPlan plan(List<Bar> bars, SparesPolicy policy) {
         checkPolicy(policy);
@@ -51,7 +66,7 @@ public final class ServiceLifeSpares {
             totalSpares += m.spares();
             totalToMake += m.toMake();
             totalExpected += m.expectedLosses();
-            kitLevel *= coverage(m.bars(), m.lossProbability(), m.spares());
+            kitLevel *= m.coverage();
         }
         return new SparesPlan(policy, marks, totalSpares, totalToMake, totalExpected, kitLevel);
     }
@@ -59,25 +74,19 @@ public final class ServiceLifeSpares {
     /**
      * Spares of one mark.
      *
-     * @param bars         bars of the mark in service
+     * @param bars         bars of the mark in service at once
      * @param alreadyInKit surplus bars the kit already holds for this mark
      * @param perMarkLevel the probability this mark must be covered with, in (0, 1]
      */
     public static MarkSpares forMark(String mark, int bars, int alreadyInKit, SparesPolicy policy,
                                      double perMarkLevel) {
         checkPolicy(policy);
-        double q = lossProbability(policy.lossRatePerCycle(), policy.cycles());
-        int spares = quantile(bars, q, perMarkLevel);
-        return new MarkSpares(mark, bars, q, bars * q, spares, perMarkLevel, alreadyInKit);
-    }
-
-    /** Probability that one bar is lost over {@code cycles} cycles: {@code 1 - (1 - p)^c}, computed without cancellation. */
-    public static double lossProbability(double lossRatePerCycle, int cycles) {
-        if (lossRatePerCycle >= 1) {
-            return cycles > 0 ? 1 : 0;
-        }
-        // 1 - exp(c * ln(1 - p)), accurate also for tiny p
-        return -Math.expm1(cycles * Math.log1p(-lossRatePerCycle));
+        int barCycles = barCycles(mark, bars, policy.cycles());
+        double p = policy.lossRatePerCycle();
+        int spares = quantile(barCycles, p, perMarkLevel);
+        int held = Math.max(spares, alreadyInKit);
+        return new MarkSpares(mark, bars, barCycles, p, spares, perMarkLevel, alreadyInKit,
+                coverage(barCycles, p, held));
     }
 
     /** The per-mark share of a kit's service level, {@code level^(1/marks)}; the level itself for one mark or none. */
@@ -86,22 +95,22 @@ public final class ServiceLifeSpares {
     }
 
     /**
-     * The smallest {@code s} in [0, n] with {@code P(X <= s) >= level} for X ~ Binomial(n, q).
+     * The smallest {@code s} in [0, trials] with {@code P(X <= s) >= level} for X ~ Binomial(trials, p).
      *
      * @param level in (0, 1]
      */
-    public static int quantile(int n, double q, double level) {
-        if (n < 0 || !(q >= 0 && q <= 1) || !(level > 0 && level <= 1)) {
-            throw new IllegalArgumentException("bad binomial quantile arguments: n=" + n + " q=" + q
+    public static int quantile(int trials, double p, double level) {
+        if (trials < 0 || !(p >= 0 && p <= 1) || !(level > 0 && level <= 1)) {
+            throw new IllegalArgumentException("bad binomial quantile arguments: trials=" + trials + " p=" + p
                     + " level=" + level);
         }
-        if (n == 0 || q == 0) {
+        if (trials == 0 || p == 0) {
             return 0;
         }
-        BinomialDistribution d = BinomialDistribution.of(n, q);
+        BinomialDistribution d = BinomialDistribution.of(trials, p);
         int s = d.inverseCumulativeProbability(level);
         // Confirm the defining inequality in the library's own cumulative probability (guards rounding at the edge).
-        while (s < n && d.cumulativeProbability(s) < level) {
+        while (s < trials && d.cumulativeProbability(s) < level) {
             s++;
         }
         while (s > 0 && d.cumulativeProbability(s - 1) >= level) {
@@ -110,12 +119,12 @@ public final class ServiceLifeSpares {
         return s;
     }
 
-    /** P(X <= spares) for X ~ Binomial(bars, q): the chance that a mark is covered. */
-    public static double coverage(int bars, double q, int spares) {
-        if (bars == 0 || q == 0 || spares >= bars) {
+    /** P(X <= spares) for X ~ Binomial(trials, p): the chance that a mark with {@code spares} is covered. */
+    public static double coverage(int trials, double p, int spares) {
+        if (trials == 0 || p == 0 || spares >= trials) {
             return 1;
         }
-        return BinomialDistribution.of(bars, q).cumulativeProbability(spares);
+        return BinomialDistribution.of(trials, p).cumulativeProbability(spares);
     }
 
     /**
@@ -133,5 +142,15 @@ public final class ServiceLifeSpares {
         if (!(policy.serviceLevel() > 0 && policy.serviceLevel() <= 1)) {
             throw new IllegalArgumentException("serviceLevel must be in (0, 1]: " + policy.serviceLevel());
         }
+    }
+
+    /** n * c, the trials of a mark's losses; the kit.json limit on cycles keeps it within an {@code int}. */
+    private static int barCycles(String mark, int bars, int cycles) {
+        long trials = (long) bars * cycles;
+        if (trials > Integer.MAX_VALUE) {
+            throw new IllegalArgumentException("mark " + mark + ": " + bars + " bars x " + cycles
+                    + " cycles is more bar-cycles than " + Integer.MAX_VALUE);
+        }
+        return (int) trials;
     }
 }

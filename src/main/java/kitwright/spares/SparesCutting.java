@@ -16,7 +16,7 @@ import kitwright.model.Status;
 
 /**
  * Puts the service-life spares into the cutting plan, cutting them from offcuts first and buying stock only for
- * the rest (DOMAIN.md section 6: offcuts long enough for a spare bar are free spares).
+ * the rest (src/docs/sources.md, common practice: offcuts long enough for a spare bar are free spares).
  *
  * <p><b>Method.</b> (1) Plan the kit's demand and fill its offcuts with up to the spares each mark needs; bars the
  * plan cuts beyond the demand anyway count as spares too. (2) While some mark is short, add the shortfall to that

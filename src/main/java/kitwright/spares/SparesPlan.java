@@ -12,7 +12,7 @@ import kitwright.model.SparesPolicy;
  * @param totalToMake         spares still to be made (beyond the kit's existing surplus)
  * @param totalExpectedLosses mean bars lost over the kit's life, all marks
  * @param kitLevel            probability that every mark is covered under independence: the product of the marks'
- *                            P(losses <= spares); at least {@code policy.serviceLevel()} by construction
+ *                            {@link MarkSpares#coverage()}; at least {@code policy.serviceLevel()} by construction
  */
 public record SparesPlan(SparesPolicy policy, List<MarkSpares> marks, int totalSpares, int totalToMake,
                          double totalExpectedLosses, double kitLevel) {

@@ -5,6 +5,7 @@ import kitwright.cutting.CutProgress;
 import kitwright.cutting.KitCutter;
 import kitwright.cutting.SearchLimits;
 import kitwright.model.Kit;
+import kitwright.model.SparesPolicy;
 
 /**
  * The cutting stage with the kit's service-life spares: without a {@code spares} policy in kit.json it is
@@ -29,6 +30,15 @@ public final class SparesStage {
     }
 
     /**
+     * The spares the kit's policy asks for, as {@link #cut} sizes them (and so as {@code plan} makes them and
+     * {@code check} states them), or null when kit.json sets no {@code spares} policy.
+     */
+    public static SparesPlan sizing(Kit kit) {
+        SparesPolicy policy = kit.settings().spares();
+        return policy == null ? null : ServiceLifeSpares.plan(kit.bars(), policy);
+    }
+
+    /**
      * @param sparesFromOffcuts without a spares policy: fill offcuts with unlimited spares ({@code --spares-from-offcuts});
      *                          with a policy the policy decides how many spares are cut
      * @param limits            work and time limits per section, or null for the defaults
@@ -38,7 +48,7 @@ public final class SparesStage {
             return new Result(KitCutter.cut(kit, new KitCutter.Options(sparesFromOffcuts, limits), progress), null,
                     null);
         }
-        SparesPlan sizing = ServiceLifeSpares.plan(kit.bars(), kit.settings().spares());
+        SparesPlan sizing = sizing(kit);
         SparesCuttingResult supply = SparesCutting.apply(kit, sizing, new KitCuttingSteps(limits, progress));
         return new Result(supply.plan(), sizing, supply);
     }

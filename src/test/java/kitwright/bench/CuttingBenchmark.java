@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Predicate;
@@ -27,7 +28,8 @@ import kitwright.validate.CutPlanValidator;
  * java -cp target/classes:target/test-classes:$(cat target/cp.txt) kitwright.bench.CuttingBenchmark [SET...]
  *     [--markdown FILE]
  * </pre>
- * SET is {@code examples}, {@code triplets}, {@code kits} or {@code large} (default: all four). Peak memory of the
+ * SET is {@code examples}, {@code triplets}, {@code kits}, {@code large} or {@code rack} (default: all five);
+ * {@code rack=5,30} runs the rack set with those numbers of rack rows only (0: the 1,000 mill lengths). Peak memory of the
  * large kit: {@code /usr/bin/time -v java ... kitwright.bench.CuttingBenchmark large}. Every plan goes through
  * the shared validator. Default limits (as {@code kitwright cut}), a 60 s safety net per section.
  *
@@ -41,9 +43,13 @@ public final class CuttingBenchmark {
 
     /** One planned instance (a kit may hold several sections). */
     record Row(String set, String name, String kind, int marks, int bars, int sections, int pieces, double value,
-               double bound, double firstFit, boolean proven, double seconds) {
+               double bound, double firstFit, boolean proven, boolean timedOut, double seconds) {
         double gap() {
             return value > 0 ? (value - bound) / value : 0;
+        }
+
+        String status() {
+            return proven ? "OPTIMAL" : timedOut ? "FEASIBLE, " + SectionCutPlan.STOPPED_BY_TIME_LIMIT : "FEASIBLE";
         }
     }
 
@@ -58,7 +64,7 @@ public final class CuttingBenchmark {
             }
         }
         if (sets.isEmpty()) {
-            sets = List.of("examples", "triplets", "kits", "large");
+            sets = List.of("examples", "triplets", "kits", "large", "rack");
         }
         String loadBefore = loadAverage();
         warmUp();
@@ -69,7 +75,14 @@ public final class CuttingBenchmark {
                 case "triplets" -> triplets(rows);
                 case "kits" -> kits(rows);
                 case "large" -> large(rows);
-                default -> throw new IllegalArgumentException("unknown set " + set);
+                case "rack" -> rack(rows, new int[] {5, 15, 20, 30, 100, 0});
+                default -> {
+                    if (!set.startsWith("rack=")) {
+                        throw new IllegalArgumentException("unknown set " + set);
+                    }
+                    rack(rows, Arrays.stream(set.substring(5).split(",")).mapToInt(Integer::parseInt)
+                            .toArray());
+                }
             }
         }
         String summary = summary(rows) + "load average (1 min) before " + loadBefore + ", after " + loadAverage()
@@ -83,7 +96,7 @@ public final class CuttingBenchmark {
     }
 
     /** The 1-minute load average from /proc/loadavg, or "unknown". */
-    private static String loadAverage() {
+    static String loadAverage() {
         try {
             return Files.readString(Path.of("/proc/loadavg")).split(" ")[0];
         } catch (IOException | RuntimeException e) {
@@ -152,6 +165,32 @@ public final class CuttingBenchmark {
         rows.add(run("large", "200 marks", "multi", problems));
     }
 
+    /**
+     * One section of 12 marks on 6 m and 12 m stock with many rack offcut rows (a rack after several jobs), and one
+     * with the same marks on 1,000 mill lengths, each under plan's default 10 s safety net.
+     */
+    private static void rack(List<Row> rows, int[] rackRows) {
+        SearchLimits limits = SearchLimits.defaults(10);
+        for (int r : rackRows) {
+            SectionProblem section = Instances.kitSection("R", 12, 2, r, 60, 4242, limits);
+            rows.add(run("rack", r == 0 ? "1,000 mill lengths" : r + " rack rows", "multi",
+                    List.of(r == 0 ? millLengths(section, 1000) : section)));
+        }
+    }
+
+    /** The section's marks on {@code lengths} unlimited mill lengths of 3-13 m, 8 % cheaper per metre at 13 m. */
+    private static SectionProblem millLengths(SectionProblem section, int lengths) {
+        List<StockOption> stock = new ArrayList<>();
+        for (int j = 0; j < lengths; j++) {
+            double length = 3000 + 10 * j;
+            double perMetre = 8 * (1 - 0.08 * j / lengths);
+            stock.add(new StockOption(length, Math.round(length / 1000 * perMetre * 100) / 100.0, null,
+                    Origin.MILL));
+        }
+        return new SectionProblem(section.section(), section.demands(), stock, section.kerfMm(),
+                section.trimMm(), section.minRemnantMm(), section.limits());
+    }
+
     private static Row run(String set, String name, String kind, List<SectionProblem> problems) {
         CuttingStockOptimizer optimizer = new CuttingStockOptimizer();
         double value = 0;
@@ -161,6 +200,7 @@ public final class CuttingBenchmark {
         int bars = 0;
         int marks = 0;
         boolean proven = true;
+        boolean timedOut = false;
         long start = System.nanoTime();
         for (SectionProblem problem : problems) {
             CuttingStockOptimizer.Outcome outcome = optimizer.optimize(problem, CutProgress.NONE);
@@ -176,13 +216,14 @@ public final class CuttingBenchmark {
             bars += problem.demands().stream().mapToInt(Demand::quantity).sum();
             marks += problem.demands().size();
             proven &= plan.status() == Status.OPTIMAL;
+            timedOut |= SectionCutPlan.STOPPED_BY_TIME_LIMIT.equals(plan.reason());
         }
         double seconds = (System.nanoTime() - start) / 1e9;
         Row row = new Row(set, name, kind, marks, bars, problems.size(), pieces, value, bound, firstFit, proven,
-                seconds);
+                timedOut, seconds);
         System.out.printf(Locale.ROOT, "%-9s %-26s %3d marks %6d bars %5d pieces  value %11.2f  bound %11.2f"
                         + "  gap %6.3f%%  %-8s %6.2f s  FFD %11.2f%n", set, name, marks, bars, pieces, value, bound,
-                100 * row.gap(), proven ? "OPTIMAL" : "FEASIBLE", seconds, firstFit);
+                100 * row.gap(), row.status(), seconds, firstFit);
         return row;
     }
 
@@ -205,6 +246,7 @@ public final class CuttingBenchmark {
         group(sb, rows, "kits, several lengths or rack", r -> r.set().equals("kits") && r.kind().equals("multi"));
         group(sb, rows, "kits up to 40 marks / 2,000 bars", r -> r.set().equals("kits") && r.bars() <= 2000);
         group(sb, rows, "large kit (200 marks)", r -> r.set().equals("large"));
+        group(sb, rows, "rack offcut rows (12 marks)", r -> r.set().equals("rack"));
         return sb.toString();
     }
 
@@ -221,7 +263,7 @@ public final class CuttingBenchmark {
                 100 * gaps[gaps.length - 1]));
     }
 
-    private static double median(double[] sorted) {
+    static double median(double[] sorted) {
         int n = sorted.length;
         return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
     }
@@ -241,7 +283,7 @@ public final class CuttingBenchmark {
         for (Row r : rows) {
             sb.append(String.format(Locale.ROOT, "| %s | %s | %d | %d | %d | %.2f | %.2f | %.3f | %s | %.2f | %.2f |%n",
                     r.set(), r.name(), r.marks(), r.bars(), r.pieces(), r.value(), r.bound(), 100 * r.gap(),
-                    r.proven() ? "OPTIMAL" : "FEASIBLE", r.seconds(), r.firstFit()));
+                    r.status(), r.seconds(), r.firstFit()));
         }
         return sb.toString();
     }

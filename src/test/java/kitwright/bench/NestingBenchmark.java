@@ -47,7 +47,7 @@ public final class NestingBenchmark {
     public static void main(String[] args) {
         FitRule rule = new FitRule(NestTolerance.WORST_CASE, 2.0);
         NestingOptions options = NestingOptions.DEFAULT;
-        com.google.ortools.Loader.loadNativeLibraries(); // once per JVM, not part of any instance's time
+        kitwright.natives.SolverLibraries.load(); // once per JVM, not part of any instance's time
         System.out.println("| instance | marks | pieces | bundles | lower bound | gap % | status | volume bundled / loose | seconds |");
         System.out.println("| --- | ---: | ---: | ---: | ---: | ---: | --- | ---: | ---: |");
         List<double[]> rows = new ArrayList<>();

@@ -45,8 +45,8 @@ import kitwright.validate.LoadPlanValidator;
  * java -cp target/classes:target/test-classes:$(cat target/cp.txt) kitwright.bench.PackingBenchmark
  * </pre>
  * {@code -Dbench.only=KIT} runs one kit; {@code -Dbench.crates=true} prints each crate's fill by mass and volume.
- * Targets (issue 6): crates within 15 % of the box-volume bound, trip cost within 10 % of the fleet-cost bound,
- * under 10 s.
+ * Targets (src/docs/packing.md): crates within 15 % of the box-volume bound, trip cost within 10 % of the
+ * fleet-cost bound, under 10 s.
  */
 public final class PackingBenchmark {
     private static final int RUNS = 3;

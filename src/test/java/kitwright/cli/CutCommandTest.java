@@ -97,4 +97,18 @@ class CutCommandTest {
         assertThat(run("cut", "sample-kits/cinema-6", "--kerf", "-1")).isEqualTo(ExitCode.INVALID_INPUT.code());
         assertThat(err.toString()).contains("--kerf -1.0 is not allowed");
     }
+
+    @Test
+    void aSectionTheTimeLimitStoppedSaysSoInCuttingJsonAndOnTheConsole() throws Exception {
+        Path json = temp.resolve("cutting.json");
+        int code = run("cut", "sample-kits/cinema-6", "--time-limit", "0.000001", "--json", json.toString());
+        assertThat(code).as(err.toString()).isZero();
+        CutPlan plan = PrettyJson.mapper().readValue(Files.readString(json), CutPlan.class);
+        CutPlanValidator.validate(KitReader.read(Path.of("sample-kits/cinema-6")), plan);
+        var feasible = plan.sections().stream().filter(s -> s.status() == kitwright.model.Status.FEASIBLE).toList();
+        assertThat(feasible).isNotEmpty().allSatisfy(s -> {
+            assertThat(s.reason()).isEqualTo("stopped by the time limit");
+            assertThat(out.toString()).contains(s.section() + ": FEASIBLE, stopped by the time limit");
+        });
+    }
 }

@@ -40,6 +40,7 @@ class PackCommandTest {
         Run run = run("pack", "sample-kits/cinema-6", "--out", first.toString(), "--json",
                 temp.resolve("first.json").toString());
         assertThat(run.code()).as(run.err()).isZero();
+        WrittenPlans.logisticsFolder(Path.of("sample-kits", "cinema-6"), first);
         assertThat(run.out()).contains("Crates: ").contains("lower bound").contains("Trips: ")
                 .contains("EN 12195-1");
         assertThat(run.out()).as("plain ASCII on the console, numbers without digit groups")

@@ -21,6 +21,7 @@ class PlanCommandTest {
         CliRun run = CliRun.of("plan", "sample-kits/cinema-6", "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
+        WrittenPlans.planFolder(Path.of("sample-kits", "cinema-6"), out, java.time.LocalDate.of(2025, 6, 30));
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
                 "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
@@ -117,5 +118,37 @@ class PlanCommandTest {
                 .doesNotContain("INFEASIBLE, gap");
         assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle B001 (1000 mm long,");
         assertThat(out.resolve("cut-list.csv")).exists();
+    }
+
+    @Test
+    void aPlanTheClockStoppedSaysSoAndTheReportNamesCatalogsTheSameForRelativeAndAbsoluteKitPaths(
+            @TempDir Path dir) throws Exception {
+        // the alu-kiosk sample with its tube catalog given by an absolute path and a time limit of a microsecond
+        Path kit = Files.createDirectories(dir.resolve("kits").resolve("kiosk"));
+        Path sample = Path.of("sample-kits/alu-kiosk");
+        Files.copy(sample.resolve("bars.csv"), kit.resolve("bars.csv"));
+        Path catalog = Path.of("stock-catalogs/aluminium-tube.csv").toAbsolutePath();
+        Files.writeString(kit.resolve("kit.json"), Files.readString(sample.resolve("kit.json"))
+                .replaceAll("\"stockCatalog\": \"[^\"]*\"", "\"stockCatalog\": \""
+                        + catalog.toString().replace("\\", "/") + "\"")
+                .replaceAll("\"timeLimitSeconds\": [0-9.]+", "\"timeLimitSeconds\": 0.000001"));
+        Path relativeKit = Path.of("").toAbsolutePath().relativize(kit.toAbsolutePath());
+        CliRun relative = CliRun.of("plan", relativeKit.toString(), "--out", dir.resolve("relative").toString(),
+                "--date", "2026-12-01");
+        CliRun absolute = CliRun.of("plan", kit.toAbsolutePath().toString(), "--out",
+                dir.resolve("absolute").toString(), "--date", "2026-12-01");
+        assertThat(relative.exitCode()).as(relative.err()).isZero();
+        assertThat(absolute.exitCode()).as(absolute.err()).isZero();
+        String report = Files.readString(dir.resolve("relative").resolve("report.html"));
+        assertThat(Files.readString(dir.resolve("absolute").resolve("report.html"))).isEqualTo(report);
+        assertThat(report).contains("<td>aluminium-tube.csv</td>").contains("stopped by the time limit");
+        JsonNode sections = PrettyJson.mapper().readTree(Files.readString(dir.resolve("relative").resolve("plan.json")))
+                .get("cutting").get("sections");
+        List<JsonNode> feasible = KitFiles.listOf(sections.elements()).stream()
+                .filter(s -> s.get("status").asText().equals("FEASIBLE")).toList();
+        assertThat(feasible).isNotEmpty().allSatisfy(s ->
+                assertThat(s.get("reason").asText()).isEqualTo("stopped by the time limit"));
+        assertThat(relative.out()).contains(feasible.get(0).get("section").asText()
+                + ": FEASIBLE, stopped by the time limit");
     }
 }

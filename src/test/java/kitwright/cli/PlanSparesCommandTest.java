@@ -21,14 +21,17 @@ class PlanSparesCommandTest {
         CliRun run = CliRun.of("plan", kit.toString(), "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.OK.code());
+        WrittenPlans.planFolder(kit, out, java.time.LocalDate.of(2025, 6, 30));
         JsonNode spares = PrettyJson.mapper().readTree(out.resolve("plan.json").toFile()).get("spares");
         JsonNode totals = spares.get("totals");
-        String line = "Service-life spares (5 % of bars lost per cycle, 4 cycles, kit level 90 %): "
-                + totals.get("toMake").asInt() + " to make, " + totals.get("fromOffcuts").asInt()
-                + " cut from offcuts, " + totals.get("bought").asInt() + " bought, extra stock cost "
-                + String.format(java.util.Locale.ROOT, "%.2f", spares.get("extraCost").asDouble())
-                + "; every mark covered with probability "
-                + String.format(java.util.Locale.ROOT, "%.1f", 100 * spares.get("kitLevel").asDouble()) + " %.";
+        String line = "Service-life spares: " + totals.get("toMake").asInt() + " bars to make (5 % of the bars in"
+                + " service lost per cycle, 4 cycles, kit level 90 %; " + totals.get("sparesNeeded").asInt()
+                + " needed, " + totals.get("alreadyInKit").asInt() + " surplus bars in the kit count towards them;"
+                + " every mark covered with probability "
+                + String.format(java.util.Locale.ROOT, "%.1f", 100 * spares.get("kitLevel").asDouble()) + " %)"
+                + System.lineSeparator() + "  " + totals.get("fromOffcuts").asInt() + " cut from offcuts, "
+                + totals.get("bought").asInt() + " bought, extra stock cost "
+                + String.format(java.util.Locale.ROOT, "%.2f", spares.get("extraCost").asDouble()) + ".";
         assertThat(run.out()).contains(line).doesNotContain("MISSING");
         assertThat(totals.get("toMake").asInt()).isPositive();
         assertThat(Files.readString(out.resolve("report.html"))).contains("<tr data-spares-mark=\"A\">");

@@ -35,7 +35,7 @@ class OptionSummariesTest {
 
         OptionSummary s = OptionSummaries.of(result);
         assertThat(s.kit()).isEqualTo("tiny");
-        // The kit summary (issue 2's own count): marks, bars, members, reuse ratio and kit mass.
+        // The kit summary (KitSummary's own count): marks, bars, members, reuse ratio and kit mass.
         assertThat(s.marks()).isEqualTo(result.summary().marks());
         assertThat(s.bars()).isEqualTo(result.summary().bars()).isEqualTo(6 + 9 + 10);
         assertThat(s.members()).isEqualTo(result.summary().members()).isEqualTo(24 + 19);

@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 class SolverBehaviourTest {
 
     @Test
-    void anExpiredTimeLimitStillReturnsThePlanAtHandWithItsGap() {
+    void anExpiredTimeLimitStillReturnsThePlanAtHandWithItsGapAndSaysSo() {
         SectionProblem problem = Instances.kitSection("timed", 30, 3, 2, 40, 11, TestSections.LIMITS)
                 .withLimits(TestSections.LIMITS.withTimeLimitSeconds(1e-6));
         SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
@@ -22,6 +22,7 @@ class SolverBehaviourTest {
         assertThat(plan.status()).isEqualTo(Status.FEASIBLE);
         assertThat(plan.patterns()).isNotEmpty();
         assertThat(plan.gap()).isPositive();
+        assertThat(plan.reason()).isEqualTo("stopped by the time limit");
     }
 
     @Test

@@ -40,7 +40,7 @@ class HostileInputProperties {
     private static final String STRUCTURES = "structure,mark,count\npavilion,A1,12\nstage,A1,8\nstage,B1,6\n";
     private static final String JOINTS = "mark,diameter_mm,mass_kg,quantity\nN90,90,1.6,20\n";
 
-    @Property(tries = 300)
+    @Property(tries = 300, seed = "20261203")
     void readingEndsInAKitOrInOneLineProblems(@ForAll @LongRange(min = 1, max = 1_000_000_000L) long seed)
             throws IOException {
         Random random = new Random(seed);

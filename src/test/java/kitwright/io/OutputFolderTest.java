@@ -90,6 +90,66 @@ class OutputFolderTest {
         assertThat(entries(dir)).isEmpty();
     }
 
+    @Test
+    void theMarkerNamesKitwrightAndListsTheFilesItWrote(@TempDir Path dir) throws Exception {
+        Path target = dir.resolve("plan");
+        try (OutputFolder out = OutputFolder.create(target)) {
+            out.write("summary.json", "{}\n");
+            out.write("drawings/crate-1.svg", "<svg/>\n");
+            out.commit();
+        }
+        java.util.List<String> lines = Files.readAllLines(target.resolve(OutputFolder.MARKER));
+        assertThat(lines.get(0)).startsWith("# kitwright output folder, written by kitwright ");
+        assertThat(lines.stream().filter(l -> !l.startsWith("#"))).containsExactly("drawings/crate-1.svg",
+                "summary.json");
+    }
+
+    @Test
+    void aFileOrFolderNotInTheMarkerStopsTheRunAndIsKept(@TempDir Path dir) throws Exception {
+        Path target = dir.resolve("plan");
+        try (OutputFolder out = OutputFolder.create(target)) {
+            out.write("drawings/crate-1.svg", "<svg/>\n");
+            out.commit();
+        }
+        Files.writeString(target.resolve("drawings/mine.svg"), "keep");
+        Files.createDirectories(target.resolve("photos"));
+
+        assertThatThrownBy(() -> OutputFolder.create(target)).isInstanceOf(InvalidInputException.class)
+                .hasMessageContaining("the folder holds files kitwright did not write: drawings/mine.svg, photos/");
+        assertThat(target.resolve("drawings/mine.svg")).hasContent("keep");
+        assertThat(entries(dir)).containsExactly("plan");
+    }
+
+    @Test
+    void staleTemporaryAndOldFoldersBesideTheTargetAreRemovedByTheNextRun(@TempDir Path dir) throws Exception {
+        Path target = dir.resolve("plan");
+        for (String stale : new String[] {".plan.partial-1x2y3z", ".plan.old-abc123"}) {
+            Path folder = Files.createDirectories(dir.resolve(stale));
+            Files.writeString(folder.resolve(OutputFolder.MARKER), "# kitwright output folder\nreport.html\n");
+            Files.writeString(folder.resolve("report.html"), "half");
+        }
+        Path notOurs = Files.createDirectories(dir.resolve(".plan.partial-mine"));
+        Files.writeString(notOurs.resolve("keep.txt"), "keep");
+        Path otherTarget = Files.createDirectories(dir.resolve(".planb.old-abc123"));
+        Files.writeString(otherTarget.resolve(OutputFolder.MARKER), "# kitwright output folder\n");
+
+        try (OutputFolder out = OutputFolder.create(target)) {
+            out.write("summary.json", "{}\n");
+            out.commit();
+        }
+
+        assertThat(entries(dir)).containsExactly(".plan.partial-mine", ".planb.old-abc123", "plan");
+        assertThat(notOurs.resolve("keep.txt")).hasContent("keep");
+    }
+
+    @Test
+    void aDanglingSymbolicLinkIsNamedBeforeAnyWork(@TempDir Path dir) throws Exception {
+        Path link = Files.createSymbolicLink(dir.resolve("plan"), dir.resolve("nowhere"));
+        assertThatThrownBy(() -> OutputFolder.check(link)).isInstanceOf(InvalidInputException.class)
+                .hasMessageContaining("this is a symbolic link to " + dir.resolve("nowhere") + ", which does not exist");
+        assertThat(entries(dir)).containsExactly("plan");
+    }
+
     private static java.util.List<String> entries(Path dir) throws IOException {
         try (Stream<Path> list = Files.list(dir)) {
             return list.map(p -> p.getFileName().toString()).sorted().toList();

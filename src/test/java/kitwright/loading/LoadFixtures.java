@@ -9,7 +9,7 @@ import kitwright.packing.CratePlan;
 import kitwright.model.Status;
 
 /**
- * Vehicles with the sizes of DOMAIN.md section 4 (invented costs) and crate plans made directly, for the loading
+ * Vehicles with the sizes of src/docs/sources.md (invented costs) and crate plans made directly, for the loading
  * tests.
  */
 public final class LoadFixtures {
@@ -18,10 +18,10 @@ public final class LoadFixtures {
 
     /** Semi-trailer, about 13.6 x 2.48 x 2.7 m inside and 24 t payload (common practice). */
     public static final VehicleType SEMI = new VehicleType("semi-trailer", 13600, 2480, 2700, 24000, 1000,
-            "common practice (DOMAIN.md 4)");
+            "common practice (src/docs/sources.md)");
     /** 7.5 t box truck, about 6.2 x 2.45 x 2.4 m and 2.8 t payload (common practice). */
     public static final VehicleType BOX_TRUCK = new VehicleType("7.5 t box truck", 6200, 2450, 2400, 2800, 400,
-            "common practice (DOMAIN.md 4)");
+            "common practice (src/docs/sources.md)");
     /** ISO 668 1CC (20 ft): inside about 5898 x 2352 x 2393, payload about 28.2 t (common practice). */
     public static final VehicleType CONTAINER_20 = new VehicleType("20 ft container", 5898, 2352, 2393, 28200, 900,
             "ISO 668 1CC; inside sizes common practice");

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 /**
  * The vehicle catalog against the published limits: EU Directive 96/53/EC as amended by 2015/719 (width 2.55 m,
  * articulated vehicle 16.5 m, 40 t gross for 5 axles) and ISO 668 container sizes (1CC 20 ft outside 6058 x 2438 x
- * 2591 mm, 1AA 40 ft 12192 x 2438 x 2591 mm, rated gross 30 480 kg), as quoted in DOMAIN.md section 4.
+ * 2591 mm, 1AA 40 ft 12192 x 2438 x 2591 mm, rated gross 30 480 kg), as src/docs/sources.md quotes them.
  */
 class VehicleCatalogTest {
     private static final Path CATALOG = Path.of("stock-catalogs", "vehicles.csv");
@@ -56,14 +56,26 @@ class VehicleCatalogTest {
     }
 
     @Test
-    @DisplayName("the test fixture: EU 96/53/EC and ISO 668; inside sizes as DOMAIN.md quotes them")
+    @DisplayName("the test fixture: EU 96/53/EC and ISO 668 outside, ISO 1496-1 least inside sizes, 96/53/EC "
+            + "semi-trailer length, 7.5 t gross")
     void fixture() {
         withinPublishedLimits(LoadFixtures.FLEET);
-        // ISO 668 1CC inside about 5898 x 2352 x 2393, 1AA 12032 x 2352 x 2393 (common practice)
-        assertThat(LoadFixtures.CONTAINER_20.deckLengthMm()).isEqualTo(5898);
-        assertThat(LoadFixtures.CONTAINER_40.deckLengthMm()).isEqualTo(12_032);
-        // 13.6 m semi-trailer (common practice)
-        assertThat(LoadFixtures.SEMI.deckLengthMm()).isEqualTo(13_600);
+        // ISO 1496-1 least inside sizes of a general-purpose container (from memory): 1CC 5867 x 2330 x 2350 mm,
+        // 1AA 11 998 x 2330 x 2350 mm; the fixture's inside sizes must lie between those and ISO 668's outside ones
+        insideAtLeast(LoadFixtures.CONTAINER_20, 5867, 2330, 2350);
+        insideAtLeast(LoadFixtures.CONTAINER_40, 11_998, 2330, 2350);
+        // EU 96/53/EC Annex I 1.6 (from memory): a semi-trailer is at most 12.00 m from king-pin to rear with a
+        // front swing radius of at most 2.04 m, so its load floor is at most 14.04 m long
+        assertThat(LoadFixtures.SEMI.deckLengthMm()).as("semi-trailer load length, 96/53/EC")
+                .isLessThanOrEqualTo(14_040);
+        // a 7.5 t box truck carries less than its 7500 kg gross vehicle mass (EU driving licence category C1)
+        assertThat(LoadFixtures.BOX_TRUCK.payloadKg()).as("7.5 t gross").isLessThan(7500);
+    }
+
+    private static void insideAtLeast(VehicleType v, double length, double width, double height) {
+        assertThat(v.deckLengthMm()).as("%s inside length, ISO 1496-1", v.name()).isGreaterThanOrEqualTo(length);
+        assertThat(v.deckWidthMm()).as("%s inside width, ISO 1496-1", v.name()).isGreaterThanOrEqualTo(width);
+        assertThat(v.deckHeightMm()).as("%s inside height, ISO 1496-1", v.name()).isGreaterThanOrEqualTo(height);
     }
 
     @Test

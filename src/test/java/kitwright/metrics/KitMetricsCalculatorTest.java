@@ -19,6 +19,7 @@ import kitwright.model.KitSettings;
 import kitwright.model.Material;
 import kitwright.model.Origin;
 import kitwright.model.Status;
+import kitwright.validate.CutPlanValidator;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -28,34 +29,56 @@ class KitMetricsCalculatorTest {
     private static final Cut B = new Cut("B", 1800);
     private static final Cut C = new Cut("C", 2950);
 
-    /** 3 x 12 m (4 A each, 382 mm scrap), 1 x 6 m (2 B, 2386 mm remnant), 1 rack 2.5 m (1 B, 688 mm remnant);
-     * 2 x 6 m of CHS 60.3 (2 C each, 86 mm scrap). */
+    /**
+     * 3 x 12 m (4 A each, 382 mm scrap), 1 x 6 m (2 B, 2386 mm remnant), 1 rack 2.5 m (1 B, 688 mm remnant);
+     * 2 x 6 m of CHS 60.3 (2 C each, 86 mm scrap). Checked by the shared cut validator against the fixture kit.
+     *
+     * <p>Value and bound by hand. CHS 48.3: 3 x 110 + 60 + 0 = 390. An A (2900 + 2 kerf) goes four to a 12 m piece
+     * (4 x 2902 = 11 608 &lt;= 12 000 - 10 + 2) at 27.50 each, two to a 6 m piece (3 x 2902 &gt; 5992) at 30.00, and
+     * not into a 2.5 m rack piece; so 12 A cost at least 12 x 27.50 = 330, and the three B could go free into the
+     * three rack pieces: bound 330, the plan FEASIBLE with a gap of 60 / 390. CHS 60.3: two C a 6 m piece
+     * (2 x 2952 &lt;= 5992 &lt; 3 x 2952), so four C need two pieces: 160, OPTIMAL.
+     */
     static CutPlan plan() {
-        return new CutPlan(List.of(
-                section(CHS_48, pattern(12000, Origin.MILL, 3, A, A, A, A), pattern(6000, Origin.MILL, 1, B, B),
-                        pattern(2500, Origin.RACK, 1, B)),
-                section(CHS_60, pattern(6000, Origin.MILL, 2, C, C))));
+        CutPlan plan = new CutPlan(List.of(
+                section(CHS_48, 390, 330, pattern(12000, Origin.MILL, 3, A, A, A, A),
+                        pattern(6000, Origin.MILL, 1, B, B), pattern(2500, Origin.RACK, 1, B)),
+                section(CHS_60, 160, 160, pattern(6000, Origin.MILL, 2, C, C))));
+        CutPlanValidator.validate(MetricsFixtures.kit(Map.of()), plan);
+        return plan;
     }
 
-    static SectionCutPlan section(String name, kitwright.cutting.CutPattern... patterns) {
+    static SectionCutPlan section(String name, double value, double bound, kitwright.cutting.CutPattern... patterns) {
         int pieces = 0;
         for (var p : patterns) {
             pieces += p.count();
         }
-        return new SectionCutPlan(name, 2, 5, 500, "cost", Status.OPTIMAL, null, 0.0, 0.0, 0.0, pieces,
-                List.of(patterns), List.of());
+        double gap = (value - bound) / value;
+        return new SectionCutPlan(name, 2, 5, 500, "cost", gap > 0 ? Status.FEASIBLE : Status.OPTIMAL, null, value,
+                bound, gap, pieces, List.of(patterns), List.of());
     }
 
     @Test
-    @DisplayName("Fixture follows the saw model of issue 3 (offcut = stock - 2 trim - lengths - pieces x kerf)")
+    @DisplayName("The fixture's offcuts follow the saw model (offcut = stock - 2 trim - lengths - pieces x kerf), "
+            + "hand-computed")
     void fixtureFollowsTheSawModel() {
+        // hand-computed, not by the fixture's formula: 12000 - 10 - 4 x 2900 - 4 x 2 = 382 (scrap, below 500);
+        // 6000 - 10 - 2 x 1800 - 2 x 2 = 2386; 2500 - 10 - 1800 - 2 = 688 (remnant); 6000 - 10 - 5900 - 4 = 86
         List<kitwright.cutting.CutPattern> p = plan().sections().get(0).patterns();
         assertThat(p.get(0).offcutMm()).isEqualTo(382.0);
         assertThat(p.get(0).offcutKind()).isEqualTo("scrap");
         assertThat(p.get(1).offcutMm()).isEqualTo(2386.0);
+        assertThat(p.get(1).offcutKind()).isEqualTo("remnant");
         assertThat(p.get(2).offcutMm()).isEqualTo(688.0);
         assertThat(p.get(2).offcutKind()).isEqualTo("remnant");
         assertThat(plan().sections().get(1).patterns().get(0).offcutMm()).isEqualTo(86.0);
+        // and the shared validator, which recomputes every offcut from the saw model, rejects one 1 mm off
+        kitwright.cutting.CutPattern first = p.get(0);
+        CutPlan wrong = new CutPlan(List.of(section(CHS_48, 390, 330, new kitwright.cutting.CutPattern(12000,
+                Origin.MILL, 3, first.cuts(), 383, "scrap"), p.get(1), p.get(2)), plan().sections().get(1)));
+        org.assertj.core.api.Assertions.assertThatThrownBy(
+                () -> CutPlanValidator.validate(MetricsFixtures.kit(Map.of()), wrong))
+                .isInstanceOf(AssertionError.class).hasMessageContaining("offcut");
     }
 
     @Test
@@ -64,7 +87,7 @@ class KitMetricsCalculatorTest {
         Map<String, Material> materials = MetricsFixtures.materials();
         KitMetrics m = KitMetricsCalculator.of(MetricsFixtures.kit(materials), plan());
         // Bought: 42 m of CHS 48.3x3.2 and 12 m of CHS 60.3x3.2; the 2.5 m rack piece is not bought.
-        // EN 10219-2 table masses (DOMAIN.md section 3): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
+        // EN 10219-2 table masses (from memory, src/docs/sources.md): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
         double tableMass = 42 * 3.56 + 12 * 4.51;
         assertThat(m.boughtMassKg()).isCloseTo(tableMass, within(54 * 0.01));
         // The factor and its source are the ones in stock-catalogs/materials.csv (read by the project's reader).
@@ -108,7 +131,7 @@ class KitMetricsCalculatorTest {
     }
 
     @Test
-    @DisplayName("Reuse ratio from structures on a hand-made case: 300 bars serving 750 members = 2.5 (DOMAIN.md 6)")
+    @DisplayName("Reuse ratio from structures on a hand-made case: 300 bars serving 750 members = 2.5 (src/docs/sources.md)")
     void reuseRatio() {
         // Kit quantity per mark is the largest count any one structure needs: A 200, B 100 -> 300 bars.
         Kit base = MetricsFixtures.kit(Map.of());
@@ -140,7 +163,7 @@ class KitMetricsCalculatorTest {
         KitMetrics m = KitMetricsCalculator.of(kit, new CutPlan(List.of()));
         assertThat(m.bars()).isEqualTo(300);
         assertThat(m.members()).isEqualTo(750);
-        assertThat(m.reuseRatio()).as("DOMAIN.md section 6 worked figure").isEqualTo(2.5);
+        assertThat(m.reuseRatio()).as("src/docs/sources.md worked figure").isEqualTo(2.5);
     }
 
     @Test
@@ -179,7 +202,7 @@ class KitMetricsCalculatorTest {
     void usedStockMassCountsTheRackOffcutsTaken() {
         KitMetrics m = KitMetricsCalculator.of(MetricsFixtures.kit(MetricsFixtures.materials()), plan());
         // Cut: 42 m mill + 2.5 m rack of CHS 48.3x3.2, 12 m mill of CHS 60.3x3.2. EN 10219-2 table masses
-        // (DOMAIN.md section 3): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
+        // (from memory, src/docs/sources.md): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
         assertThat(m.usedStockMassKg()).isCloseTo(44.5 * 3.56 + 12 * 4.51, within(56.5 * 0.01));
         assertThat(m.usedStockMassKg() - m.boughtMassKg()).as("the 2.5 m rack piece")
                 .isCloseTo(2.5 * 3.56, within(2.5 * 0.01));

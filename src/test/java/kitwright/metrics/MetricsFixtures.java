@@ -57,14 +57,15 @@ public final class MetricsFixtures {
 
     /** Marks A, B on CHS 48.3 and C on CHS 60.3, 8 joints of 1.5 kg, no structures.csv. */
     public static Kit kit(Map<String, Material> materials) {
-        return new Kit(null, KitSettings.defaults("fixture"),
+        return new Kit(null, KitSettings.defaults("fixture").withKerfMm(KERF).withTrimMm(TRIM)
+                .withMinRemnantMm(MIN_REMNANT),
                 List.of(bar("A", CHS_48, 2900, 12, 12), bar("B", CHS_48, 1800, 3, 3), bar("C", CHS_60, 2950, 4, 4)),
                 List.of(), List.of(new Joint("N1", 100, 1.5, 8)), catalog(), materials, List.of(), List.of());
     }
 
     /**
-     * A cutting pattern whose offcut follows the saw model of issue 3: offcut = stock - 2 trim - sum(lengths) -
-     * pieces x kerf, floored at 0; a remnant from MIN_REMNANT up.
+     * A cutting pattern whose offcut follows the saw model (src/docs/sources.md): offcut = stock - 2 trim
+     * - sum(lengths) - pieces x kerf, floored at 0; a remnant from MIN_REMNANT up.
      */
     public static CutPattern pattern(double stock, Origin origin, int count, Cut... cuts) {
         double used = 0;

@@ -14,7 +14,7 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 class FitRuleTest {
-    // The nesting chain of EN 10219-2 sizes (DOMAIN.md section 3).
+    // The nesting chain of EN 10219-2 sizes (src/docs/sources.md, "Tube sections").
     static final Section S889 = steel(88.9, 3.2);
     static final Section S761 = steel(76.1, 3.2);
     static final Section S603 = steel(60.3, 3.2);
@@ -23,7 +23,7 @@ class FitRuleTest {
     static final Section S424 = steel(42.4, 2.6);
 
     @Test
-    @DisplayName("Nominal, 2 mm clearance: 88.9x3.2 > 76.1x3.2 > 60.3x3.2 > 48.3x3.2 > 33.7 nest; 42.4 not in 48.3x3.2 (DOMAIN.md 3)")
+    @DisplayName("Nominal, 2 mm clearance: 88.9x3.2 > 76.1x3.2 > 60.3x3.2 > 48.3x3.2 > 33.7 nest; 42.4 not in 48.3x3.2 (sources.md, Tube sections)")
     void nominalChain() {
         FitRule rule = NestingFixtures.nominal();
         assertThat(rule.envelope(S889).boreMm()).isCloseTo(82.5, within(1e-9));
@@ -38,7 +38,7 @@ class FitRuleTest {
     }
 
     @Test
-    @DisplayName("Worst case EN 10219-1, 2 mm clearance, 1 mm bead: spare margins 1.11, 4.40, 0.86, 3.56 mm (DOMAIN.md 3, hand-computed)")
+    @DisplayName("Worst case EN 10219-2, 2 mm clearance, 1 mm bead: spare margins 1.11, 4.40, 0.86, 3.56 mm (sources.md, hand-computed)")
     void worstCaseMargins() {
         FitRule rule = NestingFixtures.worstCase();
         Section[] chain = {S889, S761, S603, S483, S337};
@@ -51,7 +51,7 @@ class FitRuleTest {
                     .isCloseTo(margins[i], within(0.005));
             assertThat(rule.fits(guest, host)).isTrue();
         }
-        // Without the bead and the clearance the margins are 4.11, 7.40, 3.86, 6.56 mm (DOMAIN.md 3).
+        // Without the bead and the clearance the margins are 4.11, 7.40, 3.86, 6.56 mm (sources.md, hand-computed).
         double[] gross = {4.11, 7.40, 3.86, 6.56};
         for (int i = 0; i < gross.length; i++) {
             TubeEnvelope host = rule.envelope(chain[i]);
@@ -61,13 +61,37 @@ class FitRuleTest {
     }
 
     @Test
-    @DisplayName("EN 10219-1 tolerances from memory: OD 1 % within [0.5, 10] mm; wall 10 % up to 5 mm, 0.5 mm above")
+    @DisplayName("EN 10219-2 tolerances from memory: OD 1 % within [0.5, 10] mm; wall 10 % up to 5 mm, 0.5 mm above")
     void steelTolerances() {
         assertThat(FitRule.steelOuterDiameterToleranceMm(33.7)).isEqualTo(0.5);
         assertThat(FitRule.steelOuterDiameterToleranceMm(88.9)).isCloseTo(0.889, within(1e-12));
         assertThat(FitRule.steelOuterDiameterToleranceMm(1219)).isEqualTo(10);
-        assertThat(FitRule.steelWallToleranceMm(3.2)).isCloseTo(0.32, within(1e-12));
-        assertThat(FitRule.steelWallToleranceMm(6.3)).isEqualTo(0.5);
+        assertThat(FitRule.steelWallToleranceMm(88.9, 3.2)).isCloseTo(0.32, within(1e-12));
+        assertThat(FitRule.steelWallToleranceMm(88.9, 6.3)).isEqualTo(0.5);
+    }
+
+    @Test
+    @DisplayName("EN 10219-2 (from memory), D > 406.4 mm: wall +/-10 % at most 2 mm; 508x10 bore 479.92, 610x25 548.9 (hand-computed)")
+    void largeDiameterWallTolerance() {
+        FitRule rule = NestingFixtures.worstCase();
+        // 508 x 10: OD tolerance 1 % = 5.08 mm; wall 10 % of 10 = 1.0 mm (not 0.5: D > 406.4); bead 1.0 mm:
+        // bore = (508 - 5.08) - 2 (10 + 1.0) - 1.0 = 479.92 mm, outside 508 + 5.08 = 513.08 mm.
+        assertThat(rule.envelope(steel(508, 10)).boreMm()).isCloseTo(479.92, within(1e-9));
+        assertThat(rule.envelope(steel(508, 10)).outerDiameterMm()).isCloseTo(513.08, within(1e-9));
+        // 610 x 25: 10 % of 25 = 2.5 mm, capped at 2 mm: bore = (610 - 6.1) - 2 (25 + 2) - 1.0 = 548.9 mm.
+        assertThat(rule.envelope(steel(610, 25)).boreMm()).isCloseTo(548.9, within(1e-9));
+        // 406.4 x 10 is not above 406.4: wall 0.5 mm; bore = (406.4 - 4.064) - 2 (10 + 0.5) - 1.0 = 380.336 mm.
+        assertThat(rule.envelope(steel(406.4, 10)).boreMm()).isCloseTo(380.336, within(1e-9));
+        // thin walls are 10 % of T on both sides of 406.4 mm
+        assertThat(FitRule.steelWallToleranceMm(457, 4)).isCloseTo(0.4, within(1e-12));
+        assertThat(FitRule.steelWallToleranceMm(323.9, 4)).isCloseTo(0.4, within(1e-12));
+        // 508 x 10 (outside 513.08 + 2 clearance = 515.08) nests in 610 x 25 (bore 548.9); the validator agrees
+        List<Tube> tubes = NestingFixtures.tubes(List.of(), rule, "H", steel(610, 25), 6000, 1);
+        tubes = NestingFixtures.tubes(tubes, rule, "G", steel(508, 10), 5900, 1);
+        NestingProblem problem = new NestingProblem(tubes, rule.clearanceMm(), 10, null);
+        NestResult result = Nester.run(problem, rule, NestingFixtures.quick());
+        NestPlanValidator.validate(problem, result.plan());
+        assertThat(result.plan().bundles()).hasSize(1);
     }
 
     @Test
@@ -124,7 +148,7 @@ class FitRuleTest {
     void noBoreLeft() {
         FitRule rule = NestingFixtures.worstCase();
         Section thick = steel(10, 4);
-        // EN 10219-1 from memory: OD tolerance max(0.5, 1 % of 10) = 0.5 mm, wall 10 % of 4 = 0.4 mm, bead 1.0 mm.
+        // EN 10219-2 from memory: OD tolerance max(0.5, 1 % of 10) = 0.5 mm, wall 10 % of 4 = 0.4 mm, bead 1.0 mm.
         assertThat(rule.envelope(thick).boreMm()).isZero();
         assertThat(rule.envelope(thick).outerDiameterMm()).isCloseTo(10.5, within(1e-9));
         Section thin = new Section("wire 1", "aluminium", 1, 0.2, null, null, null);

@@ -20,11 +20,11 @@ class PatternColumnGenerationTest {
                 patterns.stream().map(Pattern::counts).toList());
     }
 
-    static double referenceLp(List<TubeType> types, List<Integer> hostOf, List<List<Integer>> counts) {
+    static double referenceLp(List<TubeType> types, List<Integer> hostOf, List<TypeCounts> counts) {
         ExpressionsBasedModel model = new ExpressionsBasedModel();
         Variable[] x = new Variable[counts.size()];
         for (int p = 0; p < counts.size(); p++) {
-            x[p] = model.addVariable("x" + p).lower(0).weight(counts.get(p).stream().mapToInt(i -> i).sum());
+            x[p] = model.addVariable("x" + p).lower(0).weight(counts.get(p).total());
         }
         for (TubeType t : types) {
             Expression supply = model.addExpression("supply" + t.index()).upper(t.count());

@@ -17,6 +17,8 @@ import kitwright.model.Kit;
 import kitwright.model.NestTolerance;
 import kitwright.model.Origin;
 import kitwright.model.Status;
+import kitwright.model.StockLength;
+import kitwright.validate.CutPlanValidator;
 import kitwright.validate.NestPlanValidator;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -25,24 +27,66 @@ import org.junit.jupiter.params.provider.ValueSource;
 public class SampleKitNestingTest {
 
     /**
-     * A stand-in for the cutting stage: every bar of the kit sawn from its own piece of the longest stock length.
-     * Nesting only reads the cuts, so this is enough to nest every piece of a kit.
+     * A stand-in for the cutting stage: every bar of the kit sawn from its own piece of the section's longest mill
+     * stock, offcuts by the saw model, value by the validator's objective, bound 0 (FEASIBLE). Nesting only reads the
+     * cuts, so this is enough to nest every piece of a kit; the shared cut validator checks it before use.
      */
     public static CutPlan oneBarPerStockPiece(Kit kit) {
+        var settings = kit.settings();
         List<SectionCutPlan> sections = new ArrayList<>();
         for (String section : kit.usedSections()) {
+            List<StockLength> rows = kit.catalog().stockFor(section);
+            StockLength stock = rows.stream().filter(r -> r.origin() == Origin.MILL)
+                    .max(java.util.Comparator.comparingDouble(StockLength::lengthMm)).orElseThrow();
+            boolean priced = rows.stream().filter(r -> r.origin() == Origin.MILL).allMatch(r -> r.price() != null)
+                    && rows.stream().anyMatch(r -> r.price() != null && r.price() > 0);
             List<CutPattern> patterns = new ArrayList<>();
-            double stock = kit.catalog().longestLengthMm(section);
+            double value = 0;
             for (Bar bar : kit.bars()) {
                 if (bar.section().equals(section)) {
-                    patterns.add(new CutPattern(stock, Origin.MILL, bar.quantity(),
-                            List.of(new Cut(bar.mark(), bar.lengthMm())), 0, "scrap"));
+                    double offcut = Math.max(0, stock.lengthMm() - 2 * settings.trimMm() - bar.lengthMm()
+                            - settings.kerfMm());
+                    patterns.add(new CutPattern(stock.lengthMm(), Origin.MILL, bar.quantity(),
+                            List.of(new Cut(bar.mark(), bar.lengthMm())), offcut,
+                            offcut > 0 && offcut >= settings.minRemnantMm() ? "remnant" : "scrap"));
+                    value += bar.quantity() * (priced ? stock.price() : stock.lengthMm());
                 }
             }
-            sections.add(new SectionCutPlan(section, 2, 5, 500, "length", Status.FEASIBLE, null, 0.0, 0.0, 0.0,
+            sections.add(new SectionCutPlan(section, settings.kerfMm(), settings.trimMm(), settings.minRemnantMm(),
+                    priced ? "cost" : "length", Status.FEASIBLE, null, value, 0.0, 1.0,
                     patterns.stream().mapToInt(CutPattern::count).sum(), patterns, List.of()));
         }
-        return new CutPlan(sections);
+        CutPlan plan = new CutPlan(sections);
+        CutPlanValidator.validate(kit, plan);
+        return plan;
+    }
+
+    /**
+     * A lower bound on the bundles, counted without the nesting code: a piece that fits in no other piece (worst-case
+     * outside diameter + clearance above every other piece's worst-case bore, or longer than every such piece less
+     * its two end allowances) is the host of a bundle of its own. Sizes are the shared validator's rule.
+     */
+    static int piecesWithoutAHost(Kit kit, CutPlan cuts) {
+        var s = kit.settings();
+        List<double[]> pieces = new ArrayList<>(); // outside, bore, length
+        for (SectionCutPlan sp : cuts.sections()) {
+            double[] sizes = NestPlanValidator.sizes(kit.catalog().section(sp.section()).orElseThrow(),
+                    s.nestTolerance());
+            for (CutPattern p : sp.patterns()) {
+                for (Cut c : p.cuts()) {
+                    for (int i = 0; i < p.count(); i++) {
+                        pieces.add(new double[] {sizes[0], sizes[1], c.lengthMm()});
+                    }
+                }
+            }
+        }
+        int alone = 0;
+        for (double[] p : pieces) {
+            boolean host = pieces.stream().anyMatch(q -> q != p && p[0] + s.nestClearanceMm() <= q[1]
+                    && p[2] <= q[2] - 2 * s.nestEndAllowanceMm());
+            alone += host ? 0 : 1;
+        }
+        return alone;
     }
 
     static Path sample(String name) {
@@ -57,7 +101,12 @@ public class SampleKitNestingTest {
         NestPlan plan = Nester.plan(kit, cuts);
         NestPlanValidator.validate(kit, cuts, plan);
         int pieces = kit.bars().stream().mapToInt(Bar::quantity).sum();
-        assertThat(plan.bundles().size()).isLessThan(pieces);
+        int alone = piecesWithoutAHost(kit, cuts);
+        assertThat(alone).isPositive();
+        assertThat(plan.bundles().size()).as("at least the %d pieces that fit in no other piece", alone)
+                .isGreaterThanOrEqualTo(alone).isLessThan(pieces);
+        assertThat(plan.lowerBound()).as("the plan's bound is no weaker than the hand count").isGreaterThanOrEqualTo(
+                alone - 1e-9);
         assertThat(plan.tolerance()).isEqualTo(NestTolerance.WORST_CASE);
         assertThat(PrettyJson.write(Nester.plan(kit, cuts))).isEqualTo(PrettyJson.write(plan));
     }

@@ -11,6 +11,20 @@ public final class Fixtures {
     private Fixtures() {
     }
 
+    /**
+     * The slots of a layout that the shared validator's independent support rule finds unsupported (empty when all
+     * stand), so that the packing tests do not check the packing code's support with its own {@code Support}.
+     */
+    static List<CrateItem> unsupported(List<CrateLayout.Slot> slots, List<ItemType> types, double innerWidthMm) {
+        List<CrateItem> items = new ArrayList<>();
+        for (int k = 0; k < slots.size(); k++) {
+            CrateLayout.Slot s = slots.get(k);
+            items.add(new CrateItem(types.get(s.itemType()).kind(), "S" + k, s.x(), s.y(), s.z(), s.length(),
+                    s.width(), s.height(), 1));
+        }
+        return kitwright.validate.CratePlanValidator.unsupported(items, innerWidthMm);
+    }
+
     /** A bundle that is one tube of the given mark, no guests. */
     public static Bundle bundle(String id, String mark, double lengthMm, double diameterMm, double massKg) {
         return new Bundle(id, lengthMm, diameterMm, massKg,

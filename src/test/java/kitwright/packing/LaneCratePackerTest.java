@@ -29,7 +29,7 @@ class LaneCratePackerTest {
     }
 
     @Test
-    @DisplayName("105 bundles of d = 100 fill one 1000 x 1000 section in staggered rows (hand count, DOMAIN.md 4)")
+    @DisplayName("105 bundles of d = 100 fill one 1000 x 1000 section in staggered rows (hand count, src/docs/sources.md)")
     void reachesTheStaggeredCount() {
         List<CrateType> crates = List.of(crate("cube", 2000, 1000, 1000, 50, 100_000, 100.0));
         assertThat(pack(bundles(105, 2000, 100, 10), List.of(), crates).crates()).hasSize(1);
@@ -127,7 +127,14 @@ class LaneCratePackerTest {
         assertThat(ten.crates()).extracting(Crate::type).containsExactly("small", "small");
         CratePlan hundred = pack(bundles(100, 2000, 100, 5), List.of(), crates);
         assertThat(hundred.crates()).extracting(Crate::type).containsExactly("big");
-        assertThat(hundred.bounds().price()).isLessThanOrEqualTo(100.0);
+        // hand proof: without a big crate 100 bundles need ceil(100 / 9) = 12 small ones (240), with one 100, so
+        // the least price is 100, and 10 bundles cost at least min(100, 2 x 20) = 40
+        assertThat(hundred.bounds().price()).isEqualTo(100.0);
+        assertThat(hundred.status()).isEqualTo(Status.OPTIMAL);
+        // the ten are priced at that optimum; the bound proves only one crate of the cheapest type (20) today, so
+        // the plan says FEASIBLE: a bound between the two, OPTIMAL only when it reaches 40
+        assertThat(ten.bounds().price()).isBetween(20.0, 40.0);
+        assertThat(ten.status()).isEqualTo(ten.bounds().price() == 40.0 ? Status.OPTIMAL : Status.FEASIBLE);
     }
 
     @Test
@@ -185,6 +192,18 @@ class LaneCratePackerTest {
         CratePlan b = pack(bundles, joints, crates);
         assertThat(b).isEqualTo(a);
         assertThat(a.lowerBound()).isLessThanOrEqualTo(a.crates().size());
+        // hand bounds, without the packing code: the 24 bundles longer than 3100 mm (lengths 3800, 4500 and 5200)
+        // only fit the 6 m crate, and every crate carries at most its max gross less its tare
+        long longOnes = bundles.stream().filter(x -> x.lengthMm() > 3100).count();
+        double mass = bundles.stream().mapToDouble(Bundle::massKg).sum() + 40 * 2.2;
+        long sixMetre = a.crates().stream().filter(c -> c.type().equals("6m")).count();
+        assertThat(longOnes).isEqualTo(24);
+        assertThat(a.crates().size()).isGreaterThanOrEqualTo((int) Math.ceil(mass / (2500 - 120)));
+        assertThat(sixMetre * 2380).as("the 6 m crates carry the long bundles")
+                .isGreaterThanOrEqualTo((long) bundles.stream().filter(x -> x.lengthMm() > 3100)
+                        .mapToDouble(Bundle::massKg).sum());
+        assertThat(a.lowerBound()).as("the packer's bound is no weaker than the mass bound")
+                .isGreaterThanOrEqualTo((int) Math.ceil(mass / (2500 - 120)));
     }
 
     @Test

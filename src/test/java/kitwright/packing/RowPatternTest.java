@@ -8,7 +8,7 @@ import org.junit.jupiter.api.Test;
 class RowPatternTest {
 
     @Test
-    @DisplayName("1000 x 1000, d = 100: square 100, staggered 105 (DOMAIN.md section 4, hand count)")
+    @DisplayName("1000 x 1000, d = 100: square 100, staggered 105 (src/docs/sources.md, hand count)")
     void handCountedSquareMetre() {
         // square: floor(1000/100) * floor(1000/100) = 10 * 10
         assertThat(RowPattern.SQUARE.capacity(1000, 1000, 100)).isEqualTo(100);

@@ -107,7 +107,10 @@ class HtmlReportTest {
         String html = HtmlReport.render(ReportModel.of(kit, plan, DATE));
         assertThat(html).contains("<div class=\"figure-value\">" + ShopFormat.money(cost) + "</div>");
         assertThat(html).contains("<div class=\"figure-value\">" + ShopFormat.count(mill) + " pieces</div>");
-        assertThat(html).contains("feasible, gap 1.20\u00A0%");
+        // the gap of the first section that has one, as the fixture's own bound gives it, to 0.01 %
+        double gap = plan.sections().stream().filter(s -> s.gap() > 0).findFirst().orElseThrow().gap();
+        assertThat(html).contains("feasible, gap " + String.format(java.util.Locale.ROOT, "%.2f", 100 * gap)
+                + "\u00A0%");
     }
 
     @Test
@@ -131,12 +134,25 @@ class HtmlReportTest {
 
     @Test
     void anInfeasibleSectionShowsItsReasonAndNoDrawing() {
-        Kit kit = ReportFixtures.sampleKit();
-        CutPlan sample = ReportFixtures.samplePlan(kit);
-        SectionCutPlan none = new SectionCutPlan(ReportFixtures.CHS_33.name(), 2, 5, 500, "cost",
+        // the sample kit's CHS 60.3 and CHS 33.7 bars; CHS 33.7 only from one 6000 mm rack piece: D1 alone
+        // (40 x 900 mm) needs six times that, so the section has no plan
+        Kit sample = ReportFixtures.sampleKit();
+        String hosts = ReportFixtures.CHS_60.name();
+        String thin = ReportFixtures.CHS_33.name();
+        List<StockLength> stock = new java.util.ArrayList<>(sample.catalog().stockFor(hosts));
+        stock.add(new StockLength(thin, 6000, 0.0, 1, Origin.RACK));
+        java.util.Map<String, kitwright.model.Section> sections = new java.util.LinkedHashMap<>();
+        sections.put(hosts, ReportFixtures.CHS_60);
+        sections.put(thin, ReportFixtures.CHS_33);
+        Kit kit = new Kit(sample.dir(), sample.settings(), sample.bars().stream()
+                .filter(b -> b.section().equals(hosts) || b.section().equals(thin)).toList(), List.of(), List.of(),
+                new kitwright.model.TubeCatalog(sample.catalog().file(), sections, stock), sample.materials(),
+                List.of(), List.of());
+        SectionCutPlan none = new SectionCutPlan(thin, 2, 5, 500, "length",
                 Status.INFEASIBLE, "D1 needs 36 000 mm more than the rack holds", null, null, null, 0, List.of(),
                 List.of());
-        CutPlan plan = new CutPlan(List.of(sample.sections().get(0), none));
+        CutPlan plan = new CutPlan(List.of(ReportFixtures.firstFitDecreasing(kit, hosts), none));
+        kitwright.validate.CutPlanValidator.validate(kit, plan);
         String html = HtmlReport.render(ReportModel.of(kit, plan, DATE));
         assertThat(html).contains("No plan for this section: D1 needs 36 000 mm more than the rack holds");
         assertThat(html).contains("<span class=\"status status-infeasible\">no plan</span>");

@@ -131,11 +131,9 @@ class KitFiguresSectionTest {
         assertThat(html).contains("<tr data-spares-mark=\"A\"><td class=\"mark\">A</td>",
                 "<tr data-spares-mark=\"" + HOSTILE_ESCAPED + "\"><td class=\"mark\">" + HOSTILE_ESCAPED + "</td>");
         MarkSpares hostile = spares.sizing().mark(HOSTILE);
-        // 1 - 0.98^10 = 0.18292719..., shown as a percentage to three decimals
-        assertThat(hostile.lossProbability()).isCloseTo(1 - Math.pow(0.98, 10), org.assertj.core.api.Assertions
-                .within(1e-12));
-        assertThat(html).contains("<td class=\"num\">10</td><td class=\"num\">18.293\u00A0%</td><td class=\"num\">"
-                + ShopFormat.decimal(10 * hostile.lossProbability(), 2, true) + "</td>");
+        // 10 bars in service over 10 cycles: 100 bar-cycles, 100 x 0.02 = 2 losses expected
+        assertThat(hostile.barCycles()).isEqualTo(100);
+        assertThat(html).contains("<td class=\"num\">10</td><td class=\"num\">100</td><td class=\"num\">2.00</td>");
         assertThat(html).contains("over 10 cycles", "is 95\u00A0%", "the 2 marks in service",
                 KitFiguresSection.percent(Math.sqrt(0.95)), "independent (common practice)");
         assertThat(html).contains("Extra stock cost of the spares: <strong>123.40</strong>");

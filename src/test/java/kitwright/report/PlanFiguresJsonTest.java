@@ -95,7 +95,7 @@ class PlanFiguresJsonTest {
         assertThat(fieldNames(json.get("spares"))).containsExactly("policy", "kitLevel", "extraCost", "replans",
                 "marks", "totals");
         assertThat(fieldNames(json.get("spares").get("marks").get(0))).containsExactly("mark", "bars",
-                "lossProbability", "expectedLosses", "perMarkLevel", "coverage", "sparesNeeded", "alreadyInKit",
+                "barCycles", "expectedLosses", "perMarkLevel", "coverage", "sparesNeeded", "alreadyInKit",
                 "toMake", "fromOffcuts", "bought", "missing");
         assertThat(fieldNames(json.get("figures"))).containsExactly("marks", "bars", "members", "reuseRatio",
                 "stockPieces", "boughtPieces", "stockLengthMm", "boughtLengthMm", "cost", "offcutPct", "scrapPct",
@@ -103,14 +103,13 @@ class PlanFiguresJsonTest {
     }
 
     @Test
-    @DisplayName("Spares per mark: q = 1 - (1 - p)^c, n q, level^(1/3), Binomial quantile and CDF from commons-math3")
+    @DisplayName("Spares per mark: n c bar-cycles, n c p, level^(1/3), Binomial(n c, p) quantile and CDF from"
+            + " commons-math3")
     void sparesAgainstHandComputationAndCommonsMath() {
         JsonNode spares = json.get("spares");
         assertThat(spares.get("policy").get("lossRatePerCycle").asDouble()).isEqualTo(P);
         assertThat(spares.get("policy").get("cycles").asInt()).isEqualTo(CYCLES);
         assertThat(spares.get("policy").get("serviceLevel").asDouble()).isEqualTo(LEVEL);
-        double q = 1 - Math.pow(1 - P, CYCLES); // 0.18549375 by hand: 0.95^4 = 0.81450625
-        assertThat(q).isCloseTo(0.18549375, within(1e-12));
         double perMark = Math.pow(LEVEL, 1.0 / 3); // three marks in service
         Map<String, int[]> barsAndSurplus = Map.of("A", new int[] {10, 0}, "B", new int[] {6, 0},
                 "C", new int[] {10, 2});
@@ -123,12 +122,13 @@ class PlanFiguresJsonTest {
             int surplus = barsAndSurplus.get(mark)[1];
             // Reference: org.apache.commons.math3.distribution.BinomialDistribution (commons-math3 3.6.1); its
             // inverseCumulativeProbability is the smallest s with P(X <= s) >= level.
-            BinomialDistribution reference = new BinomialDistribution(null, n, q);
+            // Lost bars are replaced and can be lost again: losses ~ Binomial(n c, p).
+            BinomialDistribution reference = new BinomialDistribution(null, n * CYCLES, P);
             int s = reference.inverseCumulativeProbability(perMark);
-            double coverage = reference.cumulativeProbability(s);
+            double coverage = reference.cumulativeProbability(Math.max(s, surplus));
             assertThat(m.get("bars").asInt()).as(mark).isEqualTo(n);
-            assertThat(m.get("lossProbability").asDouble()).as(mark).isCloseTo(q, within(5e-7));
-            assertThat(m.get("expectedLosses").asDouble()).as(mark).isCloseTo(n * q, within(5e-4));
+            assertThat(m.get("barCycles").asInt()).as(mark).isEqualTo(n * CYCLES);
+            assertThat(m.get("expectedLosses").asDouble()).as(mark).isCloseTo(n * CYCLES * P, within(5e-4));
             assertThat(m.get("perMarkLevel").asDouble()).as(mark).isCloseTo(perMark, within(5e-6));
             assertThat(m.get("sparesNeeded").asInt()).as(mark + " (commons-math3 quantile)").isEqualTo(s);
             assertThat(m.get("coverage").asDouble()).as(mark).isCloseTo(coverage, within(5e-6))
@@ -151,7 +151,7 @@ class PlanFiguresJsonTest {
                 .isGreaterThanOrEqualTo(LEVEL);
         JsonNode totals = spares.get("totals");
         assertThat(totals.get("bars").asInt()).isEqualTo(26);
-        assertThat(totals.get("expectedLosses").asDouble()).isCloseTo(26 * q, within(5e-4));
+        assertThat(totals.get("expectedLosses").asDouble()).isCloseTo(26 * CYCLES * P, within(5e-4));
         assertThat(totals.get("toMake").asInt()).isEqualTo(toMakeTotal);
         assertThat(totals.get("alreadyInKit").asInt()).isEqualTo(2);
         assertThat(totals.get("fromOffcuts").asInt() + totals.get("bought").asInt())

@@ -30,6 +30,7 @@ public final class ReadmeScreenshot {
         Path png = Path.of(args.length > 1 ? args[1] : "src/docs/report-screenshot.png");
         Kit kit = KitReader.read(kitDir);
         PlanResult result = Planner.run(kit, Planner.Options.DEFAULT, PlanProgress.NONE);
+        kitwright.validate.PlanValidator.validate(result);
         String html = PlanFiles.of(result, DATE).get(PlanFiles.REPORT_HTML);
         String picture = html.replace("</head>", "<style>#" + PurchaseOrderSection.ID + " { display: none; }</style>\n"
                 + "</head>");

@@ -193,13 +193,13 @@ class ReportBrowserTest {
     @DisplayName("printed, report.html gives A4 pages with each section's saw sheets on a page of their own")
     void printsOnA4WithEverySectionsSawSheetsOnANewPage(@TempDir Path dir) throws Exception {
         HeadlessChromium chromium = chromiumOrSkip(dir);
-        Kit kit = ReportFixtures.sampleKit();
-        // one short pattern per section: without the page breaks all of it would fit on three pages or so
-        CutPlan plan = new CutPlan(ReportFixtures.samplePlan(kit).sections().stream()
-                .map(s -> new kitwright.cutting.SectionCutPlan(s.section(), s.kerfMm(), s.trimMm(),
-                        s.minRemnantMm(), s.objective(), s.status(), s.reason(), s.value(), s.lowerBound(), s.gap(),
-                        s.patterns().get(0).count(), List.of(s.patterns().get(0)), s.spares()))
-                .toList());
+        // one short pattern per section: without the page breaks all of it would fit on three pages or so. The kit
+        // is cut down to the pieces of each section's first pattern, so that the plan is valid for it.
+        Kit kit = ReportFixtures.firstPatternsOnly(ReportFixtures.sampleKit());
+        CutPlan plan = new CutPlan(kit.usedSections().stream()
+                .map(section -> ReportFixtures.firstFitDecreasing(kit, section)).toList());
+        kitwright.validate.CutPlanValidator.validate(kit, plan);
+        assertThat(plan.sections()).allSatisfy(s -> assertThat(s.patterns()).hasSize(1));
         Path page = ReportWriter.writeInto(ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14)), dir);
         Path pdf = dir.resolve("report.pdf");
         chromium.printToPdf(page, pdf);

@@ -20,6 +20,7 @@ import kitwright.model.Section;
 import kitwright.model.Status;
 import kitwright.model.StockLength;
 import kitwright.model.TubeCatalog;
+import kitwright.validate.CutPlanValidator;
 
 /**
  * Hand-made kits and cutting plans for the report tests. All data is invented for the tests. Plans are made by a
@@ -77,26 +78,40 @@ final class ReportFixtures {
     }
 
     /**
-     * Plans for every section of the kit (first-fit decreasing); for the status wording, the first section is
-     * reported OPTIMAL and the second FEASIBLE with a 1.2 % gap and two spares, whatever the plain bound says.
+     * Plans for every section of the kit (first-fit decreasing), checked by the shared validator before use. The
+     * second section also cuts two spares of B5. Each section's status and gap are the ones its continuous bound
+     * proves (for the status wording, the first sections are FEASIBLE with a gap, whatever the optimum is).
      */
     static CutPlan samplePlan(Kit kit) {
         List<SectionCutPlan> plans = new ArrayList<>();
         for (String section : kit.usedSections()) {
-            SectionCutPlan plan = firstFitDecreasing(kit, section);
-            if (section.equals(CHS_48.name())) {
-                double value = plan.value();
-                plan = new SectionCutPlan(plan.section(), KERF, TRIM, MIN_REMNANT, "cost", Status.FEASIBLE, null,
-                        value, value * (1 - 0.012), 0.012, plan.stockPieces(), plan.patterns(),
-                        List.of(new Spare("B5", 2)));
-            } else if (section.equals(CHS_60.name())) {
-                double value = plan.value();
-                plan = new SectionCutPlan(plan.section(), KERF, TRIM, MIN_REMNANT, "cost", Status.OPTIMAL, null,
-                        value, value, 0.0, plan.stockPieces(), plan.patterns(), List.of());
-            }
-            plans.add(plan);
+            plans.add(section.equals(CHS_48.name())
+                    ? firstFitDecreasing(kit, section, List.of(new Spare("B5", 2)))
+                    : firstFitDecreasing(kit, section));
         }
-        return new CutPlan(plans);
+        CutPlan plan = new CutPlan(plans);
+        CutPlanValidator.validate(kit, plan);
+        return plan;
+    }
+
+    /** The kit with only the pieces of each section's first first-fit-decreasing pattern (times its count). */
+    static Kit firstPatternsOnly(Kit kit) {
+        Map<String, Integer> keep = new LinkedHashMap<>();
+        for (String section : kit.usedSections()) {
+            CutPattern first = firstFitDecreasing(kit, section).patterns().get(0);
+            first.cuts().forEach(c -> keep.merge(c.mark(), first.count(), Integer::sum));
+        }
+        List<Bar> bars = kit.bars().stream().filter(b -> keep.containsKey(b.mark()))
+                .map(b -> new Bar(b.mark(), b.section(), b.lengthMm(), keep.get(b.mark()), keep.get(b.mark()),
+                        b.nodeToNodeMm(), b.toleranceMm(), b.note()))
+                .toList();
+        return new Kit(kit.dir(), kit.settings(), bars, kit.structures(), kit.joints(), kit.catalog(),
+                kit.materials(), kit.crates(), kit.vehicles());
+    }
+
+    /** First-fit decreasing of the section's bars alone (no spares). */
+    static SectionCutPlan firstFitDecreasing(Kit kit, String section) {
+        return firstFitDecreasing(kit, section, List.of());
     }
 
     /**
@@ -106,7 +121,7 @@ final class ReportFixtures {
      * the continuous one: every piece with its kerf bought at the lowest price per usable millimetre. OPTIMAL only
      * when the plan meets that bound.
      */
-    static SectionCutPlan firstFitDecreasing(Kit kit, String section) {
+    static SectionCutPlan firstFitDecreasing(Kit kit, String section, List<Spare> spares) {
         double kerf = kit.settings().kerfMm();
         double trim = kit.settings().trimMm();
         List<Bar> bars = kit.bars().stream().filter(b -> b.section().equals(section))
@@ -123,7 +138,9 @@ final class ReportFixtures {
         List<List<Cut>> bins = new ArrayList<>();
         double demand = 0;
         for (Bar bar : bars) {
-            for (int n = 0; n < bar.quantity(); n++) {
+            int pieces = bar.quantity() + spares.stream().filter(x -> x.mark().equals(bar.mark()))
+                    .mapToInt(Spare::count).sum();
+            for (int n = 0; n < pieces; n++) {
                 demand += bar.lengthMm() + kerf;
                 int target = -1;
                 for (int i = 0; i < bins.size() && target < 0; i++) {
@@ -157,7 +174,7 @@ final class ReportFixtures {
         double gap = value == 0 ? 0 : (value - bound) / value;
         return new SectionCutPlan(section, kerf, trim, kit.settings().minRemnantMm(), priced ? "cost" : "length",
                 gap < 1e-9 ? Status.OPTIMAL : Status.FEASIBLE, null, value, bound, gap, bins.size(),
-                List.copyOf(patterns.values()), List.of());
+                List.copyOf(patterns.values()), spares);
     }
 
     /**

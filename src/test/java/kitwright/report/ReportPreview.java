@@ -29,6 +29,7 @@ public final class ReportPreview {
             kit = ReportFixtures.sampleKit();
             plan = ReportFixtures.samplePlan(kit);
         }
+        kitwright.validate.CutPlanValidator.validate(kit, plan);
         ReportModel model = ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14));
         System.out.println(ReportWriter.writeInto(model, out).toAbsolutePath());
     }

@@ -42,6 +42,7 @@ class SampleKitReportTest {
         Kit kit = KitReader.read(dir);
         CutPlan plan = new CutPlan(kit.usedSections().stream()
                 .map(section -> ReportFixtures.firstFitDecreasing(kit, section)).toList());
+        kitwright.validate.CutPlanValidator.validate(kit, plan);
         ReportModel model = ReportModel.of(kit, plan, LocalDate.of(2025, 3, 14));
         String html = HtmlReport.render(model);
         int distinct = plan.sections().stream().mapToInt(s -> SawSheetSection.distinct(s.patterns()).size()).sum();

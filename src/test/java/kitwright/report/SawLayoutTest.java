@@ -10,7 +10,7 @@ import kitwright.report.SawLayout.Kind;
 import kitwright.report.SawLayout.Segment;
 import org.junit.jupiter.api.Test;
 
-/** The saw model of issue 3: piece i starts at trim + sum of earlier (length + kerf); offcut after one more kerf. */
+/** Saw model (src/docs/sources.md): piece i starts at trim + sum of earlier (length + kerf); offcut after one more kerf. */
 class SawLayoutTest {
     @Test
     void piecesStartWhereTheSawModelPutsThem() {

@@ -21,7 +21,6 @@ class SampleKitSparesTest {
         assertThat(kit.settings().spares()).isEqualTo(new SparesPolicy(0.02, 20, 0.95));
         SparesPlan plan = ServiceLifeSpares.plan(kit.bars(), kit.settings().spares());
 
-        double q = 1 - Math.pow(0.98, 20); // 0.3323920..., by hand
         long inService = kit.bars().stream().filter(b -> b.requiredQuantity() > 0).count();
         assertThat(inService).isEqualTo(5);
         double perMark = Math.pow(0.95, 1.0 / inService);
@@ -29,7 +28,8 @@ class SampleKitSparesTest {
         for (Bar bar : kit.bars()) {
             MarkSpares m = plan.mark(bar.mark());
             // Reference: org.apache.commons.math3.distribution.BinomialDistribution (commons-math3 3.6.1)
-            BinomialDistribution reference = new BinomialDistribution(null, bar.requiredQuantity(), q);
+            // n bars in service over 20 cycles, lost bars replaced: Binomial(20 n, 0.02)
+            BinomialDistribution reference = new BinomialDistribution(null, bar.requiredQuantity() * 20, 0.02);
             int spares = reference.inverseCumulativeProbability(perMark);
             assertThat(m.spares()).as(bar.mark()).isEqualTo(spares).isPositive();
             assertThat(m.alreadyInKit()).as(bar.mark()).isEqualTo(bar.surplus());
@@ -37,5 +37,6 @@ class SampleKitSparesTest {
         }
         assertThat(plan.kitLevel()).isCloseTo(kitLevel, org.assertj.core.api.Assertions.within(1e-9))
                 .isGreaterThanOrEqualTo(0.95);
+        assertThat(plan.totalToMake()).as("alu-kiosk's spares, as the sample README states them").isEqualTo(54);
     }
 }

@@ -49,13 +49,25 @@ class ServiceLifeSparesTest {
     }
 
     @Test
-    @DisplayName("Loss over the kit's life: q = 1 - (1 - p)^c (DOMAIN.md section 6)")
-    void lossProbability() {
-        assertThat(ServiceLifeSpares.lossProbability(0.02, 10)).isCloseTo(1 - Math.pow(0.98, 10), within(1e-15));
-        assertThat(ServiceLifeSpares.lossProbability(0.02, 1)).isCloseTo(0.02, within(1e-15));
-        assertThat(ServiceLifeSpares.lossProbability(0.02, 0)).isZero();
-        assertThat(ServiceLifeSpares.lossProbability(1.0, 3)).isEqualTo(1.0);
-        assertThat(ServiceLifeSpares.lossProbability(1e-12, 5)).isCloseTo(5e-12, within(1e-20));
+    @DisplayName("Losses over the life: n bars in service for c cycles are n c trials at p (lost bars replaced)")
+    void barCyclesAreTheTrials() {
+        MarkSpares m = ServiceLifeSpares.forMark("A", 12, 0, new SparesPolicy(0.02, 10, 0.9), 0.9);
+        assertThat(m.barCycles()).isEqualTo(120);
+        assertThat(m.expectedLosses()).isCloseTo(2.4, within(1e-12));
+        // One bar, one cycle: lost with p, so one spare covers it for sure and none with 1 - p.
+        assertThat(ServiceLifeSpares.coverage(1, 0.02, 0)).isCloseTo(0.98, within(1e-15));
+        assertThat(ServiceLifeSpares.coverage(1, 0.02, 1)).isEqualTo(1.0);
+        assertThat(ServiceLifeSpares.forMark("A", 0, 3, new SparesPolicy(0.5, 10, 0.9), 0.9).spares()).isZero();
+        assertThat(ServiceLifeSpares.forMark("A", 5, 0, new SparesPolicy(0.0, 10, 0.9), 0.9).spares()).isZero();
+        // Every bar lost at every cycle: all n c bar-cycles need a spare.
+        assertThat(ServiceLifeSpares.forMark("A", 3, 0, new SparesPolicy(1.0, 4, 0.9), 0.9).spares()).isEqualTo(12);
+    }
+
+    @Test
+    @DisplayName("More bar-cycles than an int holds are refused with the mark named, not wrapped round")
+    void tooManyBarCycles() {
+        assertThatThrownBy(() -> ServiceLifeSpares.forMark("A", 100_000, 0, new SparesPolicy(0.01, 30_000, 0.9),
+                0.9)).hasMessageContaining("mark A").hasMessageContaining("bar-cycles");
     }
 
     @Test
@@ -81,10 +93,12 @@ class ServiceLifeSparesTest {
         SparesPlan plan = ServiceLifeSpares.plan(
                 List.of(bar("A", 240, 240), bar("B", 120, 120), bar("C", 36, 36)), policy);
         for (MarkSpares m : plan.marks()) {
-            BinomialDistribution reference = new BinomialDistribution(null, m.bars(), m.lossProbability());
+            // Reference: org.apache.commons.math3.distribution.BinomialDistribution (commons-math3 3.6.1)
+            BinomialDistribution reference = new BinomialDistribution(null, m.bars() * 6, 0.03);
             assertThat(reference.cumulativeProbability(m.spares())).isGreaterThanOrEqualTo(m.perMarkLevel());
             assertThat(reference.cumulativeProbability(m.spares() - 1)).isLessThan(m.perMarkLevel());
-            assertThat(m.expectedLosses()).isCloseTo(m.bars() * m.lossProbability(), within(1e-12));
+            assertThat(m.coverage()).isCloseTo(reference.cumulativeProbability(m.spares()), within(1e-12));
+            assertThat(m.expectedLosses()).isCloseTo(m.bars() * 6 * 0.03, within(1e-12));
         }
         assertThat(plan.totalSpares()).isEqualTo(plan.marks().stream().mapToInt(MarkSpares::spares).sum());
         assertThat(plan.totalExpectedLosses())

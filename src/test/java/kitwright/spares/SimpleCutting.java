@@ -15,9 +15,9 @@ import kitwright.model.Status;
 import kitwright.model.StockLength;
 
 /**
- * A small test stand-in for the cutting stage: first-fit decreasing over mill stock (the issue 3 rule, cheapest
+ * A small test stand-in for the cutting stage: first-fit decreasing over mill stock (the README's saw model, cheapest
  * price per millimetre first, honouring {@code available}) and a greedy offcut filler (longest bar that fits, on
- * each stock piece in turn). Saw model of issue 3: a piece holds sum(length + kerf) <= stock - 2 trim + kerf.
+ * each stock piece in turn). Saw model (src/docs/sources.md): a piece holds sum(length + kerf) <= stock - 2 trim + kerf.
  */
 final class SimpleCutting implements CuttingSteps {
 

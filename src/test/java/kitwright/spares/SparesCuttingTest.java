@@ -36,7 +36,8 @@ class SparesCuttingTest {
     /** A spares plan asking for the given spares per mark (built directly, to fix the demand of the test). */
     private static SparesPlan asking(int a, int b) {
         return new SparesPlan(new SparesPolicy(0.02, 5, 0.9), List.of(
-                new MarkSpares("A", 4, 0.1, 0.4, a, 0.95, 0), new MarkSpares("B", 5, 0.1, 0.5, b, 0.95, 0)),
+                new MarkSpares("A", 4, 20, 0.02, a, 0.95, 0, 0.95),
+                new MarkSpares("B", 5, 25, 0.02, b, 0.95, 0, 0.95)),
                 a + b, a + b, 0.9, 0.9);
     }
 

@@ -42,7 +42,7 @@ class SparesStageTest {
             assertThat(s.needed()).isEqualTo(sized.toMake()).isPositive();
             assertThat(s.cut()).isGreaterThanOrEqualTo(s.needed());
             assertThat(listed.getOrDefault(s.mark(), 0)).isEqualTo(s.cut());
-            assertThat(s.expectedLosses()).isCloseTo(sized.bars() * sized.lossProbability(), within(1e-12));
+            assertThat(s.expectedLosses()).isCloseTo(sized.bars() * 8 * 0.03, within(1e-12));
         }
         // Spares bought only when the offcuts could not hold them, and their cost is the plan's cost difference.
         double before = KitMetricsCalculator.stockCost(kit,

@@ -49,6 +49,15 @@ public final class CratePlanValidator {
     /** Least share of a box's footprint that must rest on bearing items. */
     static final double BOX_SHARE = 0.5;
 
+    /**
+     * The items of one crate layout (width {@code innerWidthMm}) that stand neither on the floor nor, by the support
+     * rule above, on the other items; empty when every item is supported.
+     */
+    public static List<CrateItem> unsupported(List<CrateItem> items, double innerWidthMm) {
+        return items.stream().filter(i -> i.zMm() > TOUCH
+                && !SupportRule.supported(i, items, innerWidthMm, TOUCH, BOX_SHARE)).toList();
+    }
+
     private CratePlanValidator() {
     }
 

@@ -77,7 +77,9 @@ public final class CutPlanValidator {
             check(plan.stockPieces() == 0, where + "INFEASIBLE uses no stock");
             return;
         }
-        check(plan.reason() == null, where + "reason only when INFEASIBLE");
+        check(plan.reason() == null || (plan.status() == Status.FEASIBLE
+                && plan.reason().equals(SectionCutPlan.STOPPED_BY_TIME_LIMIT)), where
+                + "reason only when INFEASIBLE, or '" + SectionCutPlan.STOPPED_BY_TIME_LIMIT + "' when FEASIBLE");
         Map<String, Demand> byMark = new HashMap<>();
         for (Demand d : demands) {
             byMark.put(d.mark(), d);

@@ -19,7 +19,7 @@ import kitwright.nesting.NestedTube;
 
 /**
  * Re-checks a nesting plan from first principles, without the nesting code: every cut piece appears exactly once
- * with the sizes the fit rule gives (recomputed here from EN 10219-1 as written in DOMAIN.md); every guest's circle
+ * with the sizes the fit rule gives (recomputed here from EN 10219-2, see src/docs/sources.md); every guest's circle
  * lies inside its host's bore less the clearance (so outside + clearance &lt;= bore); no two guests of one host
  * overlap where their length ranges overlap; every guest lies within its host's length less the end allowances;
  * each bundle's length, envelope and mass add up; the mass limit holds; the bound and status agree. Throws an
@@ -60,8 +60,8 @@ public final class NestPlanValidator {
         validate(pieces, s.nestClearanceMm(), s.nestEndAllowanceMm(), s.maxBundleMassKg(), plan);
     }
 
-    /** Outside diameter and bore by the rule: EN 10219-1 worst case for steel, catalog tolerances otherwise. */
-    static double[] sizes(Section section, NestTolerance tolerance) {
+    /** Outside diameter and bore by the rule: EN 10219-2 worst case for steel, catalog tolerances otherwise. */
+    public static double[] sizes(Section section, NestTolerance tolerance) {
         double d = section.outerDiameterMm();
         double t = section.wallMm();
         if (tolerance == NestTolerance.NOMINAL) {
@@ -74,7 +74,7 @@ public final class NestPlanValidator {
         double bead;
         if (steel) {
             od = Math.min(10, Math.max(0.5, d / 100));
-            wall = t <= 5 ? t / 10 : 0.5;
+            wall = d > 406.4 ? Math.min(2, t / 10) : t <= 5 ? t / 10 : 0.5;
             bead = section.weldBeadMm() == null ? 1.0 : section.weldBeadMm();
         } else {
             od = section.odToleranceMm() == null ? 0 : section.odToleranceMm();
