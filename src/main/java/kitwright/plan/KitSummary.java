@@ -12,7 +12,8 @@ import kitwright.model.Bar;
 import kitwright.model.Kit;
 import kitwright.model.Section;
 import kitwright.model.StructureCount;
-import kitwright.spares.ServiceLifeSpares;
+import kitwright.spares.SparesPlan;
+import kitwright.spares.SparesStage;
 
 /**
  * What a kit holds, before anything is planned: marks, bars, cut length and mass per section, joints, the members
@@ -64,13 +65,13 @@ public record KitSummary(String kit, String description, int marks, int bars, In
 
     /**
      * Summarises a validated kit before it is planned: the spares to make are those kit.json's spares policy sizes
-     * ({@link ServiceLifeSpares}), none without a policy.
+     * ({@link SparesStage#sizing}, as {@code plan} makes them), none without a policy.
      */
     public static KitSummary of(Kit kit) {
         Map<String, Integer> toMake = new LinkedHashMap<>();
-        if (kit.settings().spares() != null) {
-            ServiceLifeSpares.plan(kit.bars(), kit.settings().spares()).marks()
-                    .forEach(m -> toMake.put(m.mark(), m.toMake()));
+        SparesPlan sizing = SparesStage.sizing(kit);
+        if (sizing != null) {
+            sizing.marks().forEach(m -> toMake.put(m.mark(), m.toMake()));
         }
         return of(kit, toMake);
     }
