@@ -39,7 +39,7 @@ final class SummaryText {
         }
         sections.row("All sections", "", s.marks(), s.bars(), fixed(totalLength / 1000, 3), fixed(totalMass, 1));
         sb.append('\n').append(sections.render(""));
-        TextTable marks = new TextTable("Mark", "Section", ">Cut length (mm)", ">Quantity", ">Needed", ">Spares",
+        TextTable marks = new TextTable("Mark", "Section", ">Cut length (mm)", ">Quantity", ">Needed", ">Surplus",
                 ">Mass (kg)");
         for (MarkLine m : s.markList()) {
             marks.row(m.mark(), m.section(), fixed(m.lengthMm(), 1), m.quantity(), m.required(), m.surplus(),
@@ -70,7 +70,8 @@ final class SummaryText {
                             + " to make")
                     .append(", joints ").append(fixed(s.jointsMassKg(), 1)).append(" kg)\n");
         }
-        sb.append("Spares (bars beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
+        // surplus bars of bars.csv, not the service-life spares of the line after it
+        sb.append("Surplus bars (beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
                 : s.spares().stream().map(c -> c.mark() + " " + c.count()).collect(Collectors.joining(", ")))
                 .append('\n');
         return sb.toString();
