@@ -10,8 +10,9 @@ import java.util.Map;
 /**
  * Reads {@code bars.csv}: {@code mark,section,length_mm,quantity} and optional
  * {@code node_to_node_mm,tolerance_mm,note,start_deduction_mm,end_deduction_mm} (the last two per end, over
- * kit.json's {@code endDeductionMm}, for a bar between joints of different sizes). Checks each row on its own (numbers, blanks, duplicate marks); the
- * checks against the tube catalog and structures.csv are made when the kit is assembled.
+ * kit.json's {@code endDeductionMm}, for a bar between joints of different sizes). Checks each row on its own
+ * (numbers, blanks, duplicate marks); the checks against the tube catalog and structures.csv are made when the kit
+ * is assembled.
  */
 public final class BarsReader {
     public static final CsvColumns COLUMNS = new CsvColumns(

@@ -15,9 +15,9 @@ import kitwright.model.TubeCatalog;
 /**
  * The checks across files that turn bars.csv rows into the kit's marks: each section is in the tube catalog; the
  * cut length is derived from or agrees with the node-to-node length minus the deduction at each end
- * (start_deduction_mm and end_deduction_mm, each over kit.json's endDeductionMm); each bar fits the longest stock length of its
- * section; structures.csv names only known marks; and each quantity covers what the structures need (the largest
- * count any one structure uses, or the sum when the structures stand together).
+ * (start_deduction_mm and end_deduction_mm, each over kit.json's endDeductionMm); each bar fits the longest stock
+ * length of its section; structures.csv names only known marks; and each quantity covers what the structures need
+ * (the largest count any one structure uses, or the sum when the structures stand together).
  */
 final class KitAssembler {
     /** Node-to-node and cut length agree within this, in millimetres. */

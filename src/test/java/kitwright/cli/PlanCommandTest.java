@@ -53,7 +53,8 @@ class PlanCommandTest {
                 .contains("\n  \"spares\": [],\n  \"sparesToMake\": 0\n}").endsWith("}\n").doesNotContain("\r");
         List<String> keys = KitFiles.listOf(PrettyJson.mapper().readTree(text).fieldNames());
         assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
-                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares", "sparesToMake");
+                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares",
+                "sparesToMake");
     }
 
     @Test
