@@ -43,6 +43,29 @@ class CompareCommandTest {
     }
 
     @Test
+    @org.junit.jupiter.api.DisplayName("with the real planner, compare.json is the comparison of plans that pass the"
+            + " shared validator")
+    void realPlansAreValid() throws Exception {
+        Path six = kitwright.io.KitFiles.kit(tmp.resolve("kits").resolve("two-marks"),
+                "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1900,6\nE,CHS 33.7x2.6,1500,5\n");
+        Path one = kitwright.io.KitFiles.kit(tmp.resolve("kits").resolve("one-mark"),
+                "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1750,11\n");
+        CommandLine cl = KitwrightCommand.commandLine();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        Path written = tmp.resolve("written");
+        assertThat(cl.execute("compare", six.toString(), one.toString(), "--out", written.toString()))
+                .as(err.toString()).isEqualTo(ExitCode.OK.code());
+        java.util.List<OptionSummary> valid = java.util.List.of(
+                kitwright.compare.OptionSummaries.of(WrittenPlans.validated(six)),
+                kitwright.compare.OptionSummaries.of(WrittenPlans.validated(one)));
+        Path again = tmp.resolve("again");
+        kitwright.compare.CompareFiles.write(again, valid);
+        assertThat(Files.readString(written.resolve(kitwright.compare.CompareFiles.JSON)))
+                .isEqualTo(Files.readString(again.resolve(kitwright.compare.CompareFiles.JSON)));
+    }
+
+    @Test
     void writesTheThreeFilesAndExitsZero() throws Exception {
         Path dir = tmp.resolve("out");
         int code = run("compare", "kits/cinema-6", "kits/cinema-12", "--out", dir.toString(), "--threads", "2");
