@@ -31,7 +31,7 @@ class CompareCommandTest {
         }
         Status status = name.startsWith("none") ? Status.INFEASIBLE : Status.OPTIMAL;
         return new OptionSummary(name, 6, 300, 750, 2.5, 80, 480000.0, 5000.0, 4.0, 1.5, 2.5, 1500.0, 1700.0,
-                2635.0, 30, 4, 2, 1800.0, status);
+                1750.0, 2635.0, 30, 4, 2, 1800.0, status);
     };
 
     private int run(String... args) {
