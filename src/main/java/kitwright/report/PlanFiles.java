@@ -66,7 +66,7 @@ public final class PlanFiles {
         builder.section(NestingSection.of(result.nesting(), result.kit()));
         if (result.logisticsPlanned()) {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
-                    result.kit().crates(), SectionTints.byMark(result.kit())));
+                    result.kit().crates(), MarkPalette.of(result.kit()).fills()));
             LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
         } else {
             builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"

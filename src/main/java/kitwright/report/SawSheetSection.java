@@ -87,14 +87,14 @@ final class SawSheetSection {
     }
 
     /**
-     * Colours for one section: its marks in kit order, then any other mark its plan cuts. A mark belongs to one
-     * section, so colouring per section keeps the first, most distinct colours for the marks seen together.
+     * Colours for one section: the kit's palette ({@link MarkPalette#of(Kit)}, the colours of the bundle and crate
+     * drawings too), extended by any mark the plan cuts that the kit does not list. The legend lists the marks of
+     * this section only.
      */
     static MarkPalette palette(Kit kit, SectionCutPlan plan) {
-        List<String> marks = new ArrayList<>();
-        kit.bars().stream().filter(b -> b.section().equals(plan.section())).forEach(b -> marks.add(b.mark()));
-        plan.patterns().forEach(p -> p.cuts().forEach(c -> marks.add(c.mark())));
-        return MarkPalette.of(marks);
+        List<String> cut = new ArrayList<>();
+        plan.patterns().forEach(p -> p.cuts().forEach(c -> cut.add(c.mark())));
+        return MarkPalette.of(kit).with(cut);
     }
 
     /** Patterns with the same stock, origin, cuts and offcut, merged in first-seen order with counts added. */
@@ -203,6 +203,9 @@ final class SawSheetSection {
         List<LegendItem> items = new ArrayList<>();
         for (String mark : palette.marks()) {
             Bar bar = kit.bar(mark).orElse(null);
+            if (bar != null ? !bar.section().equals(plan.section()) : !cut.containsKey(mark)) {
+                continue; // the palette is the kit's; the legend is this section's
+            }
             double length = bar != null ? bar.lengthMm() : lengths.getOrDefault(mark, 0.0);
             items.add(new LegendItem(mark, Swatches.mark(palette.fill(mark)), ShopFormat.sawMm(length),
                     tolerance(kit, mark), bar == null ? ShopFormat.UNKNOWN : ShopFormat.count(bar.quantity()),
