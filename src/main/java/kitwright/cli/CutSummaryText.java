@@ -23,7 +23,7 @@ final class CutSummaryText {
         int bars = kit.bars().stream().mapToInt(b -> b.quantity()).sum();
         sb.append("Kit ").append(kit.name()).append(": ").append(kit.bars().size()).append(" marks, ").append(bars)
                 .append(" bars in ").append(plan.sections().size()).append(" sections (kerf ")
-                .append(fixed(kit.settings().kerfMm(), 1)).append(" mm, trim ").append(fixed(kit.settings().trimMm(), 1))
+                .append(saw(kit.settings().kerfMm())).append(" mm, trim ").append(saw(kit.settings().trimMm()))
                 .append(" mm per end, remnants from ").append(fixed(kit.settings().minRemnantMm(), 0)).append(" mm)\n\n");
         boolean masses = !kit.materials().isEmpty();
         TextTable table = masses
@@ -110,6 +110,11 @@ final class CutSummaryText {
         }
         return count.entrySet().stream().map(e -> e.getValue() + " x " + fixed(e.getKey(), 0))
                 .collect(Collectors.joining(", ")) + " mm";
+    }
+
+    /** A kerf or trim as written, at least one decimal: 3.0, 1.04 (a hundredth of kerf decides a fit). */
+    private static String saw(double mm) {
+        return fixed(mm, Math.max(1, java.math.BigDecimal.valueOf(mm).stripTrailingZeros().scale()));
     }
 
     private static String fixed(double value, int decimals) {

@@ -37,6 +37,7 @@ import picocli.CommandLine.Spec;
             "  rack-pull.csv      rack offcuts to take before cutting new stock",
             "  cut-list.csv       the saw sheet: every stock piece, every cut, start positions, offcuts",
             "  rack-after.csv     the rack for the next job, in the tube catalog's format",
+            "  labels.html        A4 label sheets: a QR-coded label per cut piece, a tag per remnant",
             "  nests.csv          which tube goes inside which; assembly-order.csv, innermost first",
             "  packing-lists.csv  per crate: marks and counts, bundles, boxes, gross mass",
             "  manifests.csv      per vehicle: crates, mass, floor length, centre of gravity",

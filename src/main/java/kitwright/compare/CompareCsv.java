@@ -17,8 +17,8 @@ import org.apache.commons.csv.CSVPrinter;
 public final class CompareCsv {
     /** The header: the compare.json keys in their order. */
     public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
-            "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
-            "bundles", "crates", "vehicles", "tripCost", "status");
+            "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg",
+            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
 
     private CompareCsv() {
     }
@@ -37,7 +37,7 @@ public final class CompareCsv {
         cells.add(o.kit());
         cells.add(Integer.toString(o.marks()));
         cells.add(Integer.toString(o.bars()));
-        cells.add(Integer.toString(o.members()));
+        cells.add(o.members() == null ? "" : o.members().toString());
         cells.add(number(o.reuseRatio()));
         cells.add(Integer.toString(o.stockPieces()));
         cells.add(number(o.stockLengthMm()));
@@ -48,6 +48,7 @@ public final class CompareCsv {
         cells.add(number(o.remnantPct()));
         cells.add(number(o.kitMassKg()));
         cells.add(number(o.boughtMassKg()));
+        cells.add(number(o.usedStockMassKg()));
         cells.add(number(o.co2eKg()));
         cells.add(o.bundles() == null ? "" : o.bundles().toString());
         cells.add(o.crates() == null ? "" : o.crates().toString());

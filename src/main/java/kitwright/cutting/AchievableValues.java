@@ -40,6 +40,20 @@ final class AchievableValues {
         return (long) Math.ceil(cost - 1e-7 * Math.max(1, cost));
     }
 
+    /**
+     * A lower bound that holds for the true lengths: {@code bound} itself when the instance holds every length
+     * exactly; otherwise the achievable material bound of the lengths rounded the other way
+     * ({@link IntegerInstance#relaxed()}: sizes down, capacities up), since a bound proven on sizes rounded up
+     * may lie above the true optimum.
+     */
+    static long trueLengthBound(IntegerInstance instance, long bound, long known) {
+        if (instance.lengthScale.exact()) {
+            return bound;
+        }
+        IntegerInstance relaxed = instance.relaxed();
+        return Math.min(bound, nextAchievable(relaxed, materialBound(relaxed, relaxed.demands()), known));
+    }
+
     private static double perUnit(IntegerInstance instance, int k) {
         return instance.capacity[k] <= 0 ? Double.MAX_VALUE : instance.cost[k] / (double) instance.capacity[k];
     }

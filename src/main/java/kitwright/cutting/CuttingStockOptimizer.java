@@ -31,7 +31,10 @@ import kitwright.model.Status;
  *
  * <p>Guarantee: the status is OPTIMAL only when proven: when no achievable cost lies between the lower bound and
  * the plan's cost ({@link AchievableValues}; for one stock length and price, value = ceil(LP bound)), or when a
- * complete model proves it. The reported lower bound is the best proven one; gap = (value - lowerBound) / value,
+ * complete model proves it. When the section's lengths had to be rounded ({@link LengthScale}), the bounds above
+ * hold for the rounded sizes only, and the bound claimed is the one of sizes rounded the other way
+ * ({@link AchievableValues#trueLengthBound}). The reported lower bound is the best proven one;
+ * gap = (value - lowerBound) / value,
  * so OPTIMAL has gap 0. Deterministic for given limits: one CP-SAT worker, deterministic work limits; the
  * wall-clock limit is only a safety net, and when it strikes the best plan so far is returned with its gap.
  *
@@ -204,6 +207,7 @@ public final class CuttingStockOptimizer implements SectionSolver {
             Packing plan = RemnantConsolidation.consolidate(instance, incumbent);
             long cost = plan.cost(instance);
             long lower = provenByModel ? cost : AchievableValues.nextAchievable(instance, bound, cost);
+            lower = Math.min(lower, AchievableValues.trueLengthBound(instance, lower, cost));
             Status status = cost <= lower ? Status.OPTIMAL : Status.FEASIBLE;
             SectionCutPlan assembled = PlanAssembler.plan(instance, plan, status, Math.min(lower, cost));
             // a step the deadline cut short makes the plan depend on the machine's speed: say so

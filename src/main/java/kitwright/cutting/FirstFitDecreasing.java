@@ -32,7 +32,8 @@ public final class FirstFitDecreasing implements SectionSolver {
         }
         long bound = AchievableValues.materialBound(instance, instance.demands());
         long cost = result.packing().cost(instance);
-        long rounded = AchievableValues.nextAchievable(instance, bound, cost);
+        long rounded = AchievableValues.trueLengthBound(instance,
+                AchievableValues.nextAchievable(instance, bound, cost), cost);
         Status status = cost <= rounded ? Status.OPTIMAL : Status.FEASIBLE;
         return PlanAssembler.plan(instance, result.packing(), status, Math.min(rounded, cost));
     }

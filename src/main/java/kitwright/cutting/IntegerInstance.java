@@ -1,5 +1,6 @@
 package kitwright.cutting;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -9,23 +10,35 @@ import java.util.TreeMap;
 /**
  * A section problem in the integers the solvers work with.
  *
- * <p>Lengths become whole tenths of a millimetre, rounded against the plan (piece sizes up, capacities down), then
- * divided by the greatest common divisor {@code unit} of all piece sizes, which changes no fit decision:
+ * <p>Lengths become whole units of 10^-d mm, d the finest decimal the section's data uses ({@link LengthScale}),
+ * so every fit is decided exactly; then sizes are divided by their greatest common divisor {@code unit}, which
+ * changes no fit decision (whole-millimetre data keeps the sizes it always had):
  * <pre>
- *   size_i     = ceil(10 * (length_i + kerf)) / unit                 (a piece takes its length plus one kerf)
- *   capacity_k = floor(floor(10 * (L_k - 2*trim + kerf)) / unit)     (the last piece needs no kerf after it)
+ *   size_i     = (up(length_i) + up(kerf)) / unit                         (a piece takes its length plus one kerf)
+ *   capacity_k = floor((down(L_k) - up(2*trim) + down(kerf)) / unit)      (the last piece needs no kerf after it)
  *   pattern a fits stock k  &lt;=&gt;  sum_i a_i * size_i &lt;= capacity_k
  * </pre>
+ * up and down are exact when the data has no finer decimal than d. Otherwise (more than three decimals, or a
+ * capacity above {@link #MAX_UNITS} units) they round the safe way, so a plan never claims a fit the saw model
+ * rejects; {@link #relaxed()} then rounds the other way round, for bounds that hold for the true lengths.
  * Marks of equal size become one item type; types are sorted by decreasing size. Costs are integers: prices in
  * the smallest power-of-ten fraction that makes every price whole (cost objective), or stock lengths in tenths of a
- * millimetre (length objective).
+ * millimetre or finer (length objective).
  */
 final class IntegerInstance {
     final SectionProblem problem;
     final boolean costObjective;
     /** Objective value = cost / scale. */
     final long scale;
-    /** Tenths of a millimetre per size unit. */
+    /**
+     * Largest capacity in size units: the knapsack tables and arc-flow nodes stay within what 1 km of stock in
+     * tenths of a millimetre always took.
+     */
+    static final long MAX_UNITS = 10_000_000;
+
+    /** The length unit before the gcd division, and whether it holds every length exactly. */
+    final LengthScale lengthScale;
+    /** Length units (10^-decimals mm) per size unit. */
     final int unit;
     /** Item types by decreasing size. */
     final int[] size;
@@ -40,20 +53,27 @@ final class IntegerInstance {
     final int maxCapacity;
 
     IntegerInstance(SectionProblem problem) {
+        this(problem, scaleFor(problem), false);
+    }
+
+    /**
+     * @param optimistic round the other way: sizes down, capacities up, so every true fit stays a fit (for bounds)
+     */
+    private IntegerInstance(SectionProblem problem, LengthScale lengthScale, boolean optimistic) {
         this.problem = problem;
+        this.lengthScale = lengthScale;
         this.costObjective = problem.objective().equals("cost");
-        long kerfTenths = Math.round(problem.kerfMm() * 10);
+        long[] sizes = sizes(problem, lengthScale, optimistic);
         Map<Long, List<Integer>> bySize = new TreeMap<>((a, b) -> Long.compare(b, a));
         List<Demand> demands = problem.demands();
         for (int d = 0; d < demands.size(); d++) {
-            long tenths = (long) Math.ceil(demands.get(d).lengthMm() * 10 - 1e-6) + kerfTenths;
-            bySize.computeIfAbsent(tenths, k -> new ArrayList<>()).add(d);
+            bySize.computeIfAbsent(sizes[d], k -> new ArrayList<>()).add(d);
         }
         long g = 0;
         for (long s : bySize.keySet()) {
             g = gcd(g, s);
         }
-        this.unit = (int) Math.max(1, g);
+        this.unit = Math.toIntExact(Math.max(1, g));
         int types = bySize.size();
         size = new int[types];
         demand = new int[types];
@@ -71,19 +91,73 @@ final class IntegerInstance {
         capacity = new int[stock.size()];
         cost = new long[stock.size()];
         limit = new int[stock.size()];
-        this.scale = costObjective ? priceScale(stock) : 10;
+        this.scale = costObjective ? priceScale(stock) : lengthCostScale(stock);
         int max = 0;
         for (int k = 0; k < stock.size(); k++) {
             StockOption s = stock.get(k);
-            long capTenths = (long) Math.floor((s.lengthMm() - 2 * problem.trimMm()) * 10 + 1e-6) + kerfTenths;
-            capacity[k] = (int) Math.max(0, Math.floorDiv(capTenths, unit));
+            capacity[k] = Math.toIntExact(Math.max(0, Math.floorDiv(capacity(problem, s, lengthScale, optimistic),
+                    unit)));
             max = Math.max(max, capacity[k]);
             cost[k] = costObjective
                     ? Math.round((s.price() == null ? 0 : s.price()) * scale)
-                    : Math.round(s.lengthMm() * 10);
+                    : SawArithmetic.exact(s.lengthMm()).multiply(BigDecimal.valueOf(scale))
+                            .setScale(0, java.math.RoundingMode.HALF_UP).longValueExact();
             limit[k] = s.available() == null ? -1 : s.available();
         }
         maxCapacity = max;
+    }
+
+    /**
+     * The same section with lengths rounded the other way (sizes down, capacities up): every pattern that fits the
+     * true lengths fits it, so its lower bounds are lower bounds of the true problem. This instance itself when its
+     * lengths are exact.
+     */
+    IntegerInstance relaxed() {
+        return lengthScale.exact() ? this : new IntegerInstance(problem, lengthScale, true);
+    }
+
+    /** The finest exact scale whose longest capacity stays within {@link #MAX_UNITS} size units. */
+    private static LengthScale scaleFor(SectionProblem problem) {
+        LengthScale scale = LengthScale.of(problem);
+        while (scale.decimals() > 0 && largestCapacity(problem, scale) > MAX_UNITS) {
+            scale = scale.coarser();
+        }
+        return scale;
+    }
+
+    /** The longest capacity in size units (after the gcd division) at a scale. */
+    private static long largestCapacity(SectionProblem problem, LengthScale scale) {
+        long g = 0;
+        for (long s : sizes(problem, scale, false)) {
+            g = gcd(g, s);
+        }
+        long max = 0;
+        for (StockOption s : problem.stock()) {
+            max = Math.max(max, capacity(problem, s, scale, false) / Math.max(1, g));
+        }
+        return max;
+    }
+
+    /** length + kerf of each mark in length units, rounded up (down when optimistic). */
+    private static long[] sizes(SectionProblem problem, LengthScale scale, boolean optimistic) {
+        BigDecimal kerf = SawArithmetic.exact(problem.kerfMm());
+        List<Demand> demands = problem.demands();
+        long[] sizes = new long[demands.size()];
+        for (int d = 0; d < sizes.length; d++) {
+            BigDecimal length = SawArithmetic.exact(demands.get(d).lengthMm());
+            sizes[d] = optimistic ? scale.down(length) + scale.down(kerf) : scale.up(length) + scale.up(kerf);
+        }
+        return sizes;
+    }
+
+    /** L - 2*trim + kerf in length units, rounded down (up when optimistic). */
+    private static long capacity(SectionProblem problem, StockOption s, LengthScale scale, boolean optimistic) {
+        BigDecimal length = SawArithmetic.exact(s.lengthMm());
+        BigDecimal trims = SawArithmetic.exact(problem.trimMm()).multiply(BigDecimal.valueOf(2));
+        BigDecimal kerf = SawArithmetic.exact(problem.kerfMm());
+        return optimistic
+                ? scale.up(length) - scale.down(trims) + scale.up(kerf)
+                : scale.down(length) - scale.up(trims) + scale.down(kerf);
     }
 
     int types() {
@@ -143,6 +217,15 @@ final class IntegerInstance {
     public String toString() {
         return "sizes " + Arrays.toString(size) + " demand " + Arrays.toString(demand) + " capacity "
                 + Arrays.toString(capacity) + " cost " + Arrays.toString(cost) + " limit " + Arrays.toString(limit);
+    }
+
+    /** Tenths of a millimetre, or the finest decimal of the stock lengths (to a micrometre and beyond, up to 6). */
+    private static long lengthCostScale(List<StockOption> stock) {
+        int decimals = 1;
+        for (StockOption s : stock) {
+            decimals = Math.max(decimals, Math.min(6, LengthScale.decimalsOf(s.lengthMm())));
+        }
+        return BigDecimal.ONE.movePointRight(decimals).longValueExact();
     }
 
     private static long priceScale(List<StockOption> stock) {

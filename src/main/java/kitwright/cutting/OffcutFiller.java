@@ -1,5 +1,6 @@
 package kitwright.cutting;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashMap;
@@ -14,8 +15,8 @@ import java.util.TreeSet;
  * <p>Method: the candidate marks take turns in the order given (most-used first is the caller's usual order), one
  * bar per turn, until no offcut holds a bar of any mark with turns left; each bar goes into the stock piece with
  * the shortest offcut that still holds it (best fit), so long remnants are cut into last. A bar fits when the
- * stock piece's pieces still satisfy sum(length + kerf) &lt;= L - 2*trim + kerf, with lengths in whole tenths of
- * a millimetre rounded against the fit. The spare bars are cut after the planned ones. Status, value and bound of
+ * stock piece's pieces still satisfy sum(length + kerf) &lt;= L - 2*trim + kerf, in exact decimals
+ * ({@link SawArithmetic}). The spare bars are cut after the planned ones. Status, value and bound of
  * the plan do not change, since no stock is added. O(S log P) for S spares and P stock pieces.
  */
 public final class OffcutFiller {
@@ -40,19 +41,16 @@ public final class OffcutFiller {
         if (plan.patterns().isEmpty() || candidates.isEmpty()) {
             return plan;
         }
-        long kerf = Math.round(plan.kerfMm() * 10);
         List<Piece> pieces = new ArrayList<>();
         for (CutPattern p : plan.patterns()) {
-            long capacity = (long) Math.floor((p.stockLengthMm() - 2 * plan.trimMm()) * 10 + 1e-6) + kerf;
+            BigDecimal free = SawArithmetic.capacity(plan.kerfMm(), plan.trimMm(), p.stockLengthMm())
+                    .subtract(SawArithmetic.consumed(plan.kerfMm(), p.cuts()));
             for (int n = 0; n < p.count(); n++) {
-                Piece piece = new Piece(pieces.size(), p, new ArrayList<>(p.cuts()), capacity);
-                for (Cut c : p.cuts()) {
-                    piece.free -= size(c.lengthMm(), kerf);
-                }
+                Piece piece = new Piece(pieces.size(), p, new ArrayList<>(p.cuts()), free);
                 pieces.add(piece);
             }
         }
-        TreeSet<Piece> byFree = new TreeSet<>(Comparator.<Piece>comparingLong(q -> q.free)
+        TreeSet<Piece> byFree = new TreeSet<>(Comparator.<Piece, BigDecimal>comparing(q -> q.free)
                 .thenComparingInt(q -> q.index));
         byFree.addAll(pieces);
         int[] left = candidates.stream().mapToInt(Candidate::maxCount).toArray();
@@ -65,9 +63,8 @@ public final class OffcutFiller {
                 if (left[c] == 0) {
                     continue;
                 }
-                long size = size(candidate.lengthMm(), kerf);
-                Piece probe = new Piece(-1, null, null, 0);
-                probe.free = size;
+                BigDecimal size = SawArithmetic.exact(candidate.lengthMm()).add(SawArithmetic.exact(plan.kerfMm()));
+                Piece probe = new Piece(-1, null, null, size);
                 Piece target = byFree.ceiling(probe);
                 if (target == null) {
                     left[c] = 0; // no offcut holds this mark any more
@@ -75,7 +72,7 @@ public final class OffcutFiller {
                 }
                 byFree.remove(target);
                 target.cuts.add(new Cut(candidate.mark(), candidate.lengthMm()));
-                target.free -= size;
+                target.free = target.free.subtract(size);
                 byFree.add(target);
                 left[c]--;
                 added.merge(candidate.mark(), 1, Integer::sum);
@@ -128,23 +125,19 @@ public final class OffcutFiller {
         return out;
     }
 
-    /** Tenths of a millimetre a bar takes: its length plus one kerf, rounded up. */
-    private static long size(double lengthMm, long kerfTenths) {
-        return (long) Math.ceil(lengthMm * 10 - 1e-6) + kerfTenths;
-    }
-
     /** One stock piece being filled. */
     private static final class Piece {
         final int index;
         final CutPattern source;
         final List<Cut> cuts;
-        long free;
+        /** L - 2*trim + kerf - sum(length + kerf) of its pieces, exact. */
+        BigDecimal free;
 
-        Piece(int index, CutPattern source, List<Cut> cuts, long capacity) {
+        Piece(int index, CutPattern source, List<Cut> cuts, BigDecimal free) {
             this.index = index;
             this.source = source;
             this.cuts = cuts;
-            this.free = capacity;
+            this.free = free;
         }
     }
 }

@@ -104,14 +104,9 @@ final class PlanAssembler {
                 offcutKind(offcut, problem.minRemnantMm()));
     }
 
-    /** L - 2*trim - sum(lengths) - n*kerf, floored at 0 and rounded to a micrometre. */
+    /** L - 2*trim - sum(lengths) - n*kerf, floored at 0, in exact decimals ({@link SawArithmetic#offcut}). */
     static double offcut(double kerfMm, double trimMm, double stockLengthMm, List<Cut> cuts) {
-        double used = 0;
-        for (Cut c : cuts) {
-            used += c.lengthMm() + kerfMm;
-        }
-        double offcut = stockLengthMm - 2 * trimMm - used;
-        return Math.max(0, Math.rint(offcut * 1000) / 1000);
+        return SawArithmetic.offcut(kerfMm, trimMm, stockLengthMm, cuts);
     }
 
     static String offcutKind(double offcutMm, double minRemnantMm) {

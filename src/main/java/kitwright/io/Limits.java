@@ -3,7 +3,8 @@ package kitwright.io;
 /**
  * Upper limits on the numbers kitwright reads, far beyond any real kit. They exist so that a typing slip (an extra
  * run of zeros, a value in micrometres) is reported as bad input instead of overflowing the stages' integer
- * arithmetic (lengths become whole tenths of a millimetre in {@code int}, prices are scaled into {@code long}) or
+ * arithmetic (lengths become whole units of the finest decimal a section uses, down to a micrometre, in
+ * {@code int}; prices are scaled into {@code long}) or
  * running for days. A value above its limit is reported with the limit in the message.
  */
 public final class Limits {

@@ -44,14 +44,14 @@ final class InputsSection {
             settings.add(new Setting("Kit folder", folderName(kit.dir())));
         }
         settings.add(new Setting("Tube catalog", file(kit.dir(), kit.catalog().file())));
-        settings.add(new Setting("Kerf", ShopFormat.mmUnit(s.kerfMm())));
-        settings.add(new Setting("End trim", ShopFormat.mmUnit(s.trimMm()) + " each end, including its own cut"));
+        settings.add(new Setting("Kerf", ShopFormat.sawMmUnit(s.kerfMm())));
+        settings.add(new Setting("End trim", ShopFormat.sawMmUnit(s.trimMm()) + " each end, including its own cut"));
         settings.add(new Setting("Minimum remnant", ShopFormat.mmUnit(s.minRemnantMm())
                 + " (shorter offcuts are scrap)"));
         settings.add(new Setting("Time limit", ShopFormat.seconds(s.timeLimitSeconds())
                 + "\u00A0s per section and stage (a safety net)"));
         List<SectionSetting> sections = plans.stream().map(p -> new SectionSetting(p.section(),
-                ShopFormat.mmUnit(p.kerfMm()), ShopFormat.mmUnit(p.trimMm()), ShopFormat.mmUnit(p.minRemnantMm()),
+                ShopFormat.sawMmUnit(p.kerfMm()), ShopFormat.sawMmUnit(p.trimMm()), ShopFormat.mmUnit(p.minRemnantMm()),
                 "length".equals(p.objective()) ? "least stock length (no prices)" : "least cost")).toList();
         List<MaterialRow> materials = kit.materials().values().stream()
                 .sorted(java.util.Comparator.comparing(Material::name))

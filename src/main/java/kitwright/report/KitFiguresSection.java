@@ -48,7 +48,8 @@ public final class KitFiguresSection {
     }
 
     record View(List<Figure> figures, boolean carbonKnown, List<CarbonRow> carbon, CarbonRow carbonTotal,
-                String members, String bars, String reuseRatio, boolean structures, Spares spares,
+                String members, String bars, String reuseRatio, boolean structures, boolean stockHoldsBars,
+                String usedStock, String barsMass, Spares spares,
                 String examplePolicy) {
     }
 
@@ -67,18 +68,26 @@ public final class KitFiguresSection {
         top.add(new Figure("Stock bought", ReportFormat.kg(figures.boughtMassKg()),
                 ShopFormat.count(figures.boughtPieces()) + " mill pieces, "
                         + ShopFormat.metres(figures.boughtLengthMm()) + "\u00A0m"));
+        top.add(new Figure("Stock used", ReportFormat.kg(figures.usedStockMassKg()),
+                ShopFormat.count(figures.stockPieces()) + " pieces: mill stock bought and rack offcuts taken"));
         top.add(new Figure("Kit mass with joints", ReportFormat.kg(figures.kitMassKg()),
-                "bars in the quantities of bars.csv, and joints"));
-        top.add(new Figure("Reuse ratio", ShopFormat.decimal(figures.reuseRatio(), 2, true),
-                ShopFormat.count(figures.members()) + " members / " + ShopFormat.count(figures.bars()) + " bars"));
+                "every bar, spares cut included, and the joints"));
+        top.add(figures.reuseRatio() == null ? new Figure("Reuse ratio", "none", "no structures.csv")
+                : new Figure("Reuse ratio", reuseRatio(figures), ShopFormat.count(figures.members())
+                        + " members / " + ShopFormat.count(figures.bars()) + " bars"));
         List<CarbonRow> carbon = figures.carbon().stream().map(c -> new CarbonRow(c.material(),
                 ShopFormat.kg(c.boughtMassKg()), ShopFormat.decimal(c.co2eKgPerKg(), 3, false),
                 ShopFormat.kg(c.co2eKg()), c.source())).toList();
         CarbonRow carbonTotal = figures.co2eKg() == null ? null : new CarbonRow("All materials",
                 ShopFormat.kg(figures.boughtMassKg()), "", ShopFormat.kg(figures.co2eKg()), "");
+        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
+        Double barsMass = figures.kitMassKg() == null ? null : figures.kitMassKg() - jointsMass;
+        boolean stockHoldsBars = barsMass != null && figures.usedStockMassKg() != null
+                && figures.usedStockMassKg() >= barsMass;
         View view = new View(List.copyOf(top), figures.co2eKg() != null && !carbon.isEmpty(), carbon, carbonTotal,
-                ShopFormat.count(figures.members()), ShopFormat.count(figures.bars()),
-                ShopFormat.decimal(figures.reuseRatio(), 2, true), !kit.structures().isEmpty(),
+                figures.members() == null ? "" : ShopFormat.count(figures.members()), ShopFormat.count(figures.bars()),
+                reuseRatio(figures), figures.reuseRatio() != null, stockHoldsBars,
+                ReportFormat.kg(figures.usedStockMassKg()), ReportFormat.kg(barsMass),
                 spares == null ? null : spares(kit, spares), EXAMPLE_POLICY);
         return new ReportSection(ID, TITLE, "kit-figures", view);
     }
@@ -116,6 +125,11 @@ public final class KitFiguresSection {
                 outcome.rounds() == 1 ? "once" : ShopFormat.count(outcome.rounds()) + " times",
                 outcome.missing() == 0 ? null
                 : ShopFormat.count(outcome.missing()));
+    }
+
+    /** The reuse ratio to two decimals, or "none" without structures.csv. */
+    private static String reuseRatio(KitMetrics figures) {
+        return figures.reuseRatio() == null ? "none" : ShopFormat.decimal(figures.reuseRatio(), 2, true);
     }
 
     /** A probability in percent to three decimals at most: 0.0956179 gives "9.562 %". */

@@ -67,7 +67,7 @@ public final class LogisticsSection {
     /**
      * The block with the lanes of the crate cross-sections tinted by their bundles' host marks.
      *
-     * @param fillByMark tint by mark (the report's {@link SectionTints}); lanes of other marks stay white
+     * @param fillByMark fill by mark (the report's {@link MarkPalette}); lanes of other marks stay white
      */
     public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
                                    List<CrateType> catalog, Map<String, String> fillByMark) {

@@ -10,6 +10,8 @@ import kitwright.report.cutting.CutListCsv;
 import kitwright.report.cutting.OrderCsv;
 import kitwright.report.cutting.RackAfterCsv;
 import kitwright.report.cutting.RackPullCsv;
+import kitwright.report.labels.LabelSet;
+import kitwright.report.labels.LabelsHtml;
 
 /**
  * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
@@ -34,6 +36,8 @@ public final class PlanFiles {
         files.put("cut-list.csv", CutListCsv.format(kit, result.cutting()));
         files.put("rack-after.csv", RackAfterCsv.format(kit, result.cutting()));
         files.putAll(NestingFiles.files(result.nesting().plan()));
+        files.put(LabelsHtml.FILE, LabelsHtml.render(kit.name(), date.toString(), LabelSet.of(kit,
+                result.cutting(), result.nesting().plan().bundles(), result.crates(), date.toString())));
         if (result.logisticsPlanned()) {
             files.put(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(result.crates(),
                     result.nesting().plan().bundles()));
@@ -64,7 +68,7 @@ public final class PlanFiles {
         builder.section(NestingSection.of(result.nesting(), result.kit()));
         if (result.logisticsPlanned()) {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
-                    result.kit().crates(), SectionTints.byMark(result.kit())));
+                    result.kit().crates(), MarkPalette.of(result.kit()).fills()));
             LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
         } else {
             builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"

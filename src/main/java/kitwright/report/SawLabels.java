@@ -73,7 +73,7 @@ record SawLabels(List<Inside> inside, List<Callout> callouts, int rows) {
             if (s.kind() == Kind.OFFCUT && textWidth(offcutText(pattern), FONT) + 10 > w) {
                 pending.add(new Pending(x + w / 2, x + w / 2, offcutText(pattern), false));
             } else if (s.kind() == Kind.PIECE) {
-                String length = ShopFormat.mm(s.lengthMm());
+                String length = ShopFormat.sawMm(s.lengthMm());
                 String text = s.mark() + " \u00B7 " + length;
                 List<Segment> run = run(segments, i);
                 if (fitsInside(w, s.mark(), length)) {
@@ -113,7 +113,7 @@ record SawLabels(List<Inside> inside, List<Callout> callouts, int rows) {
     }
 
     static String offcutText(CutPattern pattern) {
-        return pattern.offcutKind() + " " + ShopFormat.mmUnit(pattern.offcutMm());
+        return pattern.offcutKind() + " " + ShopFormat.sawMmUnit(pattern.offcutMm());
     }
 
     /** The piece at {@code from} and the equal pieces (same mark and length) right after it, kerfs between. */

@@ -1,9 +1,11 @@
 package kitwright.report;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
+import kitwright.cutting.SawArithmetic;
 
 /**
  * Where every piece, kerf, trim and offcut of a saw pattern lies along the stock piece, by the saw model of the
@@ -41,27 +43,31 @@ public record SawLayout(double stockLengthMm, List<Segment> segments) {
      */
     public static SawLayout of(CutPattern pattern, double kerfMm, double trimMm) {
         double length = pattern.stockLengthMm();
+        // positions in exact decimals, so that a kerf never drifts past the far trim line
+        BigDecimal farTrimLine = SawArithmetic.exact(length).subtract(SawArithmetic.exact(trimMm));
+        BigDecimal kerf = SawArithmetic.exact(kerfMm);
         List<Segment> segments = new ArrayList<>();
         segments.add(new Segment(Kind.TRIM, 0, trimMm, 0, null));
-        double position = trimMm;
+        BigDecimal position = SawArithmetic.exact(trimMm);
         List<Cut> cuts = pattern.cuts();
         boolean offcut = pattern.offcutMm() > 0;
         for (int i = 0; i < cuts.size(); i++) {
             Cut cut = cuts.get(i);
-            segments.add(new Segment(Kind.PIECE, position, cut.lengthMm(), i + 1, cut.mark()));
-            position += cut.lengthMm();
+            segments.add(new Segment(Kind.PIECE, position.doubleValue(), cut.lengthMm(), i + 1, cut.mark()));
+            position = position.add(SawArithmetic.exact(cut.lengthMm()));
             boolean last = i == cuts.size() - 1;
             if (!last || offcut) {
-                double kerf = Math.min(kerfMm, Math.max(0, length - trimMm - position));
-                segments.add(new Segment(Kind.KERF, position, kerf, 0, null));
-                position += kerfMm;
+                BigDecimal slot = kerf.min(farTrimLine.subtract(position).max(BigDecimal.ZERO));
+                segments.add(new Segment(Kind.KERF, position.doubleValue(), slot.doubleValue(), 0, null));
+                position = position.add(kerf);
             }
         }
         if (offcut) {
-            double start = Math.min(position, length - trimMm);
-            segments.add(new Segment(Kind.OFFCUT, start, Math.max(0, length - trimMm - start), 0, null));
+            BigDecimal start = position.min(farTrimLine);
+            segments.add(new Segment(Kind.OFFCUT, start.doubleValue(), farTrimLine.subtract(start).doubleValue(), 0,
+                    null));
         }
-        segments.add(new Segment(Kind.TRIM, length - trimMm, trimMm, 0, null));
+        segments.add(new Segment(Kind.TRIM, farTrimLine.doubleValue(), trimMm, 0, null));
         return new SawLayout(length, segments);
     }
 

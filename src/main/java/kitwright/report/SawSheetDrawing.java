@@ -104,7 +104,7 @@ public final class SawSheetDrawing {
                     "class", "kerf", "fill", INK);
             case PIECE -> {
                 svg.open("g", "class", "piece", "data-mark", s.mark());
-                svg.element("title", s.mark() + " \u00B7 " + ShopFormat.mmUnit(s.lengthMm()) + " \u00B7 cut "
+                svg.element("title", s.mark() + " \u00B7 " + ShopFormat.sawMmUnit(s.lengthMm()) + " \u00B7 cut "
                         + s.sequence());
                 svg.rect(x, barTop, w, BAR_HEIGHT, "fill", palette.fill(s.mark()), "stroke", INK,
                         "stroke-width", 0.8);
@@ -206,7 +206,7 @@ public final class SawSheetDrawing {
                 break;
             }
         }
-        String endLabel = ShopFormat.mmUnit(lengthMm);
+        String endLabel = ShopFormat.sawMmUnit(lengthMm);
         double endLabelWidth = SawLabels.textWidth(endLabel, 10.5);
         for (double mm = 0; mm < lengthMm - 1e-6; mm += step) {
             double x = LEFT + mm * scale;

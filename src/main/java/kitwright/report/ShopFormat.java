@@ -25,6 +25,19 @@ public final class ShopFormat {
         return decimal(millimetres, 1, false);
     }
 
+    /**
+     * A length on the saw sheet, to 0.01 mm as the plan holds it: 599.06 gives "599.06", 1234.0 gives "1 234" (a
+     * hundredth of kerf decides a fit, so the sheet shows it).
+     */
+    public static String sawMm(double millimetres) {
+        return decimal(millimetres, 2, false);
+    }
+
+    /** A saw-sheet length with its unit: "599.06 mm". */
+    public static String sawMmUnit(double millimetres) {
+        return sawMm(millimetres) + "\u00A0mm";
+    }
+
     /** A length with its unit: "1 234 mm". */
     public static String mmUnit(double millimetres) {
         return mm(millimetres) + "\u00A0mm";

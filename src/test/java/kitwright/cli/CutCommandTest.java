@@ -67,6 +67,30 @@ class CutCommandTest {
         assertThat(err.toString()).contains("lower bound");
     }
 
+    /**
+     * Hundredths that once overran the stock: kerf 1.04 mm, no trim, ten 599.1 mm bars on 6000 mm stock. Ten take
+     * 10 x 599.1 + 9 x 1.04 = 6000.36 mm, so one stock piece holds nine; the plan used to claim one piece (OPTIMAL)
+     * with the tenth piece ending at 6000.36 mm.
+     */
+    @Test
+    void hundredthsOfKerfNeverOverrunTheStockAndThePrintedKerfIsTheOneGiven() throws Exception {
+        Path kit = Files.createDirectories(temp.resolve("hundredths"));
+        Files.writeString(kit.resolve("kit.json"),
+                "{\"stockCatalog\": \"catalog.csv\", \"kerfMm\": 1.04, \"trimMm\": 0, \"minRemnantMm\": 400}\n");
+        Files.writeString(kit.resolve("bars.csv"), "mark,section,length_mm,quantity\nA1,AL 30x2,599.1,10\n");
+        Files.writeString(kit.resolve("catalog.csv"), """
+                section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin
+                AL 30x2,aluminium,30,2,6000,19.38,,mill
+                """);
+        Path target = temp.resolve("hundredths-out");
+        assertThat(run("cut", kit.toString(), "--out", target.toString())).as(err.toString()).isZero();
+        CutPlan plan = PrettyJson.mapper().readValue(Files.readString(target.resolve("cutting.json")), CutPlan.class);
+        CutPlanValidator.validate(KitReader.read(kit), plan);
+        CutPlanValidator.validateCutList(plan, Files.readString(target.resolve("cut-list.csv")));
+        assertThat(plan.sections().get(0).stockPieces()).isEqualTo(2);
+        assertThat(out.toString()).contains("(kerf 1.04 mm, trim 0.0 mm per end");
+    }
+
     @Test
     void aSectionWithTooFewRackOffcutsExitsThreeAndTheOthersAreStillWritten() throws Exception {
         Path json = temp.resolve("cutting.json");

@@ -25,7 +25,7 @@ class PlanCommandTest {
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
                 "report.html", "plan.json", "order.csv", "rack-pull.csv", "cut-list.csv", "rack-after.csv",
-                "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
+                "labels.html", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);
         assertThat(run.out()).startsWith("Kit cinema-6: ").contains("\nCrates: ", "\nTrips: ");
@@ -50,10 +50,11 @@ class PlanCommandTest {
         String text = Files.readString(first.resolve("summary.json"));
         assertThat(Files.readString(second.resolve("summary.json"))).isEqualTo(text);
         assertThat(text).startsWith("{\n  \"kit\": \"kit\",\n  \"description\": \"\",\n  \"marks\": 1,\n")
-                .contains("\n  \"spares\": []\n}").endsWith("}\n").doesNotContain("\r");
+                .contains("\n  \"spares\": [],\n  \"sparesToMake\": 0\n}").endsWith("}\n").doesNotContain("\r");
         List<String> keys = KitFiles.listOf(PrettyJson.mapper().readTree(text).fieldNames());
         assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
-                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares");
+                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares",
+                "sparesToMake");
     }
 
     @Test

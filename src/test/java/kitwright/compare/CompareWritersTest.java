@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 class CompareWritersTest {
     private static final List<String> KEYS = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
             "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg",
-            "boughtMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
+            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
 
     @Test
     void jsonHasExactlyTheIssueKeysInOrder() throws Exception {
@@ -66,8 +66,8 @@ class CompareWritersTest {
     @Test
     void wasteBarReadsTheOffcutOfTheTable() throws Exception {
         // scrap 1.88 + remnant 3.84 (each rounded) = 5.72, where the offcut itself rounds to 5.71
-        OptionSummary option = new OptionSummary("k", 6, 300, 750, 2.0, 80, 480_000.0, 5000.0, 4950.0, 5.71, 1.88, 3.84,
-                1500.0, 1700.0, 2635.0, 30, 2, 1, 900.0, kitwright.model.Status.OPTIMAL);
+        OptionSummary option = new OptionSummary("k", 6, 300, 750, 2.0, 80, 480_000.0, 5000.0, 4950.0, 5.71, 1.88,
+                3.84, 1500.0, 1700.0, 1750.0, 2635.0, 30, 2, 1, 900.0, kitwright.model.Status.OPTIMAL);
         String html = CompareHtml.render(List.of(option));
         assertThat(html).contains("5.71 %").doesNotContain("5.72");
     }

@@ -25,12 +25,12 @@ class ExactReferenceTest {
             SectionProblem problem = TestSections.random(seed, 8);
             SectionCutPlan plan = new CuttingStockOptimizer().solve(problem, CutProgress.NONE);
             CutPlanValidator.validate(problem, plan);
-            Long reference = chocoOptimum(problem);
+            Double reference = chocoOptimum(problem);
             if (reference == null) {
                 assertThat(plan.status()).as("seed %d: Choco finds no plan", seed).isEqualTo(Status.INFEASIBLE);
             } else {
                 // Choco solver optimum (reference exact solve)
-                assertThat(plan.value()).as("seed %d: value vs Choco", seed).isEqualTo(reference.doubleValue());
+                assertThat(plan.value()).as("seed %d: value vs Choco", seed).isEqualTo(reference);
                 assertThat(plan.status()).as("seed %d: proven", seed).isEqualTo(Status.OPTIMAL);
             }
             compared++;
@@ -39,10 +39,12 @@ class ExactReferenceTest {
 
     /**
      * Pieces j go to bins b (bin_j &lt;= j breaks the symmetry of bin names, bars of one mark fill bins in
-     * order); each bin b takes a stock type or none (an empty bin takes none); load_b &lt;= capacity(type_b); at most available_k bins of a limited type; minimise the sum of the
-     * bins' prices (or stock lengths). Lengths are whole millimetres in these tests, so tenths are exact.
+     * order); each bin b takes a stock type or none (an empty bin takes none); load_b &lt;= capacity(type_b);
+     * at most available_k bins of a limited type; minimise the sum of the bins' prices (or stock lengths).
+     * Lengths, kerf, trim and prices are read as exact hundredths (the test data has no finer decimal; a finer one
+     * throws), independent of the optimiser's own scaling.
      */
-    static Long chocoOptimum(SectionProblem problem) {
+    static Double chocoOptimum(SectionProblem problem) {
         boolean cost = problem.objective().equals("cost");
         List<Integer> sizes = new ArrayList<>();
         List<Boolean> sameAsPrevious = new ArrayList<>();
@@ -50,7 +52,7 @@ class ExactReferenceTest {
         longestFirst.sort((a, b) -> Double.compare(b.lengthMm(), a.lengthMm()));
         for (Demand d : longestFirst) {
             for (int n = 0; n < d.quantity(); n++) {
-                sizes.add((int) Math.round((d.lengthMm() + problem.kerfMm()) * 10));
+                sizes.add(hundredths(d.lengthMm()) + hundredths(problem.kerfMm()));
                 sameAsPrevious.add(n > 0);
             }
         }
@@ -60,8 +62,8 @@ class ExactReferenceTest {
         int[] price = new int[types + 1];
         for (int k = 0; k < types; k++) {
             StockOption s = stock.get(k);
-            capacity[k] = (int) Math.round((s.lengthMm() - 2 * problem.trimMm() + problem.kerfMm()) * 10);
-            price[k] = (int) Math.round(cost ? (s.price() == null ? 0 : s.price()) : s.lengthMm());
+            capacity[k] = hundredths(s.lengthMm()) - 2 * hundredths(problem.trimMm()) + hundredths(problem.kerfMm());
+            price[k] = hundredths(cost ? (s.price() == null ? 0 : s.price()) : s.lengthMm());
         }
         int n = sizes.size();
         Model model = new Model("cutting");
@@ -96,6 +98,11 @@ class ExactReferenceTest {
         model.sum(binCost, "=", total).post();
         Solver solver = model.getSolver();
         Solution best = solver.findOptimalSolution(total, Model.MINIMIZE);
-        return best == null ? null : (long) best.getIntVal(total);
+        return best == null ? null : best.getIntVal(total) / 100.0;
+    }
+
+    /** A figure in exact hundredths of its unit, from its shortest decimal form. */
+    static int hundredths(double value) {
+        return java.math.BigDecimal.valueOf(value).movePointRight(2).intValueExact();
     }
 }

@@ -71,7 +71,8 @@ class SolverBehaviourTest {
         Packing gathered = RemnantConsolidation.consolidate(instance, spread);
         assertThat(gathered.cost(instance)).isEqualTo(spread.cost(instance));
         assertThat(gathered.pieces()).extracting(p -> (instance.capacity[0] - instance.load(p.counts()))
-                * instance.unit / 10.0).containsExactlyInAnyOrder(0.0, 400.0); // free millimetres
+                * instance.unit / Math.pow(10, instance.lengthScale.decimals())) // free millimetres
+                .containsExactlyInAnyOrder(0.0, 400.0);
     }
 
     @Test

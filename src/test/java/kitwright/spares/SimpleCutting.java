@@ -8,6 +8,7 @@ import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.SawArithmetic;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -17,7 +18,8 @@ import kitwright.model.StockLength;
 /**
  * A small test stand-in for the cutting stage: first-fit decreasing over mill stock (the README's saw model, cheapest
  * price per millimetre first, honouring {@code available}) and a greedy offcut filler (longest bar that fits, on
- * each stock piece in turn). Saw model (src/docs/sources.md): a piece holds sum(length + kerf) <= stock - 2 trim + kerf.
+ * each stock piece in turn). Saw model (src/docs/sources.md): a piece holds
+ * sum(length + kerf) <= stock - 2 trim + kerf, summed in exact decimals ({@link SawArithmetic}).
  */
 final class SimpleCutting implements CuttingSteps {
 
@@ -106,12 +108,9 @@ final class SimpleCutting implements CuttingSteps {
     }
 
     private static boolean fits(Kit kit, StockLength stock, List<Cut> cuts, Cut extra) {
-        double kerf = kit.settings().kerfMm();
-        double used = extra.lengthMm() + kerf;
-        for (Cut c : cuts) {
-            used += c.lengthMm() + kerf;
-        }
-        return used <= stock.lengthMm() - 2 * kit.settings().trimMm() + kerf + 1e-9;
+        List<Cut> all = new ArrayList<>(cuts);
+        all.add(extra);
+        return SawArithmetic.fits(kit.settings().kerfMm(), kit.settings().trimMm(), stock.lengthMm(), all);
     }
 
     private static SectionCutPlan section(Kit kit, String section, List<StockLength> stock, List<List<Cut>> cuts) {
@@ -120,8 +119,7 @@ final class SimpleCutting implements CuttingSteps {
         for (int i = 0; i < stock.size(); i++) {
             StockLength s = stock.get(i);
             List<Cut> c = cuts.get(i);
-            double used = c.stream().mapToDouble(x -> x.lengthMm() + kit.settings().kerfMm()).sum();
-            double offcut = Math.max(0, s.lengthMm() - 2 * kit.settings().trimMm() - used);
+            double offcut = SawArithmetic.offcut(kit.settings().kerfMm(), kit.settings().trimMm(), s.lengthMm(), c);
             String key = s.lengthMm() + "|" + s.origin() + "|" + c;
             CutPattern old = patterns.get(key);
             patterns.put(key, new CutPattern(s.lengthMm(), s.origin(), old == null ? 1 : old.count() + 1, c, offcut,

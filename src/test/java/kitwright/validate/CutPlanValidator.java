@@ -1,5 +1,6 @@
 package kitwright.validate;
 
+import java.math.BigDecimal;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -24,12 +25,15 @@ import kitwright.model.Status;
  * and limited stock are not overdrawn, the value is the sum of prices (or lengths), the bound is below the value and
  * the status agrees with the numbers. Throws AssertionError naming the first thing wrong.
  *
- * <p>Saw model (the issue's): a pattern fits when sum(length + kerf) &lt;= L - 2*trim + kerf; offcut =
+ * <p>Saw model (the issue's): a pattern fits when sum(length + kerf) &lt;= L - 2*trim + kerf; piece i starts at
+ * trim + sum over earlier pieces of (length + kerf) and must end by the far trim line L - trim; offcut =
  * L - 2*trim - sum(lengths) - n*kerf floored at 0; remnant when positive and at least the minimum remnant length.
+ * Fits, starts and offcuts are re-computed in exact decimal arithmetic: every double is read as its shortest
+ * decimal form ({@link BigDecimal#valueOf(double)}), so 599.1 is 599.1 and a hundredth over is over.
  */
 public final class CutPlanValidator {
-    private static final double MM = 1e-6;
-    private static final double OFFCUT_ROUNDING = 2e-3;
+    /** Offcuts are reported to a micrometre (the plan's rounding). */
+    private static final BigDecimal OFFCUT_ROUNDING = new BigDecimal("0.001");
 
     private CutPlanValidator() {
     }
@@ -95,19 +99,33 @@ public final class CutPlanValidator {
             StockOption row = stock.stream()
                     .filter(s -> s.lengthMm() == p.stockLengthMm() && s.origin() == p.origin())
                     .findFirst().orElseThrow(() -> new AssertionError(at + "no such stock row"));
-            double lengths = 0;
+            BigDecimal k = exact(kerf);
+            BigDecimal t = exact(trim);
+            BigDecimal stockLength = exact(p.stockLengthMm());
+            BigDecimal farTrimLine = stockLength.subtract(t);
+            BigDecimal start = t;
+            BigDecimal lengths = BigDecimal.ZERO;
+            int sequence = 0;
             for (Cut c : p.cuts()) {
+                sequence++;
                 Demand d = byMark.get(c.mark());
                 check(d != null, at + "unknown mark " + c.mark());
-                check(Math.abs(d.lengthMm() - c.lengthMm()) <= MM, at + "cut length of " + c.mark());
-                lengths += c.lengthMm();
+                check(exact(d.lengthMm()).compareTo(exact(c.lengthMm())) == 0, at + "cut length of " + c.mark()
+                        + " is " + c.lengthMm() + ", the mark is " + d.lengthMm());
+                BigDecimal end = start.add(exact(c.lengthMm()));
+                check(end.compareTo(farTrimLine) <= 0, at + "does not fit: cut " + sequence + " ends at "
+                        + end.toPlainString()
+                        + ", past the far trim line " + farTrimLine.toPlainString());
+                start = end.add(k);
+                lengths = lengths.add(exact(c.lengthMm()));
                 cut.merge(c.mark(), p.count(), Integer::sum);
             }
-            int n = p.cuts().size();
-            double taken = lengths + n * kerf;
-            check(taken <= p.stockLengthMm() - 2 * trim + kerf + MM, at + "does not fit: takes " + taken);
-            double offcut = Math.max(0, p.stockLengthMm() - 2 * trim - lengths - n * kerf);
-            check(Math.abs(offcut - p.offcutMm()) <= OFFCUT_ROUNDING, at + "offcut should be " + offcut);
+            BigDecimal n = BigDecimal.valueOf(p.cuts().size());
+            BigDecimal offcut = stockLength.subtract(t.add(t)).subtract(lengths).subtract(n.multiply(k))
+                    .max(BigDecimal.ZERO);
+            check(offcut.subtract(exact(p.offcutMm())).abs().compareTo(OFFCUT_ROUNDING) < 0
+                            && exact(p.offcutMm()).compareTo(offcut) <= 0,
+                    at + "offcut should be " + offcut.toPlainString() + " (never more)");
             String kind = p.offcutMm() > 0 && p.offcutMm() >= minRemnant ? "remnant" : "scrap";
             check(kind.equals(p.offcutKind()), at + "offcut kind should be " + kind);
             used.merge(p.stockLengthMm() + "/" + p.origin(), p.count(), Integer::sum);
@@ -154,6 +172,62 @@ public final class CutPlanValidator {
         } else {
             check(plan.gap() > 0, where + "FEASIBLE with no gap should be OPTIMAL");
         }
+    }
+
+    /**
+     * Re-checks a saw sheet ({@code cut-list.csv} text) against its plan in exact decimals: one row per cut in the
+     * plan's saw order, each starting at trim + sum over earlier pieces of (length + kerf) and ending by the far trim
+     * line; the offcut row starts one kerf after the last piece, or at the far trim line when that kerf would pass it,
+     * and ends by the far trim line. No row places a cut past the stock end.
+     */
+    public static void validateCutList(CutPlan plan, String csv) {
+        List<org.apache.commons.csv.CSVRecord> rows;
+        try {
+            rows = org.apache.commons.csv.CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+                    .parse(new java.io.StringReader(csv)).getRecords();
+        } catch (java.io.IOException e) {
+            throw new AssertionError("cut-list.csv unreadable: " + e.getMessage());
+        }
+        int row = 0;
+        int stockPiece = 0;
+        for (SectionCutPlan section : plan.sections()) {
+            BigDecimal k = exact(section.kerfMm());
+            BigDecimal t = exact(section.trimMm());
+            for (CutPattern p : section.patterns()) {
+                BigDecimal farTrimLine = exact(p.stockLengthMm()).subtract(t);
+                for (int n = 0; n < p.count(); n++) {
+                    stockPiece++;
+                    BigDecimal start = t;
+                    for (int i = 0; i <= p.cuts().size(); i++) {
+                        check(row < rows.size(), "cut-list.csv ends before stock piece " + stockPiece);
+                        org.apache.commons.csv.CSVRecord r = rows.get(row++);
+                        String at = "cut-list.csv row " + (row + 1) + ": ";
+                        check(Integer.parseInt(r.get("stock_piece")) == stockPiece, at + "stock piece " + stockPiece);
+                        check(new BigDecimal(r.get("stock_length_mm")).compareTo(exact(p.stockLengthMm())) == 0,
+                                at + "stock length " + p.stockLengthMm());
+                        BigDecimal length = new BigDecimal(r.get("length_mm"));
+                        BigDecimal at0 = new BigDecimal(r.get("start_mm"));
+                        boolean offcut = i == p.cuts().size();
+                        BigDecimal expected = offcut ? start.min(farTrimLine) : start;
+                        check(at0.compareTo(expected) == 0, at + "starts at " + at0.toPlainString() + ", expected "
+                                + expected.toPlainString());
+                        check(at0.add(length).compareTo(farTrimLine) <= 0, at + "ends at "
+                                + at0.add(length).toPlainString() + ", past the far trim line "
+                                + farTrimLine.toPlainString() + " of the stock piece");
+                        if (!offcut) {
+                            check(length.compareTo(exact(p.cuts().get(i).lengthMm())) == 0, at + "length of cut");
+                            start = at0.add(length).add(k);
+                        }
+                    }
+                }
+            }
+        }
+        check(row == rows.size(), "cut-list.csv has " + (rows.size() - row) + " rows more than the plan");
+    }
+
+    /** The decimal a double was written as: its shortest decimal form. */
+    static BigDecimal exact(double value) {
+        return BigDecimal.valueOf(value);
     }
 
     private static void check(boolean condition, String message) {

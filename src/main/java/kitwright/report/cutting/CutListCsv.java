@@ -7,6 +7,7 @@ import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.SawArithmetic;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -14,7 +15,9 @@ import kitwright.model.Kit;
 /**
  * The saw sheet, {@code cut-list.csv}: one row per piece to cut, in saw order, and one row per stock piece for its
  * offcut. Stock pieces are numbered 1, 2, ... through the whole kit. A piece starts at
- * {@code trim + sum over earlier pieces of (length + kerf)}; the offcut starts after the last piece's kerf.
+ * {@code trim + sum over earlier pieces of (length + kerf)}; the offcut starts after the last piece's kerf, or on
+ * the far trim line when that kerf would pass it (no row ever starts past the stock end). Positions are summed in
+ * exact decimals ({@link SawArithmetic}).
  * {@code kind} is {@code cut}, {@code spare} (a bar beyond the kit's quantity of its mark), {@code remnant} or
  * {@code scrap}.
  */
@@ -35,7 +38,7 @@ public final class CutListCsv {
             for (CutPattern pattern : section.patterns()) {
                 for (int n = 0; n < pattern.count(); n++) {
                     stockPiece++;
-                    double position = section.trimMm();
+                    List<Double> starts = SawArithmetic.starts(section.kerfMm(), section.trimMm(), pattern.cuts());
                     int sequence = 0;
                     for (Cut cut : pattern.cuts()) {
                         Bar bar = bars.get(cut.mark());
@@ -43,12 +46,13 @@ public final class CutListCsv {
                         String kind = bar != null && made > bar.quantity() ? "spare" : "cut";
                         rows.add(List.of(stockPiece, section.section(), pattern.stockLengthMm(),
                                 pattern.origin().code(), ++sequence, kind, cut.mark(), cut.lengthMm(),
-                                bar == null || bar.toleranceMm() == null ? "" : bar.toleranceMm(), position));
-                        position += cut.lengthMm() + section.kerfMm();
+                                bar == null || bar.toleranceMm() == null ? "" : bar.toleranceMm(),
+                                starts.get(sequence - 1)));
                     }
                     rows.add(List.of(stockPiece, section.section(), pattern.stockLengthMm(),
                             pattern.origin().code(), ++sequence, pattern.offcutKind(), "", pattern.offcutMm(), "",
-                            position));
+                            SawArithmetic.offcutStart(section.kerfMm(), section.trimMm(), pattern.stockLengthMm(),
+                                    pattern.cuts())));
                 }
             }
         }

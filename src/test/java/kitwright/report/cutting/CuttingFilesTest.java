@@ -45,6 +45,7 @@ class CuttingFilesTest {
     void sawSheetListsEveryCutWithItsStartAndEveryOffcut() {
         CutPlanValidator.validate(kit(), plan());
         String csv = CutListCsv.format(kit(), plan());
+        CutPlanValidator.validateCutList(plan(), csv);
         assertThat(csv.lines()).containsExactly(
                 "stock_piece,section,stock_length_mm,origin,sequence,kind,mark,length_mm,tolerance_mm,start_mm",
                 "1,CHS 48.3x3.2,6000,mill,1,cut,A,2500,0.5,5",
@@ -54,6 +55,30 @@ class CuttingFilesTest {
                 "2,CHS 48.3x3.2,3200,rack,2,cut,B,1000,0.5,1007",
                 "2,CHS 48.3x3.2,3200,rack,3,spare,B,1000,0.5,2009",
                 "2,CHS 48.3x3.2,3200,rack,4,scrap,,184,,3011");
+    }
+
+    /**
+     * Ten 599.06 mm bars, kerf 1.04 mm, no trim, on 6000 mm: piece i starts at (i - 1) x 600.10, the tenth ends at
+     * 5999.96 (worked by hand); the last kerf would pass the stock end, so the scrap row starts on it, at 6000.
+     */
+    @Test
+    void sawSheetInHundredthsPlacesNothingPastTheStockEnd() {
+        Kit kit = KitFixtures.kit(List.of(chs(SECTION, 48.3, 3.2)),
+                List.of(new StockLength(SECTION, 6000, 30.0, null, Origin.MILL)),
+                List.of(bar("A", SECTION, 599.06, 10)),
+                KitSettings.defaults("files").withKerfMm(1.04).withTrimMm(0).withMinRemnantMm(500));
+        CutPattern full = new CutPattern(6000, Origin.MILL, 1, java.util.Collections.nCopies(10, new Cut("A", 599.06)),
+                0, "scrap");
+        CutPlan plan = new CutPlan(List.of(new SectionCutPlan(SECTION, 1.04, 0, 500, "cost", Status.OPTIMAL, null,
+                30.0, 30.0, 0.0, 1, List.of(full), List.of())));
+        CutPlanValidator.validate(kit, plan);
+        String csv = CutListCsv.format(kit, plan);
+        CutPlanValidator.validateCutList(plan, csv);
+        List<String> lines = csv.lines().toList();
+        assertThat(lines).hasSize(12);
+        assertThat(lines.get(3)).isEqualTo("1,CHS 48.3x3.2,6000,mill,3,cut,A,599.06,0.5,1200.2");
+        assertThat(lines.get(10)).isEqualTo("1,CHS 48.3x3.2,6000,mill,10,cut,A,599.06,0.5,5400.9");
+        assertThat(lines.get(11)).isEqualTo("1,CHS 48.3x3.2,6000,mill,11,scrap,,0,,6000");
     }
 
     @Test
