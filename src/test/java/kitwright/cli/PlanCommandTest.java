@@ -114,10 +114,10 @@ class PlanCommandTest {
         CliRun run = CliRun.of("plan", kit.toString(), "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.NO_FEASIBLE_PLAN.code());
-        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: bundle B001 (1000 mm long,")
+        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: bundle BDL-1 (1000 mm long,")
                 .contains("fits no crate type of the catalog").contains("Trips: none planned (no crates to load).")
                 .doesNotContain("INFEASIBLE, gap");
-        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle B001 (1000 mm long,");
+        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle BDL-1 (1000 mm long,");
         assertThat(out.resolve("cut-list.csv")).exists();
     }
 

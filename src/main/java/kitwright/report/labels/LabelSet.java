@@ -11,6 +11,7 @@ import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.ids.IdOrder;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
 import kitwright.nesting.Bundle;
