@@ -142,7 +142,7 @@ public final class SparesCutting {
                         b.requiredQuantity(), b.nodeToNodeMm(), b.toleranceMm(), b.note()))
                 .toList();
         return new Kit(kit.dir(), kit.settings(), bars, kit.structures(), kit.joints(), kit.catalog(),
-                kit.materials(), kit.crates(), kit.vehicles());
+                kit.materials(), kit.crates(), kit.vehicles(), kit.files());
     }
 
     private static Map<String, Integer> zeros(Kit kit) {
