@@ -135,15 +135,22 @@ public final class KitFiguresSection {
      * extra pieces for saw errors rather than the kit's bars, by mark.
      */
     private static Optional<Figure> allowance(Kit kit) {
+        return allowancePieces(kit).map(pieces -> new Figure("Miscut allowance", pieces, "cut beyond the kit's"
+                + " bars for saw errors, the order buys stock for them and they ship with the kit (labels and"
+                + " cut-list kind \u201Callowance\u201D): " + allowanceByMark(kit)));
+    }
+
+    /** "5 pieces": the kit's miscut allowance pieces, or empty when it has none. */
+    static Optional<String> allowancePieces(Kit kit) {
         int total = kit.bars().stream().mapToInt(kit::allowance).sum();
-        if (total == 0) {
-            return Optional.empty();
-        }
-        String byMark = kit.bars().stream().filter(b -> kit.allowance(b) > 0)
+        return total == 0 ? Optional.empty()
+                : Optional.of(ShopFormat.count(total) + " piece" + (total == 1 ? "" : "s"));
+    }
+
+    /** "K1 × 1, K2 × 2": the miscut allowance pieces of each mark that has some, in the kit's order. */
+    static String allowanceByMark(Kit kit) {
+        return kit.bars().stream().filter(b -> kit.allowance(b) > 0)
                 .map(b -> b.mark() + " \u00D7\u2009" + kit.allowance(b)).collect(Collectors.joining(", "));
-        return Optional.of(new Figure("Miscut allowance", ShopFormat.count(total) + " piece"
-                + (total == 1 ? "" : "s"), "cut beyond the kit's bars for saw errors, the order buys stock for them"
-                + " and they ship with the kit (labels and cut-list kind \u201Callowance\u201D): " + byMark));
     }
 
     /** The reuse ratio to two decimals, or "none" without structures.csv. */

@@ -93,7 +93,9 @@ class MiscutAllowancePlanTest {
         }
         assertThat(files.get("report.html")).contains("Miscut allowance</div><div class=\"figure-value\">4 pieces")
                 .contains("A \u00D7\u20091, B \u00D7\u20091, C \u00D7\u20092")
-                .contains("Miscut allowance cut beyond the kit: C \u00D7\u20092");
+                .contains("Miscut allowance cut beyond the kit: C \u00D7\u20092")
+                .contains("Of the pieces cut from this stock, 4 pieces are miscut allowance for saw errors, beyond the"
+                        + " kit&#39;s bars: A \u00D7\u20091, B \u00D7\u20091, C \u00D7\u20092.");
     }
 
     @Test
