@@ -50,11 +50,11 @@ class PlanCommandTest {
         String text = Files.readString(first.resolve("summary.json"));
         assertThat(Files.readString(second.resolve("summary.json"))).isEqualTo(text);
         assertThat(text).startsWith("{\n  \"kit\": \"kit\",\n  \"description\": \"\",\n  \"marks\": 1,\n")
-                .contains("\n  \"spares\": [],\n  \"sparesToMake\": 0\n}").endsWith("}\n").doesNotContain("\r");
+                .contains("\n  \"spares\": [],\n  \"sparesToMake\": 0,\n  \"allowance\": 0\n}").endsWith("}\n").doesNotContain("\r");
         List<String> keys = KitFiles.listOf(PrettyJson.mapper().readTree(text).fieldNames());
         assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
                 "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares",
-                "sparesToMake");
+                "sparesToMake", "allowance");
     }
 
     @Test

@@ -74,10 +74,17 @@ public final class PlanValidator {
         validate(result, files);
     }
 
-    /** The records of a plan and the files written for it (by file name; CSVs not given are not checked). */
+    /**
+     * The records of a plan and the files written for it (by file name; CSVs not given are not checked): the saw
+     * sheet ({@code cut-list.csv}) with its kinds, the packing lists and the manifests.
+     */
     public static void validate(PlanResult result, Map<String, String> files) {
         Kit kit = result.kit();
         CutPlanValidator.validate(kit, result.cutting());
+        if (files.containsKey("cut-list.csv")) {
+            CutPlanValidator.validateCutList(result.cutting(), files.get("cut-list.csv"));
+            CutPlanValidator.validateKinds(kit, result.cutting(), files.get("cut-list.csv"));
+        }
         check(result.nesting() != null, "the nesting stage ran");
         NestPlanValidator.validate(kit, result.cutting(), result.nesting().plan());
         check((result.nesting().plan().status() == Status.INFEASIBLE) == (result.nesting().reason() != null),
