@@ -53,6 +53,14 @@ public record Kit(Path dir, KitSettings settings, List<Bar> bars, List<Structure
         return Optional.ofNullable(materials.get(section.material()));
     }
 
+    /**
+     * Pieces of a mark cut beyond its quantity for saw errors (kit.json {@code miscutAllowance}): part of the
+     * cutting demand, bundled, crated and weighed with the kit; service-life spares come on top.
+     */
+    public int allowance(Bar bar) {
+        return settings.miscutAllowance().piecesFor(bar.quantity());
+    }
+
     /** Mass of one bar of a mark, when its material is known. */
     public Optional<Double> barMassKg(Bar bar) {
         Section s = section(bar);

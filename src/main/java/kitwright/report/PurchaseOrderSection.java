@@ -34,7 +34,8 @@ final class PurchaseOrderSection {
                  List<CurrencyTotal> totals, boolean hasGrade) {
     }
 
-    record View(String kit, List<Sheet> sheets, List<Line> rack, Line rackTotal, boolean hasRack) {
+    /** @param allowance the line on the miscut allowance the stock covers, or null without one */
+    record View(String kit, List<Sheet> sheets, List<Line> rack, Line rackTotal, boolean hasRack, String allowance) {
     }
 
     private PurchaseOrderSection() {
@@ -59,7 +60,11 @@ final class PurchaseOrderSection {
         bySupplier.forEach((supplier, lines) -> sheets.add(new Sheet(supplier, !supplier.isEmpty(), kit.name(), date,
                 lines(kit, lines, true), totals(lines),
                 lines.stream().anyMatch(l -> !gradeAndStandard(l.terms()).isEmpty()))));
-        View view = new View(kit.name(), sheets, lines(kit, rack, false), rackTotal(rack), !rack.isEmpty());
+        String allowance = KitFiguresSection.allowancePieces(kit).map(pieces -> "Of the pieces cut from this stock, "
+                + pieces + " are miscut allowance for saw errors, beyond the kit's bars: "
+                + KitFiguresSection.allowanceByMark(kit) + ".").orElse(null);
+        View view = new View(kit.name(), sheets, lines(kit, rack, false), rackTotal(rack), !rack.isEmpty(),
+                allowance);
         return new ReportSection(ID, "Purchase order", "purchase-order", view);
     }
 
