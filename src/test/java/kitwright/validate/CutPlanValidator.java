@@ -182,12 +182,7 @@ public final class CutPlanValidator {
      */
     public static void validateCutList(CutPlan plan, String csv) {
         List<org.apache.commons.csv.CSVRecord> rows;
-        try {
-            rows = org.apache.commons.csv.CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                    .parse(new java.io.StringReader(csv)).getRecords();
-        } catch (java.io.IOException e) {
-            throw new AssertionError("cut-list.csv unreadable: " + e.getMessage());
-        }
+        rows = CsvOutput.records(csv);
         int row = 0;
         int stockPiece = 0;
         for (SectionCutPlan section : plan.sections()) {
