@@ -66,14 +66,21 @@ final class SummaryText {
         } else {
             sb.append("Kit mass: ").append(fixed(s.kitMassKg(), 1)).append(" kg (bars ")
                     .append(fixed(s.barsMassKg(), 1)).append(" kg")
-                    .append(s.sparesToMake() == 0 ? "" : " with the " + count(s.sparesToMake(), "spare bar")
-                            + " to make")
+                    .append(s.allowance() == 0 ? "" : " with the " + count(s.allowance(), "miscut allowance piece"))
+                    .append(s.sparesToMake() == 0 ? "" : (s.allowance() == 0 ? " with the " : " and the ")
+                            + count(s.sparesToMake(), "spare bar") + " to make")
                     .append(", joints ").append(fixed(s.jointsMassKg(), 1)).append(" kg)\n");
         }
         // surplus bars of bars.csv, not the service-life spares of the line after it
         sb.append("Surplus bars (beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
                 : s.spares().stream().map(c -> c.mark() + " " + c.count()).collect(Collectors.joining(", ")))
                 .append('\n');
+        if (s.allowance() > 0) {
+            sb.append("Miscut allowance (extra pieces for saw errors, cut beyond the quantity): ")
+                    .append(count(s.allowance(), "piece")).append(" (").append(s.markList().stream()
+                            .filter(m -> m.allowance() > 0).map(m -> m.mark() + " " + m.allowance())
+                            .collect(Collectors.joining(", "))).append(")\n");
+        }
         return sb.toString();
     }
 

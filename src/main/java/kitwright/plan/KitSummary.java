@@ -22,17 +22,20 @@ import kitwright.spares.SparesStage;
  *
  * @param members      members in all structures, or null without structures.csv
  * @param reuseRatio   members / bars, or null without structures.csv
- * @param barsMassKg   mass of all bars, the spares to make included, or null when materials are unknown
+ * @param barsMassKg   mass of all bars, the miscut allowance and the spares to make included, or null when
+ *                     materials are unknown
  * @param jointsMassKg mass of all joints (0 without joints.csv)
  * @param kitMassKg    bars plus joints ({@link KitMass}), or null when materials are unknown
  * @param spares       marks with more bars than the structures need, and how many more
  * @param sparesToMake spare bars made beyond bars.csv (the service-life spares of kit.json's policy before a plan,
  *                     those the plan cut after), counted in {@code barsMassKg}
+ * @param allowance    miscut allowance pieces of all marks (kit.json {@code miscutAllowance}), cut beyond bars.csv
+ *                     and counted in {@code barsMassKg}; each mark's in {@link MarkLine#allowance()}
  */
 public record KitSummary(String kit, String description, int marks, int bars, Integer members, Double reuseRatio,
                          List<SectionTotal> sections, List<MarkLine> markList, List<StructureMembers> structures,
                          JointTotal joints, Double barsMassKg, double jointsMassKg, Double kitMassKg,
-                         List<SpareCount> spares, int sparesToMake) {
+                         List<SpareCount> spares, int sparesToMake, int allowance) {
 
     public KitSummary {
         sections = List.copyOf(sections);
@@ -46,9 +49,12 @@ public record KitSummary(String kit, String description, int marks, int bars, In
                                Double massKg) {
     }
 
-    /** One mark: cut length, kit quantity, what the structures need, the surplus and the mark's total mass. */
+    /**
+     * One mark: cut length, kit quantity, what the structures need, the surplus, the mark's total mass (of its
+     * quantity) and its miscut allowance pieces, cut beyond the quantity.
+     */
     public record MarkLine(String mark, String section, double lengthMm, int quantity, int required, int surplus,
-                           Double massKg) {
+                           Double massKg, int allowance) {
     }
 
     /** Members (bars in place) of one structure. */
@@ -89,7 +95,8 @@ public record KitSummary(String kit, String description, int marks, int bars, In
             Optional<Double> each = kit.barMassKg(bar);
             Double total = each.map(m -> m * bar.quantity()).orElse(null);
             markList.add(new MarkLine(bar.mark(), bar.section(), round(bar.lengthMm(), 1), bar.quantity(),
-                    bar.requiredQuantity(), bar.surplus(), total == null ? null : round(total, 3)));
+                    bar.requiredQuantity(), bar.surplus(), total == null ? null : round(total, 3),
+                    kit.allowance(bar)));
             if (bar.surplus() > 0) {
                 spares.add(new SpareCount(bar.mark(), bar.surplus()));
             }
@@ -107,7 +114,7 @@ public record KitSummary(String kit, String description, int marks, int bars, In
         Double kitMassKg = massKnown ? round(kitMass.totalKg(), 3) : null;
         return new KitSummary(kit.name(), kit.settings().description(), kit.bars().size(), bars, members,
                 reuseRatio, sections(kit), markList, structures(kit), joints, barsMassKg, round(jointsMass, 3),
-                kitMassKg, spares, kitMass.spares());
+                kitMassKg, spares, kitMass.spares(), kitMass.allowance());
     }
 
     private static List<SectionTotal> sections(Kit kit) {

@@ -2,6 +2,8 @@ package kitwright.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import java.util.stream.Collectors;
 import kitwright.metrics.KitMetrics;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -71,7 +73,8 @@ public final class KitFiguresSection {
         top.add(new Figure("Stock used", ReportFormat.kg(figures.usedStockMassKg()),
                 ShopFormat.count(figures.stockPieces()) + " pieces: mill stock bought and rack offcuts taken"));
         top.add(new Figure("Kit mass with joints", ReportFormat.kg(figures.kitMassKg()),
-                "every bar, spares cut included, and the joints"));
+                "every bar, miscut allowance and spares cut included, and the joints"));
+        allowance(kit).ifPresent(top::add);
         top.add(figures.reuseRatio() == null ? new Figure("Reuse ratio", "none", "no structures.csv")
                 : new Figure("Reuse ratio", reuseRatio(figures), ShopFormat.count(figures.members())
                         + " members / " + ShopFormat.count(figures.bars()) + " bars"));
@@ -125,6 +128,29 @@ public final class KitFiguresSection {
                 outcome.rounds() == 1 ? "once" : ShopFormat.count(outcome.rounds()) + " times",
                 outcome.missing() == 0 ? null
                 : ShopFormat.count(outcome.missing()));
+    }
+
+    /**
+     * The miscut allowance of kit.json, when it adds pieces: how many of the pieces the order buys stock for are
+     * extra pieces for saw errors rather than the kit's bars, by mark.
+     */
+    private static Optional<Figure> allowance(Kit kit) {
+        return allowancePieces(kit).map(pieces -> new Figure("Miscut allowance", pieces, "cut beyond the kit's"
+                + " bars for saw errors, the order buys stock for them and they ship with the kit (labels and"
+                + " cut-list kind \u201Callowance\u201D): " + allowanceByMark(kit)));
+    }
+
+    /** "5 pieces": the kit's miscut allowance pieces, or empty when it has none. */
+    static Optional<String> allowancePieces(Kit kit) {
+        int total = kit.bars().stream().mapToInt(kit::allowance).sum();
+        return total == 0 ? Optional.empty()
+                : Optional.of(ShopFormat.count(total) + " piece" + (total == 1 ? "" : "s"));
+    }
+
+    /** "K1 × 1, K2 × 2": the miscut allowance pieces of each mark that has some, in the kit's order. */
+    static String allowanceByMark(Kit kit) {
+        return kit.bars().stream().filter(b -> kit.allowance(b) > 0)
+                .map(b -> b.mark() + " \u00D7\u2009" + kit.allowance(b)).collect(Collectors.joining(", "));
     }
 
     /** The reuse ratio to two decimals, or "none" without structures.csv. */

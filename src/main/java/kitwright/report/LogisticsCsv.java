@@ -23,7 +23,8 @@ import org.apache.commons.csv.CSVPrinter;
  * reads them as numbers):
  * <ul>
  *   <li>{@code packing-lists.csv}, one row per crate: {@code crate,type,marks,bundles,bundle_ids,boxes,box_ids,
- *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes);</li>
+ *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes; ids in
+ *   number order, BDL-2 before BDL-10);</li>
  *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
  *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
  *   to the rear face of the last crate; centre of gravity from the front).</li>
@@ -63,7 +64,7 @@ public final class LogisticsCsv {
                 "payload_kg", "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"))) {
             for (VehicleLoad v : plan.vehicles()) {
                 csv.printRecord(SpreadsheetCell.row(v.id(), v.type(), v.crates().size(),
-                        v.crates().stream().map(PlacedCrate::ref).collect(Collectors.joining(" ")),
+                        CrateContents.ids(v.crates().stream().map(PlacedCrate::ref).toList(), " "),
                         number(v.massKg(), 1), number(v.payloadKg(), 1), number(v.floorLengthMm(), 0),
                         number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2)));
             }

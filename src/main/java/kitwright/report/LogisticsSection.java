@@ -101,13 +101,13 @@ public final class LogisticsSection {
         }
         List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(group.get(0).id(),
                 group.get(0).type(), group.size() == 1 ? null
-                        : group.stream().skip(1).map(Crate::id).collect(Collectors.joining(", ")),
+                        : CrateContents.ids(group.stream().skip(1).map(Crate::id).toList(), ", "),
                 hosts(group.get(0), byId, fillByMark),
                 CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0), laneFills))).toList();
         Map<String, Crate> crateById = crates.crates().stream()
                 .collect(Collectors.toMap(Crate::id, Function.identity()));
         List<TripRow> trips = loads.vehicles().stream().map(v -> new TripRow(v.id(), v.type(),
-                v.crates().stream().map(p -> p.ref()).collect(Collectors.joining(" ")),
+                CrateContents.ids(v.crates().stream().map(p -> p.ref()).toList(), " "),
                 ShopFormat.kg(v.massKg()) + " / " + ShopFormat.kg(v.payloadKg()),
                 ShopFormat.mm(v.floorLengthMm()) + " / " + ShopFormat.mm(v.deckLengthMm()),
                 ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();

@@ -4,9 +4,12 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
+import kitwright.cutting.PieceKind;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -122,8 +125,14 @@ final class SawSheetSection {
         int pieces = patterns.stream().mapToInt(CutPattern::count).sum();
         String totals = ShopFormat.count(pieces) + " stock piece" + (pieces == 1 ? "" : "s") + " in "
                 + patterns.size() + " pattern" + (patterns.size() == 1 ? "" : "s");
-        String spares = plan.spares().isEmpty() ? null : "Spares cut beyond the kit: " + plan.spares().stream()
+        Map<String, Integer> allowance = PieceKind.counts(kit, plan, PieceKind.ALLOWANCE);
+        String allowanceText = allowance.isEmpty() ? null : "Miscut allowance cut beyond the kit: "
+                + allowance.entrySet().stream().map(a -> a.getKey() + " \u00D7\u2009" + a.getValue())
+                .collect(Collectors.joining(", "));
+        String sparesText = plan.spares().isEmpty() ? null : "Spares cut beyond the kit: " + plan.spares().stream()
                 .map(s -> s.mark() + " \u00D7\u2009" + s.count()).collect(Collectors.joining(", "));
+        String spares = Stream.of(allowanceText, sparesText).filter(Objects::nonNull)
+                .reduce((x, y) -> x + ". " + y).orElse(null);
         return new SawSection("saw-" + index, plan.section(), description(kit, plan.section()), settings,
                 ReportFormat.status(plan), ReportFormat.statusClass(plan.status()),
                 plan.status() == Status.INFEASIBLE ? plan.reason() : null, legend(kit, plan, palette),

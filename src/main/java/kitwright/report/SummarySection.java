@@ -97,12 +97,13 @@ final class SummarySection {
 
     /**
      * The kit's mass as kitwright gives it everywhere else (check, plan.json figures, compare): {@link KitMass},
-     * every bar with the spares the plan cuts, and the joints, with the parts in the note.
+     * every bar with the miscut allowance and the spares the plan cuts, and the joints, with the parts in the note.
      */
     private static Figure kitMass(Kit kit, List<CuttingFigures> sections) {
         KitMass mass = KitMass.of(kit, new CutPlan(sections.stream().map(CuttingFigures::plan).toList()));
-        String barsNote = ShopFormat.count(mass.bars() + mass.spares()) + " bars in "
+        String barsNote = ShopFormat.count(mass.bars() + mass.allowance() + mass.spares()) + " bars in "
                 + ShopFormat.count(kit.bars().size()) + " marks"
+                + (mass.allowance() == 0 ? "" : " (" + ShopFormat.count(mass.allowance()) + " of them miscut allowance)")
                 + (mass.spares() == 0 ? "" : " (" + ShopFormat.count(mass.spares()) + " of them spares cut)")
                 + (mass.barsMassKg() == null ? " (no materials file)" : ", " + ReportFormat.kg(mass.barsMassKg()));
         String jointsNote = mass.joints() == 0 ? "no joints" : ShopFormat.count(mass.joints()) + " joints, "

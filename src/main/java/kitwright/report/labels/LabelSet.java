@@ -10,7 +10,9 @@ import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.PieceKind;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.ids.IdOrder;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
 import kitwright.nesting.Bundle;
@@ -20,7 +22,7 @@ import kitwright.packing.CrateItem;
 import kitwright.packing.ItemKind;
 
 /**
- * Every label of a plan: one per cut piece (spares included) and one tag per remnant, in the order of
+ * Every label of a plan: one per cut piece (miscut allowance and spares included, their kind by {@link PieceKind}) and one tag per remnant, in the order of
  * cut-list.csv, so the operator peels them off as the saw works down the list.
  *
  * <p>Pieces of one mark are interchangeable, so the n-th piece of a mark goes into the n-th place for that mark
@@ -54,7 +56,7 @@ public record LabelSet(List<PieceLabel> pieces, List<RemnantTag> remnants) {
                     for (Cut cut : pattern.cuts()) {
                         Bar bar = kit.bar(cut.mark()).orElse(null);
                         int made = cutSoFar.merge(cut.mark(), 1, Integer::sum);
-                        String kind = bar != null && made > bar.quantity() ? "spare" : "cut";
+                        String kind = PieceKind.of(kit, bar, made).code();
                         Deque<String> free = places.get(cut.mark());
                         String bundle = free == null || free.isEmpty() ? "" : free.removeFirst();
                         pieces.add(new PieceLabel(kind, cut.mark(), section.section(), cut.lengthMm(),

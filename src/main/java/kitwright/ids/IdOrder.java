@@ -1,18 +1,20 @@
-package kitwright.report.labels;
+package kitwright.ids;
 
 import java.math.BigInteger;
 import java.util.Comparator;
 
 /**
- * Ids in number order: runs of digits compare by their value, other text by character, so B2 comes before B10.
+ * Ids in number order: runs of digits compare by their value, other text by character, so BDL-2 comes before
+ * BDL-10 and BDL-4.2 before BDL-4.10. Every printed list of ids is sorted by it; ids that compare equal (BDL-01,
+ * BDL-1) keep their order, as the sorts are stable.
  */
-final class IdOrder {
-    static final Comparator<String> NUMBER_ORDER = IdOrder::compare;
+public final class IdOrder {
+    public static final Comparator<String> NUMBER_ORDER = IdOrder::compare;
 
     private IdOrder() {
     }
 
-    static int compare(String a, String b) {
+    public static int compare(String a, String b) {
         int i = 0;
         int j = 0;
         while (i < a.length() && j < b.length()) {
