@@ -1,5 +1,6 @@
 package kitwright.report;
 
+import java.nio.charset.StandardCharsets;
 import java.time.LocalDate;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -25,6 +26,19 @@ public final class PlanFiles {
     private PlanFiles() {
     }
 
+    /**
+     * Every file of the plan folder as bytes, in a fixed order: the text files of {@link #of} (UTF-8), then
+     * {@code plan.xlsx}, the workbook of their CSVs ({@link PlanWorkbook}).
+     */
+    public static Map<String, byte[]> written(PlanResult result, LocalDate date) {
+        Map<String, String> text = of(result, date);
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        text.forEach((name, content) -> files.put(name, content.getBytes(StandardCharsets.UTF_8)));
+        files.put(PlanWorkbook.FILE, PlanWorkbook.of(text, date));
+        return files;
+    }
+
+    /** The text files of the plan folder, by name, in a fixed order. */
     public static Map<String, String> of(PlanResult result, LocalDate date) {
         Kit kit = result.kit();
         Map<String, String> files = new LinkedHashMap<>();

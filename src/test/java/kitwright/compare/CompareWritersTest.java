@@ -4,13 +4,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
+import kitwright.validate.CsvOutput;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 
@@ -52,14 +51,16 @@ class CompareWritersTest {
     void csvHasTheKeysAsHeaderAndOneRowPerOption() throws Exception {
         StringWriter out = new StringWriter();
         CompareCsv.write(CompareFixtures.three(), out);
-        List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                .parse(new StringReader(out.toString())).getRecords();
-        assertThat(out.toString()).startsWith(String.join(",", KEYS) + "\r\n");
+        List<CSVRecord> records = CsvOutput.records(out.toString());
+        // compare.csv names the compare.json keys in snake_case
+        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream()
+                .map(k -> k.replaceAll("([A-Z])", "_$1").toLowerCase(java.util.Locale.ROOT))
+                .collect(java.util.stream.Collectors.joining(",")) + "\r\n");
         assertThat(records).hasSize(3);
         assertThat(records.get(2).get("kit")).isEqualTo("<b>&\"");
         assertThat(records.get(1).get("cost")).isEqualTo("4800.0");
-        assertThat(records.get(1).get("payableCost")).isEqualTo("4800.0");
-        assertThat(records.get(1).get("stockLengthMm")).isEqualTo("480000.0");
+        assertThat(records.get(1).get("payable_cost")).isEqualTo("4800.0");
+        assertThat(records.get(1).get("stock_length_mm")).isEqualTo("480000.0");
         assertThat(records.get(0).get("status")).isEqualTo("OPTIMAL");
     }
 

@@ -137,8 +137,7 @@ class IdsInPlanFilesTest {
     }
 
     private static List<CSVRecord> read(String csv) throws Exception {
-        return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(new StringReader(csv))
-                .getRecords();
+        return kitwright.validate.CsvOutput.records(csv);
     }
 
     private static List<String> words(String text) {

@@ -6,7 +6,6 @@ import static org.assertj.core.api.Assertions.fail;
 import java.awt.image.BufferedImage;
 import java.io.File;
 import java.io.IOException;
-import java.io.StringReader;
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -26,8 +25,8 @@ import kitwright.plan.Planner;
 import kitwright.report.cutting.CutListCsv;
 import kitwright.report.labels.CodeLine;
 import kitwright.report.labels.LabelsHtml;
+import kitwright.validate.CsvOutput;
 import kitwright.validate.PlanValidator;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.DisplayName;
@@ -70,8 +69,7 @@ class LabelsPrintTest {
     }
 
     private static List<CSVRecord> rows(Path csv) throws IOException {
-        return CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                .parse(new StringReader(Files.readString(csv))).getRecords();
+        return CsvOutput.records(Files.readString(csv));
     }
 
     private static String number(String text) {

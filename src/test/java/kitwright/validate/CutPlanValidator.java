@@ -269,14 +269,9 @@ public final class CutPlanValidator {
         check(cut.equals(seen), "cut-list.csv pieces per mark " + seen + ", the plan cuts " + cut);
     }
 
-    /** The rows of a saw sheet, by header name. */
+    /** The rows of a saw sheet, by header name (the file's byte-order mark and CRLF checked). */
     private static List<org.apache.commons.csv.CSVRecord> rows(String csv) {
-        try {
-            return org.apache.commons.csv.CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                    .parse(new java.io.StringReader(csv)).getRecords();
-        } catch (java.io.IOException e) {
-            throw new AssertionError("cut-list.csv unreadable: " + e.getMessage());
-        }
+        return CsvOutput.records(csv);
     }
 
     /** The decimal a double was written as: its shortest decimal form. */

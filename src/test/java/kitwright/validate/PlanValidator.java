@@ -1,7 +1,5 @@
 package kitwright.validate;
 
-import java.io.IOException;
-import java.io.StringReader;
 import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -31,7 +29,6 @@ import kitwright.packing.ItemKind;
 import kitwright.packing.JointBoxLoad;
 import kitwright.plan.PlanResult;
 import kitwright.report.LogisticsCsv;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 
 /**
@@ -299,14 +296,9 @@ public final class PlanValidator {
     }
 
     private static List<CSVRecord> read(String csv, List<String> header) {
-        try {
-            List<CSVRecord> rows = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
-                    .parse(new StringReader(csv)).getRecords();
-            check(rows.isEmpty() || rows.get(0).getParser().getHeaderNames().equals(header), "CSV header " + header);
-            return rows;
-        } catch (IOException e) {
-            throw new AssertionError("CSV unreadable", e);
-        }
+        List<CSVRecord> rows = CsvOutput.records(csv);
+        check(rows.isEmpty() || rows.get(0).getParser().getHeaderNames().equals(header), "CSV header " + header);
+        return rows;
     }
 
     /** "A1 x 12; N90 x 40" (packing-lists.csv) as a map. */
