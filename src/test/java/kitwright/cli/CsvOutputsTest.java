@@ -39,9 +39,10 @@ class CsvOutputsTest {
         }
         WrittenPlans.planFolder(Path.of(KIT), plan, java.time.LocalDate.of(2026, 12, 3));
 
-        assertThat(checkedCsvs(plan)).containsExactlyInAnyOrder("order.csv", "cut-list.csv", "rack-after.csv",
+        assertThat(checkedCsvs(plan)).containsExactlyInAnyOrder("order.csv", "rack-pull.csv", "cut-list.csv",
+                "rack-after.csv",
                 "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv");
-        assertThat(checkedCsvs(cut)).contains("order.csv", "cut-list.csv", "rack-after.csv");
+        assertThat(checkedCsvs(cut)).contains("order.csv", "rack-pull.csv", "cut-list.csv", "rack-after.csv");
         assertThat(checkedCsvs(nest)).contains("nests.csv", "assembly-order.csv");
         assertThat(checkedCsvs(pack)).contains("packing-lists.csv", "manifests.csv");
         assertThat(checkedCsvs(compare)).containsExactly("compare.csv");
