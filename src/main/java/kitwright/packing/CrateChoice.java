@@ -35,15 +35,16 @@ final class CrateChoice {
     private final int pricingRounds;
     private final long maxFillings;
     private final Deadline deadline;
-    /** Crate fillings the greedy constructions have spent: the deterministic step counter of this choice. */
+    /** Crate fillings spent so far: the deterministic step counter of this choice. */
     private long fillings;
 
     /**
-     * @param maxFillings crate fillings ({@link CrateFiller} calls) the greedy constructions may spend in all: there
-     *                    is one construction per crate type and per pair of types, so their work grows with the
-     *                    square of the catalog; past the budget only the constructions already run compete (the
-     *                    first, over every crate type, always runs)
-     * @param deadline    the crating stage's deadline: once passed, no further construction or pricing round runs
+     * @param maxFillings crate fillings ({@link CrateFiller} calls) the choice may spend in all: there is one
+     *                    construction per crate type and per pair of types, so their work grows with the square of
+     *                    the catalog, and the candidate patterns take (40 + item types) fillings per crate type;
+     *                    past the budget no further construction, candidate or pricing filling is tried (the first
+     *                    construction, over every crate type, always runs, so a cover is always found)
+     * @param deadline    the crating stage's deadline: once passed, likewise
      */
     CrateChoice(PatternCover cover, int pricingRounds, long maxFillings, Deadline deadline) {
         this.cover = cover;
@@ -52,7 +53,7 @@ final class CrateChoice {
         this.deadline = deadline;
     }
 
-    /** Crate fillings the greedy constructions spent in the last {@link #choose}. */
+    /** Crate fillings spent in the last {@link #choose}. */
     long fillings() {
         return fillings;
     }
@@ -78,7 +79,7 @@ final class CrateChoice {
                     ? (t, left) -> count(filler.fills(t, crates.get(t), types, left))
                     : (t, left) -> count(List.of(filler.fill(t, crates.get(t), types, left)));
             for (int[] allowed : subsets) {
-                if (!first && (fillings >= maxFillings || deadline.passed())) {
+                if (!first && spent()) {
                     break;
                 }
                 first = false;
@@ -94,18 +95,25 @@ final class CrateChoice {
         if (best.isEmpty()) {
             return best;
         }
-        for (int t = 0; t < crates.size() && !deadline.passed(); t++) {
+        for (int t = 0; t < crates.size() && !spent(); t++) {
             for (ItemType it : types) {
                 int[] only = new int[types.size()];
                 only[it.index()] = it.demand();
+                fillings++;
                 CoverSearch.add(patterns, filler.fill(t, crates.get(t), types, only));
             }
         }
         complements(crates, types, demand, patterns);
         CoverSearch.price(pricingRounds, crates.size(), crateCost, demand,
                 (t, duals) -> offers(crates.get(t), types, duals),
-                (t, offer) -> filler.fills(t, crates.get(t), types, offer), patterns, deadline);
+                (t, offer) -> spent() ? List.of() : count(filler.fills(t, crates.get(t), types, offer)), patterns,
+                deadline);
         return CoverSearch.choose(cover, patterns, crateCost, demand, best);
+    }
+
+    /** True when the budget of fillings is spent or the deadline has passed. */
+    private boolean spent() {
+        return fillings >= maxFillings || deadline.passed();
     }
 
     private List<CrateLayout> count(List<CrateLayout> layouts) {
@@ -139,7 +147,7 @@ final class CrateChoice {
         List<CrateLayout> first = new ArrayList<>(patterns.values()).subList(0, Math.min(COMPLEMENTS,
                 patterns.size()));
         for (CrateLayout p : first) {
-            if (deadline.passed()) {
+            if (spent()) {
                 return;
             }
             int[] rest = new int[demand.length];
@@ -150,7 +158,7 @@ final class CrateChoice {
                 continue;
             }
             for (int t = 0; t < crates.size(); t++) {
-                for (CrateLayout layout : filler.fills(t, crates.get(t), types, rest)) {
+                for (CrateLayout layout : count(filler.fills(t, crates.get(t), types, rest))) {
                     CoverSearch.add(patterns, layout);
                 }
             }

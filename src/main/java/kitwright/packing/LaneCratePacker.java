@@ -37,10 +37,10 @@ public final class LaneCratePacker implements CratePacker {
      *                          {@link #pack} starts, for every loop and solver call) [10, kit.json timeLimitSeconds]
      * @param pricingRounds     column generation rounds
      * @param maxFillings       crate fillings the greedy constructions of the crate mix may spend
-     *                          ({@link CrateChoice}) [20,000]
+     *                          ({@link CrateChoice}; the sample kits take 108-563) [2,000]
      */
     public record Limits(double deterministicTime, double safetySeconds, int pricingRounds, long maxFillings) {
-        public static final long FILLINGS = 20_000L;
+        public static final long FILLINGS = 2_000L;
         public static final Limits DEFAULT = new Limits(1.0, 10.0, 20);
 
         /** The given limits with the default budget of crate fillings. */

@@ -26,8 +26,8 @@ import kitwright.model.Status;
  * after at most (total spares + 1) rounds; in practice one or two. Every round re-solves the changed sections, each
  * up to its own time limit, so the rounds are bounded twice: by a deterministic budget ({@link #MAX_ROUNDS}) and by
  * one wall-clock deadline for the whole loop (kit.json timeLimitSeconds, from the end of the first plan). The round
- * that reaches either buys every spare still short outright (a plan with demand + r cuts at least r spares), so the
- * loop always ends with the spares made.
+ * that reaches either buys every spare outright (a plan with demand + r cuts at least r spares), so the loop always
+ * ends with the spares made.
  *
  * <p><b>Accounting.</b> A mark's bought spares are the bars added to its demand; the rest of its spares came from
  * offcuts. The spares' cost is the stock cost of the final plan minus that of the plan without spares. When a
@@ -69,12 +69,9 @@ public final class SparesCutting {
             stillShort.forEach((mark, v) -> next.merge(mark, v, Integer::sum));
             boolean last = rounds + 1 >= maxRounds || deadline.passed();
             if (last) {
-                // buy every spare a short mark needs: the re-plan then holds them all, whatever the offcuts do
-                stillShort.forEach((mark, v) -> {
-                    if (v > 0) {
-                        next.merge(mark, need.get(mark), Math::max);
-                    }
-                });
+                // buy every spare outright: the re-plan then holds them all, whatever its offcuts do (a mark that
+                // is not short now may lose its free spares in the re-plan)
+                need.forEach((mark, n) -> next.merge(mark, n, Math::max));
             }
             Kit more = withExtraDemand(kit, next);
             CutPlan replanned = cutting.plan(more);
