@@ -6,6 +6,7 @@ import java.util.concurrent.Callable;
 import kitwright.io.InvalidInputException;
 import kitwright.io.KitReader;
 import kitwright.model.Kit;
+import kitwright.plan.JointClearance;
 import kitwright.plan.KitSummary;
 import kitwright.spares.SparesStage;
 import picocli.CommandLine.Command;
@@ -18,7 +19,8 @@ import picocli.CommandLine.Spec;
         description = {
             "Reads and validates a kit folder and its catalogs, then prints a summary: marks, bars, total cut"
                     + " length and mass per section, joints, members per structure, the reuse ratio, the surplus"
-                    + " bars, and the service-life spares that plan will make.",
+                    + " bars, and the service-life spares that plan will make; a warning for each bar end that"
+                    + " would sit inside the smallest joint of joints.csv.",
             "",
             "Service-life spares (kit.json \"spares\": lossRatePerCycle p, cycles c, serviceLevel L): a mark"
                     + " of n bars in service loses Binomial(n x c, p) bars over the kit's life, since a lost bar"
@@ -48,6 +50,9 @@ public final class CheckCommand implements Callable<Integer> {
         out.print(SummaryText.format(KitSummary.of(kit)));
         out.println(SparesText.sizing(SparesStage.sizing(kit)));
         out.println();
+        for (String warning : JointClearance.warnings(kit)) {
+            out.println("Warning: " + warning);
+        }
         out.println("Tube catalog: " + kit.catalog().file());
         out.println("The kit is valid.");
         out.flush();

@@ -32,7 +32,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "compare", mixinStandardHelpOptions = true,
         description = {
-            "Plans several kit options (e.g. the same structures served by 6, 12 or 20 marks) and compares them: "
+            "Plans several kit options (e.g. the structures re-shaped for 6, 12 or 20 marks) and compares them: "
                     + "marks, bars, reuse ratio, stock bought, cost, offcut waste, masses, embodied carbon, "
                     + "bundles, crates, vehicles and trip cost.",
             "Writes compare.html (open it in a browser: the best value in each row is marked, the others show "

@@ -6,6 +6,7 @@ import java.util.TreeMap;
 import java.util.stream.Collectors;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.PieceKind;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Kit;
 import kitwright.model.Origin;
@@ -83,6 +84,11 @@ final class CutSummaryText {
             } else if (s.reason() != null) {
                 sb.append(s.section()).append(": ").append(s.status()).append(", ").append(s.reason())
                         .append(" (this plan may differ on a faster or slower machine)\n");
+            }
+            Map<String, Integer> allowance = PieceKind.counts(kit, s, PieceKind.ALLOWANCE);
+            if (!allowance.isEmpty()) {
+                sb.append(s.section()).append(": miscut allowance cut: ").append(allowance.entrySet().stream()
+                        .map(x -> x.getKey() + " " + x.getValue()).collect(Collectors.joining(", "))).append('\n');
             }
             if (!s.spares().isEmpty()) {
                 sb.append(s.section()).append(": spares cut: ").append(s.spares().stream()

@@ -1,6 +1,7 @@
 package kitwright.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import kitwright.io.InvalidInputException;
 import kitwright.io.Problem;
 import picocli.CommandLine;
@@ -54,7 +55,9 @@ public final class KitwrightCommand implements Runnable {
         });
         cl.setParameterExceptionHandler((ex, args) -> {
             PrintWriter err = ex.getCommandLine().getErr();
-            err.println("kitwright: " + ex.getMessage());
+            List<String> lines = ArgumentHints.explain(ex, args);
+            err.println("kitwright: " + lines.get(0));
+            lines.subList(1, lines.size()).forEach(err::println);
             err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
             err.flush();
             return ExitCode.INVALID_INPUT.code();

@@ -36,9 +36,11 @@ import picocli.CommandLine.Spec;
             "  order.csv          stock to buy (and rack offcuts to take), with prices",
             "  cut-list.csv       the saw sheet: every stock piece, every cut, start positions, offcuts",
             "  rack-after.csv     the rack for the next job, in the tube catalog's format",
+            "  labels.html        A4 label sheets: a QR-coded label per cut piece, a tag per remnant",
             "  nests.csv          which tube goes inside which; assembly-order.csv, innermost first",
             "  packing-lists.csv  per crate: marks and counts, bundles, boxes, gross mass",
             "  manifests.csv      per vehicle: crates, mass, floor length, centre of gravity",
+            "  plan.xlsx          every CSV above as one workbook, a sheet per CSV named as the file",
             "  plan.json          every stage as data; summary.json the kit summary",
             "  timing.json        seconds per stage (the only file that changes between identical runs)",
             "",
@@ -86,9 +88,9 @@ public final class PlanCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         PlanResult result = Planner.run(kit, new Planner.Options(sparesFromOffcuts), progress(err));
         LocalDate day = date != null ? date : LocalDate.now();
-        Map<String, String> files = PlanFiles.of(result, day);
+        Map<String, byte[]> files = PlanFiles.written(result, day);
         try (OutputFolder folder = OutputFolder.create(out)) {
-            for (Map.Entry<String, String> file : files.entrySet()) {
+            for (Map.Entry<String, byte[]> file : files.entrySet()) {
                 folder.write(file.getKey(), file.getValue());
             }
             folder.write("timing.json", PrettyJson.write(timing(result)));

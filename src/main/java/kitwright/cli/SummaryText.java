@@ -25,19 +25,21 @@ final class SummaryText {
                     .append(count(s.members(), "member")).append(" in all; reuse ratio ")
                     .append(fixed(s.reuseRatio(), 2)).append(" (members in all structures / bars in the kit)\n");
         } else {
-            sb.append("No structures.csv: quantities as given, no reuse ratio\n");
+            sb.append("No structures.csv: quantities as given; reuse ratio: none\n");
         }
         TextTable sections = new TextTable("Section", "Material", ">Marks", ">Bars", ">Cut length (m)",
                 ">Mass (kg)");
         double totalLength = 0;
+        Double totalMass = 0.0;
         for (SectionTotal t : s.sections()) {
             sections.row(t.section(), t.material(), t.marks(), t.bars(), fixed(t.cutLengthMm() / 1000, 3),
                     fixed(t.massKg(), 1));
             totalLength += t.cutLengthMm();
+            totalMass = totalMass == null || t.massKg() == null ? null : totalMass + t.massKg();
         }
-        sections.row("All sections", "", s.marks(), s.bars(), fixed(totalLength / 1000, 3), fixed(s.barsMassKg(), 1));
+        sections.row("All sections", "", s.marks(), s.bars(), fixed(totalLength / 1000, 3), fixed(totalMass, 1));
         sb.append('\n').append(sections.render(""));
-        TextTable marks = new TextTable("Mark", "Section", ">Cut length (mm)", ">Quantity", ">Needed", ">Spares",
+        TextTable marks = new TextTable("Mark", "Section", ">Cut length (mm)", ">Quantity", ">Needed", ">Surplus",
                 ">Mass (kg)");
         for (MarkLine m : s.markList()) {
             marks.row(m.mark(), m.section(), fixed(m.lengthMm(), 1), m.quantity(), m.required(), m.surplus(),
@@ -63,12 +65,22 @@ final class SummaryText {
             sb.append("Kit mass: unknown (no materials file found, so no densities)\n");
         } else {
             sb.append("Kit mass: ").append(fixed(s.kitMassKg(), 1)).append(" kg (bars ")
-                    .append(fixed(s.barsMassKg(), 1)).append(" kg, joints ").append(fixed(s.jointsMassKg(), 1))
-                    .append(" kg)\n");
+                    .append(fixed(s.barsMassKg(), 1)).append(" kg")
+                    .append(s.allowance() == 0 ? "" : " with the " + count(s.allowance(), "miscut allowance piece"))
+                    .append(s.sparesToMake() == 0 ? "" : (s.allowance() == 0 ? " with the " : " and the ")
+                            + count(s.sparesToMake(), "spare bar") + " to make")
+                    .append(", joints ").append(fixed(s.jointsMassKg(), 1)).append(" kg)\n");
         }
-        sb.append("Spares (bars beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
+        // surplus bars of bars.csv, not the service-life spares of the line after it
+        sb.append("Surplus bars (beyond what the structures need): ").append(s.spares().isEmpty() ? "none"
                 : s.spares().stream().map(c -> c.mark() + " " + c.count()).collect(Collectors.joining(", ")))
                 .append('\n');
+        if (s.allowance() > 0) {
+            sb.append("Miscut allowance (extra pieces for saw errors, cut beyond the quantity): ")
+                    .append(count(s.allowance(), "piece")).append(" (").append(s.markList().stream()
+                            .filter(m -> m.allowance() > 0).map(m -> m.mark() + " " + m.allowance())
+                            .collect(Collectors.joining(", "))).append(")\n");
+        }
         return sb.toString();
     }
 

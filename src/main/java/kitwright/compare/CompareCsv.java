@@ -5,27 +5,26 @@ import java.io.Writer;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.report.CsvFile;
 import kitwright.report.SpreadsheetCell;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 /**
- * Writes {@code compare.csv}: a header row with the compare.json keys, then one row per option in the given order.
- * Unknown figures are empty cells; numbers in plain notation with a point as decimal separator (RFC 4180 CSV as
- * commons-csv writes it, CRLF line ends).
+ * Writes {@code compare.csv}: a header row with the compare.json keys in snake_case ({@code reuseRatio} is
+ * {@code reuse_ratio}), then one row per option in the given order. Unknown figures are empty cells; numbers in
+ * plain notation with a point as decimal separator; laid out by {@link CsvFile}.
  */
 public final class CompareCsv {
-    /** The header: the compare.json keys in their order. */
-    public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
-            "stockLengthMm", "cost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
-            "bundles", "crates", "vehicles", "tripCost", "status");
+    /** The header: the compare.json keys in their order, in snake_case. */
+    public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuse_ratio",
+            "stock_pieces", "stock_length_mm", "cost", "offcut_pct", "scrap_pct", "remnant_pct", "kit_mass_kg",
+            "bought_mass_kg", "used_stock_mass_kg", "co2e_kg", "bundles", "crates", "vehicles", "trip_cost", "status");
 
     private CompareCsv() {
     }
 
     public static void write(List<OptionSummary> options, Writer out) throws IOException {
-        CSVFormat format = CSVFormat.RFC4180.builder().setHeader(HEADER.toArray(String[]::new)).get();
-        try (CSVPrinter printer = new CSVPrinter(out, format)) {
+        try (CSVPrinter printer = CsvFile.printer(out, HEADER)) {
             for (OptionSummary o : options) {
                 printer.printRecord(SpreadsheetCell.row(row(o)));
             }
@@ -37,7 +36,7 @@ public final class CompareCsv {
         cells.add(o.kit());
         cells.add(Integer.toString(o.marks()));
         cells.add(Integer.toString(o.bars()));
-        cells.add(Integer.toString(o.members()));
+        cells.add(o.members() == null ? "" : o.members().toString());
         cells.add(number(o.reuseRatio()));
         cells.add(Integer.toString(o.stockPieces()));
         cells.add(number(o.stockLengthMm()));
@@ -47,6 +46,7 @@ public final class CompareCsv {
         cells.add(number(o.remnantPct()));
         cells.add(number(o.kitMassKg()));
         cells.add(number(o.boughtMassKg()));
+        cells.add(number(o.usedStockMassKg()));
         cells.add(number(o.co2eKg()));
         cells.add(o.bundles() == null ? "" : o.bundles().toString());
         cells.add(o.crates() == null ? "" : o.crates().toString());

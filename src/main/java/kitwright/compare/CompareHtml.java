@@ -55,7 +55,7 @@ public final class CompareHtml {
             CompareMetric m = row.metric();
             List<CellView> cells = new ArrayList<>();
             for (Comparison.Cell c : row.cells()) {
-                String text = c.value() == null ? "\u2013" : format(c.value(), m.decimals(), "");
+                String text = c.value() == null ? ShopFormat.UNKNOWN : format(c.value(), m.decimals(), "");
                 String css = c.isBest() ? "best" : c.difference() == null ? "plain" : "worse";
                 cells.add(new CellView(text, c.isBest(), difference(m, c), css));
             }

@@ -16,16 +16,17 @@ import kitwright.model.Status;
  * @param kit            the kit's name
  * @param marks          bar types
  * @param bars           bars in the kit
- * @param members        members in all structures
- * @param reuseRatio     members / bars (higher is better)
+ * @param members        members in all structures, null without structures.csv
+ * @param reuseRatio     members / bars (higher is better), null without structures.csv (then not ranked)
  * @param stockPieces    stock pieces cut (mill and rack)
  * @param stockLengthMm  their total length
  * @param cost           price of the stock cut
  * @param offcutPct      offcut length in percent of the stock length cut
  * @param scrapPct       scrap (offcuts shorter than the minimum remnant) in percent
  * @param remnantPct     remnants (offcuts back on the rack) in percent
- * @param kitMassKg      mass of the kit's bars and joints
+ * @param kitMassKg      mass of the kit's bars, spares cut included, and joints
  * @param boughtMassKg   mass of the mill stock bought
+ * @param usedStockMassKg mass of all stock cut: mill stock bought and rack offcuts taken
  * @param co2eKg         embodied carbon of the stock bought (bought mass x the material's factor)
  * @param bundles        nested bundles
  * @param crates         crates
@@ -34,16 +35,17 @@ import kitwright.model.Status;
  * @param status         the option's overall status: the worst of its stages
  */
 @JsonPropertyOrder({"kit", "marks", "bars", "members", "reuseRatio", "stockPieces", "stockLengthMm", "cost",
-    "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg", "bundles", "crates", "vehicles",
+    "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "usedStockMassKg",
+    "co2eKg", "bundles", "crates", "vehicles",
     "tripCost", "status"})
-public record OptionSummary(String kit, int marks, int bars, int members, double reuseRatio, int stockPieces,
+public record OptionSummary(String kit, int marks, int bars, Integer members, Double reuseRatio, int stockPieces,
                             double stockLengthMm, Double cost, double offcutPct, double scrapPct, double remnantPct,
-                            Double kitMassKg, Double boughtMassKg, Double co2eKg, Integer bundles, Integer crates,
-                            Integer vehicles, Double tripCost, Status status) {
+                            Double kitMassKg, Double boughtMassKg, Double usedStockMassKg, Double co2eKg,
+                            Integer bundles, Integer crates, Integer vehicles, Double tripCost, Status status) {
     public OptionSummary {
         Objects.requireNonNull(kit, "kit");
         Objects.requireNonNull(status, "status");
-        if (marks < 0 || bars < 0 || members < 0 || stockPieces < 0) {
+        if (marks < 0 || bars < 0 || (members != null && members < 0) || stockPieces < 0) {
             throw new IllegalArgumentException("negative count in option " + kit);
         }
     }
@@ -57,7 +59,8 @@ public record OptionSummary(String kit, int marks, int bars, int members, double
                 round(metrics.reuseRatio(), 3), metrics.stockPieces(), round(metrics.stockLengthMm(), 1),
                 round(metrics.cost(), 2), round(metrics.offcutPct(), 2), round(metrics.scrapPct(), 2),
                 round(metrics.remnantPct(), 2), round(metrics.kitMassKg(), 1), round(metrics.boughtMassKg(), 1),
-                round(metrics.co2eKg(), 1), logistics.bundles(), logistics.crates(), logistics.vehicles(),
+                round(metrics.usedStockMassKg(), 1), round(metrics.co2eKg(), 1), logistics.bundles(),
+                logistics.crates(), logistics.vehicles(),
                 round(logistics.tripCost(), 2), worst(statuses));
     }
 

@@ -42,12 +42,15 @@ public final class KitCutter {
         return new CutPlan(sections);
     }
 
-    /** The problem of one section: its marks (kit quantity) and its stock rows, with the kit's saw settings. */
+    /**
+     * The problem of one section: its marks (kit quantity plus the miscut allowance, {@link Kit#allowance}) and its
+     * stock rows, with the kit's saw settings.
+     */
     public static SectionProblem problem(Kit kit, String section, SearchLimits limits) {
         List<Demand> demands = new ArrayList<>();
         for (Bar bar : kit.bars()) {
             if (bar.section().equals(section)) {
-                demands.add(new Demand(bar.mark(), bar.lengthMm(), bar.quantity()));
+                demands.add(new Demand(bar.mark(), bar.lengthMm(), bar.quantity() + kit.allowance(bar)));
             }
         }
         List<StockOption> stock = new ArrayList<>();

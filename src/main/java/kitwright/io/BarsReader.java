@@ -9,13 +9,15 @@ import java.util.Map;
 
 /**
  * Reads {@code bars.csv}: {@code mark,section,length_mm,quantity} and optional
- * {@code node_to_node_mm,tolerance_mm,note}. Checks each row on its own (numbers, blanks, duplicate marks); the
- * checks against the tube catalog and structures.csv are made when the kit is assembled.
+ * {@code node_to_node_mm,tolerance_mm,note,start_deduction_mm,end_deduction_mm} (the last two per end, over
+ * kit.json's {@code endDeductionMm}, for a bar between joints of different sizes). Checks each row on its own
+ * (numbers, blanks, duplicate marks); the checks against the tube catalog and structures.csv are made when the kit
+ * is assembled.
  */
 public final class BarsReader {
     public static final CsvColumns COLUMNS = new CsvColumns(
             List.of("mark", "section", "length_mm", "quantity"),
-            List.of("node_to_node_mm", "tolerance_mm", "note"));
+            List.of("node_to_node_mm", "tolerance_mm", "note", "start_deduction_mm", "end_deduction_mm"));
 
     private BarsReader() {
     }
@@ -66,6 +68,8 @@ public final class BarsReader {
                     "a whole number of bars, at least 1; delete the row if the mark is not in the kit");
             Double nodeToNode = row.length("node_to_node_mm", "a node-to-node length in millimetres above 0");
             Double tolerance = row.number("tolerance_mm", 0, true, "a cut tolerance in millimetres, 0 or more");
+            Double start = deduction(row, "start_deduction_mm");
+            Double end = deduction(row, "end_deduction_mm");
             if (row.blank("length_mm") && row.blank("node_to_node_mm")) {
                 row.problem("length_mm", "the value is blank (expected a cut length in millimetres, or"
                         + " node_to_node_mm to derive it from)");
@@ -87,9 +91,20 @@ public final class BarsReader {
                         + " (expected marks that differ in more than letter case)");
                 continue;
             }
-            bars.add(row.sourced(new BarLine(mark, section, length, quantity, nodeToNode, tolerance,
+            bars.add(row.sourced(new BarLine(mark, section, length, quantity, nodeToNode, tolerance, start, end,
                     row.text("note"), row.clean())));
         }
         return new Rows(bars, everyMarkRead);
+    }
+
+    /** A per-end deduction, 0 or more; it needs a node-to-node length to be deducted from. */
+    private static Double deduction(CsvRow row, String column) {
+        Double value = row.number(column, 0, true, "a deduction in millimetres from the node centre to the tube"
+                + " end, 0 or more");
+        if (!row.blank(column) && row.blank("node_to_node_mm")) {
+            row.problem(column, "a deduction without node_to_node_mm (expected node_to_node_mm to deduct it"
+                    + " from, or a blank " + column + ")");
+        }
+        return value;
     }
 }

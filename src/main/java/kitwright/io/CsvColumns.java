@@ -21,6 +21,11 @@ public record CsvColumns(List<String> required, List<String> optional) {
         return required.contains(column) || optional.contains(column);
     }
 
+    /** The known column a header name stands for in any letter case, or the name as it is when none does. */
+    public String canonical(String name) {
+        return all().stream().filter(c -> c.equalsIgnoreCase(name)).findFirst().orElse(name);
+    }
+
     /** The header as the file should have it, e.g. {@code mark,section,length_mm,quantity}. */
     public String header() {
         return String.join(",", required);

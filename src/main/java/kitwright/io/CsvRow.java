@@ -22,11 +22,24 @@ public final class CsvRow {
     private final Problems problems;
     private int problemCount;
 
+    private final boolean decimalComma;
+
     CsvRow(Path file, int line, Map<String, String> values, Problems problems) {
+        this(file, line, values, problems, false);
+    }
+
+    /** A row whose numbers are written with a decimal comma ({@code 1200,5}) when {@code decimalComma}. */
+    CsvRow(Path file, int line, Map<String, String> values, Problems problems, boolean decimalComma) {
         this.file = file;
         this.line = line;
         this.values = Map.copyOf(values);
         this.problems = problems;
+        this.decimalComma = decimalComma;
+    }
+
+    /** The text of a number with a point as decimal sign: a decimal comma of this file's rows becomes a point. */
+    private String numeral(String text) {
+        return decimalComma && DECIMAL_COMMA.matcher(text).matches() ? text.replace(',', '.') : text;
     }
 
     public Path file() {
@@ -95,12 +108,12 @@ public final class CsvRow {
         if (text.isEmpty()) {
             return null;
         }
-        if (!NUMBER.matcher(text).matches()) {
+        if (!NUMBER.matcher(numeral(text)).matches()) {
             String hint = DECIMAL_COMMA.matcher(text).matches() ? "; use a point for decimals" : "";
             problem(column, "'" + text + "' is not a number (expected " + expected + hint + ")");
             return null;
         }
-        double value = Double.parseDouble(text);
+        double value = Double.parseDouble(numeral(text));
         if (value < minimum || (!minimumAllowed && value == minimum)) {
             String wrong = value < 0 && minimum >= 0 ? "is negative" : value == 0 ? "is zero" : "is too small";
             problem(column, text + " " + wrong + " (expected " + expected + ")");
@@ -134,11 +147,11 @@ public final class CsvRow {
         if (text.isEmpty()) {
             return null;
         }
-        if (!NUMBER.matcher(text).matches()) {
+        if (!NUMBER.matcher(numeral(text)).matches()) {
             problem(column, "'" + text + "' is not a number (expected " + expected + ")");
             return null;
         }
-        BigDecimal value = new BigDecimal(text);
+        BigDecimal value = new BigDecimal(numeral(text));
         if (value.stripTrailingZeros().scale() > 0) {
             problem(column, text + " is not a whole number (expected " + expected + ")");
             return null;

@@ -25,8 +25,11 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
 /**
- * One CSV file read whole and checked against its known columns: UTF-8 (a byte-order mark is accepted),
- * comma-separated, header on line 1 with names matched exactly after trimming. Rows come with the line they start
+ * One CSV file read whole and checked against its known columns: UTF-8 (a byte-order mark is accepted), header on
+ * line 1 with names matched after trimming, in any letter case. Files as spreadsheets save them in either
+ * convention read alike: comma-separated with decimal points, or, as European spreadsheet programs save CSV,
+ * semicolon-separated with decimal commas ({@link CsvDialect} tells which from the file; a file that mixes them is
+ * refused with the line that shows it). Rows come with the line they start
  * on (the header is line 1); blank rows are skipped. Every problem goes to a {@link Problems}; a file whose header
  * cannot be used yields no table.
  */
@@ -118,14 +121,25 @@ public final class CsvTable {
 
     private static Optional<CsvTable> parse(Path file, String text, CsvColumns columns, Problems problems) {
         int[] lineStarts = lineStarts(text);
+        Optional<Character> separator = CsvDialect.separator(file, text, columns, problems);
+        if (separator.isEmpty()) {
+            return Optional.empty();
+        }
         List<CSVRecord> records = new ArrayList<>();
-        try (CSVParser parser = CSVParser.parse(text, FORMAT)) {
+        CSVFormat format = FORMAT.builder().setDelimiter(separator.get()).get();
+        try (CSVParser parser = CSVParser.parse(text, format)) {
             for (CSVRecord record : parser) {
                 records.add(record);
             }
         } catch (IOException | UncheckedIOException e) {
             problems.add(file, brokenLine(e, records, text, lineStarts), "", "the file is not valid CSV: "
                     + describe(e) + " (expected comma-separated values; close every opening quote)");
+            return Optional.empty();
+        }
+        Optional<Boolean> decimalComma = separator.get() == ';' ? CsvDialect.decimalComma(file,
+                records.subList(1, records.size()), r -> lineOf(lineStarts, start(text, r)), problems)
+                : Optional.of(false);
+        if (decimalComma.isEmpty()) {
             return Optional.empty();
         }
         CSVRecord headerRecord = records.get(0);
@@ -164,7 +178,7 @@ public final class CsvTable {
             if (unnamed) {
                 continue;
             }
-            rows.add(new CsvRow(file, line, values, problems));
+            rows.add(new CsvRow(file, line, values, problems, decimalComma.get()));
         }
         return Optional.of(new CsvTable(file, rows, dataRows));
     }
@@ -172,18 +186,8 @@ public final class CsvTable {
     /** Checks the header: separator, duplicates, unknown (with the nearest known name) and missing columns. */
     private static Optional<List<String>> header(Path file, int line, CSVRecord record, CsvColumns columns,
                                                  Problems problems) {
-        List<String> names = record.stream().map(String::trim).toList();
-        if (names.size() == 1) {
-            String only = names.get(0);
-            for (String separator : List.of(";", "\t")) {
-                if (only.contains(separator)) {
-                    String shown = separator.equals("\t") ? "tabs" : "';'";
-                    problems.add(file, line, "", "the file uses " + shown + " to separate columns (expected commas: "
-                            + columns.header() + ")");
-                    return Optional.empty();
-                }
-            }
-        }
+        // Header names in any letter case stand for the known column of that name ("Length_MM" is length_mm).
+        List<String> names = record.stream().map(String::trim).map(columns::canonical).toList();
         int before = problems.count();
         Set<String> seen = new HashSet<>();
         Set<String> suggested = new HashSet<>();

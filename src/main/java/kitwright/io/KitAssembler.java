@@ -14,9 +14,10 @@ import kitwright.model.TubeCatalog;
 
 /**
  * The checks across files that turn bars.csv rows into the kit's marks: each section is in the tube catalog; the
- * cut length is derived from or agrees with the node-to-node length; each bar fits the longest stock length of its
- * section; structures.csv names only known marks; and each quantity covers what the structures need (the largest
- * count any one structure uses, or the sum when the structures stand together).
+ * cut length is derived from or agrees with the node-to-node length minus the deduction at each end
+ * (start_deduction_mm and end_deduction_mm, each over kit.json's endDeductionMm); each bar fits the longest stock
+ * length of its section; structures.csv names only known marks; and each quantity covers what the structures need
+ * (the largest count any one structure uses, or the sum when the structures stand together).
  */
 final class KitAssembler {
     /** Node-to-node and cut length agree within this, in millimetres. */
@@ -75,8 +76,10 @@ final class KitAssembler {
             }
             if (problems.count() == before && quantity != null) {
                 int required = structures.isEmpty() ? quantity : need == null ? 0 : need.count;
+                boolean ends = line.nodeToNodeMm() != null;
                 bars.add(new Bar(line.mark(), line.section(), length, quantity, required, line.nodeToNodeMm(),
-                        line.toleranceMm(), line.note()));
+                        line.toleranceMm(), line.note(), ends ? startDeduction(settings, line) : null,
+                        ends ? endDeduction(settings, line) : null));
             }
         }
         return bars;
@@ -127,13 +130,18 @@ final class KitAssembler {
         if (line.nodeToNodeMm() == null) {
             return line.lengthMm();
         }
-        double deduction = settings.endDeductionMm();
-        double derived = line.nodeToNodeMm() - 2 * deduction;
-        String sum = "node_to_node_mm " + Figures.plain(line.nodeToNodeMm()) + " mm minus 2 x endDeductionMm "
-                + Figures.plain(deduction) + " mm";
+        double start = startDeduction(settings, line);
+        double end = endDeduction(settings, line);
+        double derived = line.nodeToNodeMm() - start - end;
+        String sum = "node_to_node_mm " + Figures.plain(line.nodeToNodeMm()) + " mm minus "
+                + (line.startDeductionMm() == null && line.endDeductionMm() == null
+                ? "2 x endDeductionMm " + Figures.plain(start) + " mm"
+                : deductionName(line.startDeductionMm(), "start_deduction_mm") + " " + Figures.plain(start)
+                        + " mm and " + deductionName(line.endDeductionMm(), "end_deduction_mm") + " "
+                        + Figures.plain(end) + " mm");
         if (derived <= 0) {
             problems.add(sourced.problem("node_to_node_mm", sum + " leaves no bar (expected more than "
-                    + Figures.plain(2 * deduction) + " mm)"));
+                    + Figures.plain(start + end) + " mm)"));
             return null;
         }
         if (line.lengthMm() != null && Math.abs(line.lengthMm() - derived) > LENGTH_AGREEMENT_MM + 1e-9) {
@@ -144,6 +152,20 @@ final class KitAssembler {
             return null;
         }
         return line.lengthMm() != null ? line.lengthMm() : derived;
+    }
+
+    /** The deduction at the bar's start: bars.csv start_deduction_mm, else kit.json's endDeductionMm. */
+    private static double startDeduction(KitSettings settings, BarLine line) {
+        return line.startDeductionMm() != null ? line.startDeductionMm() : settings.endDeductionMm();
+    }
+
+    /** The deduction at the bar's end: bars.csv end_deduction_mm, else kit.json's endDeductionMm. */
+    private static double endDeduction(KitSettings settings, BarLine line) {
+        return line.endDeductionMm() != null ? line.endDeductionMm() : settings.endDeductionMm();
+    }
+
+    private static String deductionName(Double given, String column) {
+        return given != null ? column : "endDeductionMm";
     }
 
     private static void checkSection(KitSettings settings, Sourced<BarLine> sourced, Double length,

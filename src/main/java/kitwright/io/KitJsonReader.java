@@ -19,6 +19,7 @@ import java.util.Map;
 import java.util.Optional;
 import kitwright.model.JointBox;
 import kitwright.model.KitSettings;
+import kitwright.model.MiscutAllowance;
 import kitwright.model.NestTolerance;
 import kitwright.model.SparesPolicy;
 
@@ -32,9 +33,10 @@ public final class KitJsonReader {
     public static final List<String> KEYS = List.of("name", "description", "stockCatalog", "materials",
             "crateCatalog", "vehicleCatalog", "kerfMm", "trimMm", "minRemnantMm", "timeLimitSeconds",
             "structuresStandTogether", "endDeductionMm", "nestTolerance", "nestClearanceMm", "nestEndAllowanceMm",
-            "maxBundleMassKg", "jointBox", "spares");
+            "maxBundleMassKg", "jointBox", "spares", "miscutAllowance");
     static final List<String> JOINT_BOX_KEYS = List.of("lengthMm", "widthMm", "heightMm", "maxMassKg");
     static final List<String> SPARES_KEYS = List.of("lossRatePerCycle", "cycles", "serviceLevel");
+    static final List<String> MISCUT_ALLOWANCE_KEYS = List.of("piecesPerMark", "percent");
 
     private static final ObjectMapper MAPPER = JsonMapper.builder()
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -143,7 +145,8 @@ public final class KitJsonReader {
         JointBox jointBox = jointBox(json, root);
         SparesPolicy spares = spares(json, root);
         KitSettings settings = new KitSettings(name, description, kerf, trim, minRemnant, timeLimit, together,
-                endDeduction, tolerance, clearance, endAllowance, maxBundle, jointBox, spares);
+                endDeduction, tolerance, clearance, endAllowance, maxBundle, jointBox, spares,
+                miscutAllowance(json, root));
         return new KitJson(settings, stock, materials, crates, vehicles);
     }
 
@@ -183,6 +186,21 @@ public final class KitJsonReader {
             return null;
         }
         return new SparesPolicy(loss.get(), cycles.get(), level.get());
+    }
+
+    /** The miscut allowance; both keys are optional, and a wrong one counts as 0 so the rest is still checked. */
+    private static MiscutAllowance miscutAllowance(KitJsonValues json, JsonNode root) {
+        JsonNode allowance = json.object(root, "miscutAllowance", "an object {piecesPerMark, percent}");
+        if (allowance == null) {
+            return MiscutAllowance.NONE;
+        }
+        String prefix = "miscutAllowance.";
+        json.unknownKeys(allowance, prefix, MISCUT_ALLOWANCE_KEYS);
+        int pieces = json.whole(allowance, prefix, "piecesPerMark", 0, Limits.MAX_COUNT,
+                "a whole number of extra pieces per mark, 0 or more").orElse(0);
+        double percent = json.number(allowance, prefix, "percent", 0, true, 100,
+                "a share of each mark's quantity in percent, from 0 to 100").orElse(0.0);
+        return new MiscutAllowance(pieces, percent);
     }
 
     /** Records the line of every key, as a JSON pointer (e.g. {@code /jointBox/lengthMm}). */

@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.Optional;
 import kitwright.model.Bar;
 import kitwright.model.CrateType;
+import kitwright.model.InputFiles;
 import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
@@ -81,7 +82,10 @@ public final class KitReader {
                 lineOf(kitJsonFile, "\"kerfMm\""), "kerfMm", message));
         problems.throwIfAny();
         return new Kit(kitDir, settings, bars, structures.stream().map(Sourced::value).toList(), joints, catalog,
-                materials == null ? Map.of() : materials, crates, vehicles);
+                materials == null ? Map.of() : materials, crates, vehicles, new InputFiles(
+                        materials == null ? null : kitJson.materialsFile(),
+                        crates.isEmpty() ? null : kitJson.crateCatalogFile(),
+                        vehicles.isEmpty() ? null : kitJson.vehicleCatalogFile()));
     }
 
     /**
@@ -99,7 +103,8 @@ public final class KitReader {
         List<Bar> bars = KitAssembler.marks(settings, lines, List.of(), catalog, problems);
         problems.throwIfAny();
         return new Kit(null, settings, bars, List.of(), List.of(), catalog,
-                materials == null ? Map.of() : materials, List.of(), List.of());
+                materials == null ? Map.of() : materials, List.of(), List.of(),
+                new InputFiles(materialsFile, null, null));
     }
 
     /**

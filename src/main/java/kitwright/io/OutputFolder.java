@@ -158,10 +158,15 @@ public final class OutputFolder implements AutoCloseable {
 
     /** Writes a UTF-8 text file of the result, creating sub-folders as needed. */
     public Path write(String name, String text) throws IOException {
+        return write(name, text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** Writes a file of the result (e.g. a workbook), creating sub-folders as needed. */
+    public Path write(String name, byte[] content) throws IOException {
         Path file = resolve(name);
         try {
             Files.createDirectories(file.getParent());
-            return Files.writeString(file, text, StandardCharsets.UTF_8);
+            return Files.write(file, content);
         } catch (FileSystemException e) {
             throw e;
         } catch (IOException e) {

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import kitwright.cutting.Deadline;
+import kitwright.ids.IdScheme;
 import kitwright.model.CrateType;
 import kitwright.model.Status;
 import kitwright.model.VehicleType;
@@ -26,7 +27,8 @@ import kitwright.packing.PatternCover;
  * FEASIBLE with the reason "stopped by the time limit" when the stage's deadline, not a work limit, cut a step
  * short; INFEASIBLE when a crate fits no vehicle type (the reason names it). Crates of types missing from the crate
  * catalog are treated as not stackable. Loads start at the front of the deck; the centre of gravity is reported,
- * not balanced, and axle loads and load securing (EN 12195-1) are not checked.
+ * not balanced, and axle loads and load securing (EN 12195-1) are not checked. Loads take the trip ids of the kit's
+ * {@link IdScheme} (TRIP-1, TRIP-2, ... unless a mark reads like them).
  */
 public final class RowLoadPlanner implements LoadPlanner {
     private static final double EPS = 1e-6;
@@ -41,14 +43,22 @@ public final class RowLoadPlanner implements LoadPlanner {
     }
 
     private final Limits limits;
+    private final IdScheme ids;
     private final DeckFiller filler = new DeckFiller();
 
     public RowLoadPlanner() {
         this(Limits.DEFAULT);
     }
 
+    /** Trip ids of the first-choice stems: a crate plan holds no marks to avoid. */
     public RowLoadPlanner(Limits limits) {
+        this(limits, IdScheme.FIRST_CHOICE);
+    }
+
+    /** Trip ids of the kit's scheme ({@link IdScheme#of}). */
+    public RowLoadPlanner(Limits limits, IdScheme ids) {
         this.limits = limits;
+        this.ids = java.util.Objects.requireNonNull(ids, "ids");
     }
 
     @Override
@@ -105,7 +115,7 @@ public final class RowLoadPlanner implements LoadPlanner {
         }
         decks = downsize(decks, vehicles, cost, classes);
 
-        List<VehicleLoad> loads = realise(decks, vehicles, classes, members);
+        List<VehicleLoad> loads = realise(decks, vehicles, classes, members, ids);
         double tripCost = VehicleChoice.total(decks, cost);
         double relaxation = FleetCostBound.compute(classes, vehicles, cost);
         double whole = WholeVehicleBound.compute(classes, vehicles, cost, deadline);
@@ -202,7 +212,7 @@ public final class RowLoadPlanner implements LoadPlanner {
     }
 
     private static List<VehicleLoad> realise(List<DeckLayout> decks, List<VehicleType> vehicles,
-                                             List<CrateClass> classes, List<List<Crate>> members) {
+                                             List<CrateClass> classes, List<List<Crate>> members, IdScheme ids) {
         int[] next = new int[classes.size()];
         List<VehicleLoad> loads = new ArrayList<>();
         for (DeckLayout d : decks) {
@@ -218,7 +228,7 @@ public final class RowLoadPlanner implements LoadPlanner {
                 moment += crate.grossKg() * (s.x() + c.alongDeck(s.rotated()) / 2);
             }
             double centre = mass > 0 ? moment / mass : 0;
-            loads.add(new VehicleLoad("V" + (loads.size() + 1), v.name(), v.deckLengthMm(), v.deckWidthMm(),
+            loads.add(new VehicleLoad(ids.trip(loads.size() + 1), v.name(), v.deckLengthMm(), v.deckWidthMm(),
                     v.deckHeightMm(), v.payloadKg(), mass, centre, placed, v.costPerTrip(), d.floorLengthMm()));
         }
         return loads;

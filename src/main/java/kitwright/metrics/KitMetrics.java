@@ -8,8 +8,9 @@ import java.util.List;
  *
  * @param marks            bar types in the kit
  * @param bars             bars in the kit (bars.csv quantities, surplus included)
- * @param members          members in all structures (structures.csv counts; without it, the bars the kit needs)
- * @param reuseRatio       members / bars (src/docs/sources.md: 750 members on 300 bars is 2.5)
+ * @param members          members in all structures (structures.csv counts), null without structures.csv
+ * @param reuseRatio       members / bars (src/docs/sources.md: 750 members on 300 bars is 2.5), null without
+ *                         structures.csv: without structures there is no reuse to count
  * @param stockPieces      stock pieces cut, mill and rack
  * @param boughtPieces     mill pieces bought
  * @param stockLengthMm    length of all stock pieces cut, mill and rack
@@ -19,14 +20,18 @@ import java.util.List;
  * @param offcutPct        offcut length / stockLengthMm * 100 (offcut = remnant + scrap; kerf and trim not included)
  * @param scrapPct         scrap offcuts (shorter than minRemnant) / stockLengthMm * 100
  * @param remnantPct       remnant offcuts (back on the rack) / stockLengthMm * 100
- * @param kitMassKg        mass of the kit's bars and joints, null without materials
+ * @param kitMassKg        mass of the kit's bars, spares cut included, and joints ({@link KitMass}), null without
+ *                         materials
  * @param boughtMassKg     mass of the mill stock bought, null without materials
+ * @param usedStockMassKg  mass of all stock cut: the mill stock bought and the rack offcuts taken, null without
+ *                         materials
  * @param co2eKg           embodied carbon of the mill stock bought, null without materials
  * @param carbon           embodied carbon per material, in the order materials first appear in the catalog
  */
-public record KitMetrics(int marks, int bars, int members, double reuseRatio, int stockPieces, int boughtPieces,
+public record KitMetrics(int marks, int bars, Integer members, Double reuseRatio, int stockPieces, int boughtPieces,
                          double stockLengthMm, double boughtLengthMm, Double cost, double offcutPct, double scrapPct,
-                         double remnantPct, Double kitMassKg, Double boughtMassKg, Double co2eKg,
+                         double remnantPct, Double kitMassKg, Double boughtMassKg,
+                         Double usedStockMassKg, Double co2eKg,
                          List<MaterialCarbon> carbon) {
     public KitMetrics {
         carbon = List.copyOf(carbon);

@@ -8,7 +8,6 @@ import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
-import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.Material;
 import kitwright.model.Origin;
@@ -20,7 +19,10 @@ import kitwright.model.StructureCount;
  * Computes {@link KitMetrics} from a kit and its cutting plan.
  *
  * <ul>
- *   <li>Reuse ratio = members in all structures / bars in the kit (src/docs/sources.md, Reuse and spares).</li>
+ *   <li>Reuse ratio = members in all structures / bars in the kit (src/docs/sources.md, Reuse and spares); none
+ *       (null) without structures.csv, as the kit summary has it.</li>
+ *   <li>Kit mass: {@link KitMass}, the bars of bars.csv and the spares the plan cuts, plus the joints. Used stock
+ *       mass: every stock piece cut, mill and rack; bought mass: the mill pieces only.</li>
  *   <li>Embodied carbon is counted on the stock bought, not on the kit: bought mass = sum over mill pieces of
  *       length x mass per metre (M = pi (D - T) T rho 1e-6 kg/m, the EN 10219-2 formula), times the material's
  *       factor from materials.csv. Rack offcuts carry no new carbon: it was counted when they were bought.</li>
@@ -38,7 +40,7 @@ public final class KitMetricsCalculator {
     /** Metrics of a kit and its cutting plan. Infeasible sections contribute no stock. */
     public static KitMetrics of(Kit kit, CutPlan plan) {
         int bars = kit.bars().stream().mapToInt(Bar::quantity).sum();
-        int members = members(kit);
+        Integer members = members(kit);
         int stockPieces = 0;
         int boughtPieces = 0;
         double stockLength = 0;
@@ -47,6 +49,7 @@ public final class KitMetricsCalculator {
         double scrap = 0;
         double remnant = 0;
         boolean massKnown = !kit.materials().isEmpty();
+        double usedMass = 0;
         Map<String, double[]> boughtMassByMaterial = new LinkedHashMap<>();
         for (SectionCutPlan section : plan.sections()) {
             Optional<Section> sectionInfo = kit.catalog().section(section.section());
@@ -59,17 +62,19 @@ public final class KitMetricsCalculator {
                 } else {
                     scrap += p.count() * p.offcutMm();
                 }
+                Optional<Material> material = sectionInfo.flatMap(kit::material);
+                if (material.isEmpty()) {
+                    massKnown = false;
+                }
+                double mass = material.isEmpty() ? 0 : p.count() * p.stockLengthMm() / 1000.0
+                        * sectionInfo.get().massPerMetreKg(material.get().densityKgM3());
+                usedMass += mass;
                 if (p.origin() == Origin.MILL) {
                     boughtPieces += p.count();
                     boughtLength += p.count() * p.stockLengthMm();
-                    Optional<Material> material = sectionInfo.flatMap(kit::material);
-                    if (material.isEmpty()) {
-                        massKnown = false;
-                        continue;
+                    if (material.isPresent()) {
+                        boughtMassByMaterial.computeIfAbsent(material.get().name(), k -> new double[1])[0] += mass;
                     }
-                    double mass = p.count() * p.stockLengthMm() / 1000.0
-                            * sectionInfo.get().massPerMetreKg(material.get().densityKgM3());
-                    boughtMassByMaterial.computeIfAbsent(material.get().name(), k -> new double[1])[0] += mass;
                 }
             }
         }
@@ -82,34 +87,20 @@ public final class KitMetricsCalculator {
                 .toList();
         Double boughtMass = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::boughtMassKg).sum() : null;
         Double co2e = massKnown ? carbon.stream().mapToDouble(MaterialCarbon::co2eKg).sum() : null;
-        return new KitMetrics(kit.bars().size(), bars, members, bars == 0 ? 0 : (double) members / bars,
+        Double reuseRatio = members == null || bars == 0 ? null : (double) members / bars;
+        return new KitMetrics(kit.bars().size(), bars, members, reuseRatio,
                 stockPieces, boughtPieces, stockLength, boughtLength, stockCost(kit, plan),
                 percent(offcut, stockLength), percent(scrap, stockLength), percent(remnant, stockLength),
-                kitMass(kit).orElse(null), boughtMass, co2e, massKnown ? carbon : List.of());
+                KitMass.of(kit, plan).totalKg(), boughtMass, massKnown ? usedMass : null, co2e,
+                massKnown ? carbon : List.of());
     }
 
-    /** Members in all structures: the sum of structures.csv counts, or the bars the kit needs without it. */
-    public static int members(Kit kit) {
+    /** Members in all structures: the sum of structures.csv counts, or null without structures.csv. */
+    public static Integer members(Kit kit) {
         if (kit.structures().isEmpty()) {
-            return kit.bars().stream().mapToInt(Bar::requiredQuantity).sum();
+            return null;
         }
         return kit.structures().stream().mapToInt(StructureCount::count).sum();
-    }
-
-    /** Mass of the kit's bars (quantity x cut length x mass per metre) plus its joints, when materials are known. */
-    public static Optional<Double> kitMass(Kit kit) {
-        double mass = 0;
-        for (Bar bar : kit.bars()) {
-            Optional<Double> one = kit.barMassKg(bar);
-            if (one.isEmpty()) {
-                return Optional.empty();
-            }
-            mass += bar.quantity() * one.get();
-        }
-        for (Joint joint : kit.joints()) {
-            mass += joint.quantity() * joint.massKg();
-        }
-        return Optional.of(mass);
     }
 
     /**

@@ -9,10 +9,23 @@ package kitwright.model;
  * @param nodeToNodeMm     designer's node-to-node length, or null
  * @param toleranceMm      cut length tolerance (plus or minus), or null
  * @param note             free text, or empty
+ * @param startDeductionMm node centre to the bar's start (bars.csv start_deduction_mm, else kit.json's
+ *                         endDeductionMm), or null without a node-to-node length
+ * @param endDeductionMm   node centre to the bar's end, likewise, or null
  */
 public record Bar(String mark, String section, double lengthMm, int quantity, int requiredQuantity,
-                  Double nodeToNodeMm, Double toleranceMm, String note) {
+                  Double nodeToNodeMm, Double toleranceMm, String note, Double startDeductionMm,
+                  Double endDeductionMm) {
+    /** A bar whose end deductions are not known (no node-to-node length, or a bar made from another). */
+    public Bar(String mark, String section, double lengthMm, int quantity, int requiredQuantity,
+               Double nodeToNodeMm, Double toleranceMm, String note) {
+        this(mark, section, lengthMm, quantity, requiredQuantity, nodeToNodeMm, toleranceMm, note, null, null);
+    }
+
     public Bar {
+        if ((startDeductionMm == null) != (endDeductionMm == null)) {
+            throw new IllegalArgumentException("both end deductions or neither for " + mark);
+        }
         if (lengthMm <= 0) {
             throw new IllegalArgumentException("length must be positive for " + mark);
         }

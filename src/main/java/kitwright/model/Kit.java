@@ -13,12 +13,21 @@ import java.util.Optional;
  * @param materials materials by name; empty when no materials file was given (masses are then unknown)
  * @param crates    crate catalog, empty when none was found
  * @param vehicles  vehicle catalog, empty when none was found
+ * @param files     the other catalog files read (for the report's inputs)
  */
 public record Kit(Path dir, KitSettings settings, List<Bar> bars, List<StructureCount> structures,
                   List<Joint> joints, TubeCatalog catalog, Map<String, Material> materials,
-                  List<CrateType> crates, List<VehicleType> vehicles) {
+                  List<CrateType> crates, List<VehicleType> vehicles, InputFiles files) {
+
+    /** A kit whose other catalog files are not known (built in memory). */
+    public Kit(Path dir, KitSettings settings, List<Bar> bars, List<StructureCount> structures, List<Joint> joints,
+               TubeCatalog catalog, Map<String, Material> materials, List<CrateType> crates,
+               List<VehicleType> vehicles) {
+        this(dir, settings, bars, structures, joints, catalog, materials, crates, vehicles, InputFiles.NONE);
+    }
 
     public Kit {
+        files = files == null ? InputFiles.NONE : files;
         bars = List.copyOf(bars);
         structures = List.copyOf(structures);
         joints = List.copyOf(joints);
@@ -44,6 +53,14 @@ public record Kit(Path dir, KitSettings settings, List<Bar> bars, List<Structure
         return Optional.ofNullable(materials.get(section.material()));
     }
 
+    /**
+     * Pieces of a mark cut beyond its quantity for saw errors (kit.json {@code miscutAllowance}): part of the
+     * cutting demand, bundled, crated and weighed with the kit; service-life spares come on top.
+     */
+    public int allowance(Bar bar) {
+        return settings.miscutAllowance().piecesFor(bar.quantity());
+    }
+
     /** Mass of one bar of a mark, when its material is known. */
     public Optional<Double> barMassKg(Bar bar) {
         Section s = section(bar);
@@ -59,6 +76,6 @@ public record Kit(Path dir, KitSettings settings, List<Bar> bars, List<Structure
 
     /** Copy with other settings (command-line overrides). */
     public Kit withSettings(KitSettings other) {
-        return new Kit(dir, other, bars, structures, joints, catalog, materials, crates, vehicles);
+        return new Kit(dir, other, bars, structures, joints, catalog, materials, crates, vehicles, files);
     }
 }

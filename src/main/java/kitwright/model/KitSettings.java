@@ -16,11 +16,13 @@ package kitwright.model;
  * @param maxBundleMassKg         hard limit on a bundle's mass, or null for none
  * @param jointBox                the box joints travel in
  * @param spares                  service-life spares policy, or null for none
+ * @param miscutAllowance         extra pieces per mark for saw errors [none]
  */
 public record KitSettings(String name, String description, double kerfMm, double trimMm, double minRemnantMm,
                           double timeLimitSeconds, boolean structuresStandTogether, double endDeductionMm,
                           NestTolerance nestTolerance, double nestClearanceMm, double nestEndAllowanceMm,
-                          Double maxBundleMassKg, JointBox jointBox, SparesPolicy spares) {
+                          Double maxBundleMassKg, JointBox jointBox, SparesPolicy spares,
+                          MiscutAllowance miscutAllowance) {
 
     public static final double DEFAULT_KERF_MM = 2.0;
     public static final double DEFAULT_TRIM_MM = 5.0;
@@ -33,42 +35,59 @@ public record KitSettings(String name, String description, double kerfMm, double
         description = description == null ? "" : description;
         nestTolerance = nestTolerance == null ? NestTolerance.WORST_CASE : nestTolerance;
         jointBox = jointBox == null ? JointBox.DEFAULT : jointBox;
+        miscutAllowance = miscutAllowance == null ? MiscutAllowance.NONE : miscutAllowance;
+    }
+
+    /** Settings without a miscut allowance. */
+    public KitSettings(String name, String description, double kerfMm, double trimMm, double minRemnantMm,
+                       double timeLimitSeconds, boolean structuresStandTogether, double endDeductionMm,
+                       NestTolerance nestTolerance, double nestClearanceMm, double nestEndAllowanceMm,
+                       Double maxBundleMassKg, JointBox jointBox, SparesPolicy spares) {
+        this(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds, structuresStandTogether,
+                endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm, maxBundleMassKg, jointBox, spares,
+                MiscutAllowance.NONE);
     }
 
     /** All defaults, for a kit of the given name. */
     public static KitSettings defaults(String name) {
         return new KitSettings(name, "", DEFAULT_KERF_MM, DEFAULT_TRIM_MM, DEFAULT_MIN_REMNANT_MM,
                 DEFAULT_TIME_LIMIT_SECONDS, false, 0, NestTolerance.WORST_CASE, DEFAULT_NEST_CLEARANCE_MM,
-                DEFAULT_NEST_END_ALLOWANCE_MM, null, JointBox.DEFAULT, null);
+                DEFAULT_NEST_END_ALLOWANCE_MM, null, JointBox.DEFAULT, null, MiscutAllowance.NONE);
     }
 
     public KitSettings withKerfMm(double value) {
         return new KitSettings(name, description, value, trimMm, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares);
+                maxBundleMassKg, jointBox, spares, miscutAllowance);
     }
 
     public KitSettings withTrimMm(double value) {
         return new KitSettings(name, description, kerfMm, value, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares);
+                maxBundleMassKg, jointBox, spares, miscutAllowance);
     }
 
     public KitSettings withMinRemnantMm(double value) {
         return new KitSettings(name, description, kerfMm, trimMm, value, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares);
+                maxBundleMassKg, jointBox, spares, miscutAllowance);
     }
 
     public KitSettings withTimeLimitSeconds(double value) {
         return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, value,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares);
+                maxBundleMassKg, jointBox, spares, miscutAllowance);
     }
 
     public KitSettings withNestTolerance(NestTolerance value) {
         return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, value, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares);
+                maxBundleMassKg, jointBox, spares, miscutAllowance);
+    }
+
+    public KitSettings withMiscutAllowance(MiscutAllowance value) {
+        return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds,
+                structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
+                maxBundleMassKg, jointBox, spares, value);
     }
 }

@@ -1,6 +1,5 @@
 package kitwright.natives;
 
-import com.sun.jna.Platform;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.lang.reflect.Field;
@@ -53,7 +52,8 @@ public final class SolverLibraries {
         Path tmp = Path.of(System.getProperty("java.io.tmpdir"));
         StaleCopies.clean(tmp, Instant.now(), StaleCopies::mappedFolders);
         try {
-            NativeFiles files = NativeFiles.find(Platform.RESOURCE_PREFIX);
+            String platform = NativePlatform.current();
+            NativeFiles files = NativeFiles.find(platform);
             Path root = NativeCache.root(System.getenv(), System.getProperty("user.home"));
             Path dir;
             try {
@@ -63,7 +63,7 @@ public final class SolverLibraries {
                         + "); unpacking the solver libraries to a temporary folder deleted at exit");
                 dir = fallback(tmp, files);
             }
-            loadFrom(dir, Platform.RESOURCE_PREFIX.startsWith("win32"));
+            loadFrom(dir, platform.startsWith("win32"));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot load the OR-Tools solver libraries: " + reason(e), e);
         }

@@ -3,13 +3,13 @@ package kitwright.nesting;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
 import kitwright.model.NestTolerance;
 
 /**
  * Turns placements into the plan.json records: one {@link Bundle} per bundle's host, guests nested under their
- * hosts. Bundles are ordered widest host first, then longest, then by mark and layout, and numbered B001, B002, ...
- * in that order; guests are ordered by offset, then centre. Same input, same bytes.
+ * hosts. Bundles are ordered widest host first, then longest, then by mark and layout, and numbered in that order
+ * with the problem's bundle ids (BDL-1, BDL-2, ... unless a mark reads like them, {@link kitwright.ids.IdScheme});
+ * guests are ordered by offset, then centre. Same input, same bytes.
  */
 final class NestPlanAssembler {
     private NestPlanAssembler() {
@@ -38,11 +38,10 @@ final class NestPlanAssembler {
                 .thenComparing(Comparator.comparingDouble(Bundle::lengthMm).reversed())
                 .thenComparing(b -> b.host().mark())
                 .thenComparing(b -> b.host().toString()));
-        int width = Math.max(3, String.valueOf(unnamed.size()).length());
         List<Bundle> bundles = new ArrayList<>();
         for (int i = 0; i < unnamed.size(); i++) {
             Bundle b = unnamed.get(i);
-            String id = String.format(Locale.ROOT, "B%0" + width + "d", i + 1);
+            String id = problem.ids().bundle(i + 1);
             bundles.add(new Bundle(id, b.lengthMm(), b.envelopeDiameterMm(), b.massKg(), b.host()));
         }
         return new NestPlan(tolerance, problem.clearanceMm(), solution.status(), solution.lowerBound(), bundles);

@@ -2,6 +2,7 @@ package kitwright.nesting;
 
 import java.util.List;
 import kitwright.cutting.CutPlan;
+import kitwright.ids.IdScheme;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
 
@@ -24,7 +25,7 @@ public final class Nester {
         FitRule rule = new FitRule(s.nestTolerance(), s.nestClearanceMm());
         List<Tube> tubes = TubeList.of(kit, cutPlan, rule);
         NestingProblem problem = new NestingProblem(tubes, s.nestClearanceMm(), s.nestEndAllowanceMm(),
-                s.maxBundleMassKg());
+                s.maxBundleMassKg(), IdScheme.of(kit));
         return run(problem, rule, options);
     }
 

@@ -1,6 +1,8 @@
 package kitwright.nesting;
 
 import java.util.List;
+import java.util.Objects;
+import kitwright.ids.IdScheme;
 
 /**
  * The tubes to nest and the rules they are nested by.
@@ -9,10 +11,13 @@ import java.util.List;
  * @param clearanceMm     diametral clearance kept between a host's bore and each guest
  * @param endAllowanceMm  length at each end of a host kept free of guests
  * @param maxBundleMassKg hard limit on a bundle's mass, or null for none
+ * @param ids             the kit's id scheme, whose bundle ids the plan's bundles take
  */
-public record NestingProblem(List<Tube> tubes, double clearanceMm, double endAllowanceMm, Double maxBundleMassKg) {
+public record NestingProblem(List<Tube> tubes, double clearanceMm, double endAllowanceMm, Double maxBundleMassKg,
+                             IdScheme ids) {
     public NestingProblem {
         tubes = List.copyOf(tubes);
+        Objects.requireNonNull(ids, "ids");
         for (int i = 0; i < tubes.size(); i++) {
             if (tubes.get(i).id() != i) {
                 throw new IllegalArgumentException("tube " + i + " has id " + tubes.get(i).id());
@@ -24,6 +29,12 @@ public record NestingProblem(List<Tube> tubes, double clearanceMm, double endAll
         if (maxBundleMassKg != null && !(maxBundleMassKg > 0)) {
             throw new IllegalArgumentException("bundle mass limit must be positive: " + maxBundleMassKg);
         }
+    }
+
+    /** Tubes without a kit: bundle ids avoid the tubes' marks. */
+    public NestingProblem(List<Tube> tubes, double clearanceMm, double endAllowanceMm, Double maxBundleMassKg) {
+        this(tubes, clearanceMm, endAllowanceMm, maxBundleMassKg,
+                IdScheme.avoiding(tubes.stream().map(Tube::mark).toList()));
     }
 
     /** True when {@code guest} fits {@code host}'s bore with the clearance and its usable length. */

@@ -5,18 +5,21 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import kitwright.cutting.Deadline;
+import kitwright.ids.IdScheme;
 import kitwright.model.CrateType;
 import kitwright.model.Joint;
 import kitwright.model.JointBox;
 import kitwright.model.Status;
 import kitwright.nesting.Bundle;
+import kitwright.nesting.NestedTube;
 
 /**
  * Crating by lanes and rows: joints into boxes ({@link ShelfJointBoxer}), then bundles and boxes into crates
  * ({@link CrateFiller} builds each crate, {@link CrateChoice} picks the crate mix of least total price, then fewest
  * crates). Without prices on every crate type the count alone is minimised. Surplus places of the chosen patterns
  * are left empty, {@link CrateElimination} then empties what crates it can into the others, and each crate moves to
- * the cheapest type that still holds exactly its contents.
+ * the cheapest type that still holds exactly its contents. Crates and joint boxes take the ids of the kit's
+ * {@link IdScheme} (CRT-1, BOX-1, ... unless a mark reads like them).
  *
  * <p>Status: OPTIMAL when the count meets the proven count bound and the price meets the price bound
  * ({@link CrateLowerBounds}); else FEASIBLE with the gap. INFEASIBLE when an item fits no crate type, with the
@@ -50,23 +53,32 @@ public final class LaneCratePacker implements CratePacker {
     }
 
     private final Limits limits;
-    private final JointBoxer boxer = new ShelfJointBoxer();
+    /** The kit's id scheme, or null to choose one from the marks of the bundles and joints packed. */
+    private final IdScheme ids;
     private final CrateFiller filler = new CrateFiller();
 
     public LaneCratePacker() {
         this(Limits.DEFAULT);
     }
 
+    /** Ids that read like none of the marks packed. */
     public LaneCratePacker(Limits limits) {
+        this(limits, null);
+    }
+
+    /** Crate and joint box ids of the kit's scheme ({@link IdScheme#of}). */
+    public LaneCratePacker(Limits limits, IdScheme ids) {
         this.limits = limits;
+        this.ids = ids;
     }
 
     @Override
     public CratePlan pack(List<Bundle> bundles, List<Joint> joints, List<CrateType> crates, JointBox jointBox) {
         Deadline deadline = Deadline.in(limits.safetySeconds());
+        IdScheme ids = this.ids != null ? this.ids : IdScheme.avoiding(marks(bundles, joints));
         List<JointBoxLoad> boxes;
         try {
-            boxes = boxer.box(joints, jointBox == null ? JointBox.DEFAULT : jointBox);
+            boxes = new ShelfJointBoxer(ids).box(joints, jointBox == null ? JointBox.DEFAULT : jointBox);
         } catch (IllegalArgumentException e) {
             return CratePlan.infeasible(e.getMessage());
         }
@@ -94,7 +106,7 @@ public final class LaneCratePacker implements CratePacker {
         List<CrateLayout> fewer = new CrateElimination(ELIMINATION_BUDGET, deadline).improve(layouts, crates, cost,
                 items.types());
         layouts = downsize(fewer, crates, cost, items.types());
-        List<Crate> result = realise(layouts, crates, items);
+        List<Crate> result = realise(layouts, crates, items, ids);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
         CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price, deadline);
         boolean optimal = result.size() <= bounds.crates()
@@ -102,6 +114,20 @@ public final class LaneCratePacker implements CratePacker {
         // a step the deadline cut short makes the plan depend on the machine's speed: say so, as cutting does
         return new CratePlan(optimal ? Status.OPTIMAL : Status.FEASIBLE, bounds.crates(), result, boxes, bounds,
                 !optimal && deadline.struck() ? Deadline.STOPPED_BY_TIME_LIMIT : null);
+    }
+
+    /** The marks of every tube of the bundles and of the joints. */
+    private static List<String> marks(List<Bundle> bundles, List<Joint> joints) {
+        List<String> marks = new ArrayList<>();
+        java.util.ArrayDeque<NestedTube> open = new java.util.ArrayDeque<>();
+        bundles.forEach(b -> open.add(b.host()));
+        while (!open.isEmpty()) {
+            NestedTube t = open.poll();
+            marks.add(t.mark());
+            open.addAll(t.guests());
+        }
+        joints.forEach(j -> marks.add(j.mark()));
+        return marks;
     }
 
     /** The first item no crate type can take, as a reason; null when every item fits somewhere. */
@@ -267,7 +293,8 @@ public final class LaneCratePacker implements CratePacker {
     }
 
     /** Concrete crates: each place takes the next item of its type, in input order. */
-    private static List<Crate> realise(List<CrateLayout> layouts, List<CrateType> crates, ItemTypes items) {
+    private static List<Crate> realise(List<CrateLayout> layouts, List<CrateType> crates, ItemTypes items,
+                                       IdScheme ids) {
         int[] next = new int[items.types().size()];
         List<Crate> result = new ArrayList<>();
         for (CrateLayout l : layouts) {
@@ -278,7 +305,7 @@ public final class LaneCratePacker implements CratePacker {
                 placed.add(new CrateItem(t.kind(), ref, s.x(), s.y(), s.z(), s.length(), s.width(), s.height(),
                         t.massKg()));
             }
-            result.add(Crate.of("C" + (result.size() + 1), crates.get(l.crateType()), placed));
+            result.add(Crate.of(ids.crate(result.size() + 1), crates.get(l.crateType()), placed));
         }
         return result;
     }

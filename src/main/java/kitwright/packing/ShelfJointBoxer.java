@@ -3,6 +3,7 @@ package kitwright.packing;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import kitwright.ids.IdScheme;
 import kitwright.model.Joint;
 import kitwright.model.JointBox;
 
@@ -14,14 +15,31 @@ import kitwright.model.JointBox;
  * limit allows. Marks go largest diameter first; a mark's last, partly filled box takes the next marks' rows
  * (next-fit shelves: a layer is as high as its first row, later rows are no wider).
  *
+ * Boxes are numbered in the order they are filled, with the joint box ids of an {@link IdScheme} (BOX-1, BOX-2,
+ * ... unless a mark reads like them).
+ *
  * <p>Guarantee: every box holds its rows inside its walls and no more than its mass limit.
  * Source: the square-grid and Kepler densities are textbook (Hales 2005 proved Kepler's bound).
  */
 public final class ShelfJointBoxer implements JointBoxer {
     private static final double EPS = 1e-9;
 
+    /** The kit's id scheme, or null to choose one from the joints' marks alone. */
+    private final IdScheme ids;
+
+    /** Box ids that read like none of the joints' marks. */
+    public ShelfJointBoxer() {
+        this(null);
+    }
+
+    /** Box ids of the kit's scheme ({@link IdScheme#of}). */
+    public ShelfJointBoxer(IdScheme ids) {
+        this.ids = ids;
+    }
+
     @Override
     public List<JointBoxLoad> box(List<Joint> joints, JointBox box) {
+        IdScheme ids = this.ids != null ? this.ids : IdScheme.avoiding(joints.stream().map(Joint::mark).toList());
         List<Joint> sorted = joints.stream().filter(j -> j.quantity() > 0)
                 .sorted(Comparator.comparingDouble(Joint::diameterMm).reversed().thenComparing(Joint::mark))
                 .toList();
@@ -48,17 +66,17 @@ public final class ShelfJointBoxer implements JointBoxer {
                     open.add(j, placed);
                     left -= placed;
                     if (placed < row) {
-                        result.add(open.close(result.size() + 1, box));
+                        result.add(open.close(ids.jointBox(result.size() + 1), box));
                         open = new Filling();
                     }
                 } else {
-                    result.add(open.close(result.size() + 1, box));
+                    result.add(open.close(ids.jointBox(result.size() + 1), box));
                     open = new Filling();
                 }
             }
         }
         if (!open.counts.isEmpty()) {
-            result.add(open.close(result.size() + 1, box));
+            result.add(open.close(ids.jointBox(result.size() + 1), box));
         }
         return List.copyOf(result);
     }
@@ -104,8 +122,8 @@ public final class ShelfJointBoxer implements JointBoxer {
             }
         }
 
-        JointBoxLoad close(int number, JointBox box) {
-            return new JointBoxLoad("JB" + number, box.lengthMm(), box.widthMm(), box.heightMm(), counts, massKg);
+        JointBoxLoad close(String id, JointBox box) {
+            return new JointBoxLoad(id, box.lengthMm(), box.widthMm(), box.heightMm(), counts, massKg);
         }
     }
 }

@@ -7,11 +7,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import kitwright.metrics.KitMass;
 import kitwright.model.Bar;
-import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.Section;
 import kitwright.model.StructureCount;
+import kitwright.spares.SparesPlan;
+import kitwright.spares.SparesStage;
 
 /**
  * What a kit holds, before anything is planned: marks, bars, cut length and mass per section, joints, the members
@@ -20,15 +22,20 @@ import kitwright.model.StructureCount;
  *
  * @param members      members in all structures, or null without structures.csv
  * @param reuseRatio   members / bars, or null without structures.csv
- * @param barsMassKg   mass of all bars, or null when materials are unknown
+ * @param barsMassKg   mass of all bars, the miscut allowance and the spares to make included, or null when
+ *                     materials are unknown
  * @param jointsMassKg mass of all joints (0 without joints.csv)
- * @param kitMassKg    bars plus joints, or null when materials are unknown
+ * @param kitMassKg    bars plus joints ({@link KitMass}), or null when materials are unknown
  * @param spares       marks with more bars than the structures need, and how many more
+ * @param sparesToMake spare bars made beyond bars.csv (the service-life spares of kit.json's policy before a plan,
+ *                     those the plan cut after), counted in {@code barsMassKg}
+ * @param allowance    miscut allowance pieces of all marks (kit.json {@code miscutAllowance}), cut beyond bars.csv
+ *                     and counted in {@code barsMassKg}; each mark's in {@link MarkLine#allowance()}
  */
 public record KitSummary(String kit, String description, int marks, int bars, Integer members, Double reuseRatio,
                          List<SectionTotal> sections, List<MarkLine> markList, List<StructureMembers> structures,
                          JointTotal joints, Double barsMassKg, double jointsMassKg, Double kitMassKg,
-                         List<SpareCount> spares) {
+                         List<SpareCount> spares, int sparesToMake, int allowance) {
 
     public KitSummary {
         sections = List.copyOf(sections);
@@ -42,9 +49,12 @@ public record KitSummary(String kit, String description, int marks, int bars, In
                                Double massKg) {
     }
 
-    /** One mark: cut length, kit quantity, what the structures need, the surplus and the mark's total mass. */
+    /**
+     * One mark: cut length, kit quantity, what the structures need, the surplus, the mark's total mass (of its
+     * quantity) and its miscut allowance pieces, cut beyond the quantity.
+     */
     public record MarkLine(String mark, String section, double lengthMm, int quantity, int required, int surplus,
-                           Double massKg) {
+                           Double massKg, int allowance) {
     }
 
     /** Members (bars in place) of one structure. */
@@ -59,19 +69,34 @@ public record KitSummary(String kit, String description, int marks, int bars, In
     public record SpareCount(String mark, int count) {
     }
 
-    /** Summarises a validated kit. */
+    /**
+     * Summarises a validated kit before it is planned: the spares to make are those kit.json's spares policy sizes
+     * ({@link SparesStage#sizing}, as {@code plan} makes them), none without a policy.
+     */
     public static KitSummary of(Kit kit) {
+        Map<String, Integer> toMake = new LinkedHashMap<>();
+        SparesPlan sizing = SparesStage.sizing(kit);
+        if (sizing != null) {
+            sizing.marks().forEach(m -> toMake.put(m.mark(), m.toMake()));
+        }
+        return of(kit, toMake);
+    }
+
+    /**
+     * Summarises a validated kit that holds {@code sparesToMake} bars per mark beyond bars.csv (a plan's spares
+     * cut, {@link KitMass#sparesCut}).
+     */
+    public static KitSummary of(Kit kit, Map<String, Integer> sparesToMake) {
+        KitMass kitMass = KitMass.of(kit, sparesToMake);
         List<MarkLine> markList = new ArrayList<>();
         List<SpareCount> spares = new ArrayList<>();
-        boolean massKnown = true;
-        double barsMass = 0;
+        boolean massKnown = kitMass.barsMassKg() != null;
         for (Bar bar : kit.bars()) {
             Optional<Double> each = kit.barMassKg(bar);
-            massKnown &= each.isPresent();
             Double total = each.map(m -> m * bar.quantity()).orElse(null);
-            barsMass += total == null ? 0 : total;
             markList.add(new MarkLine(bar.mark(), bar.section(), round(bar.lengthMm(), 1), bar.quantity(),
-                    bar.requiredQuantity(), bar.surplus(), total == null ? null : round(total, 3)));
+                    bar.requiredQuantity(), bar.surplus(), total == null ? null : round(total, 3),
+                    kit.allowance(bar)));
             if (bar.surplus() > 0) {
                 spares.add(new SpareCount(bar.mark(), bar.surplus()));
             }
@@ -83,14 +108,13 @@ public record KitSummary(String kit, String description, int marks, int bars, In
             members = kit.structures().stream().mapToInt(StructureCount::count).sum();
             reuseRatio = round((double) members / bars, 3);
         }
-        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
-        JointTotal joints = new JointTotal(kit.joints().size(), kit.joints().stream().mapToInt(Joint::quantity).sum(),
-                round(jointsMass, 3));
-        Double barsMassKg = massKnown ? round(barsMass, 3) : null;
-        Double kitMassKg = massKnown ? round(barsMass + jointsMass, 3) : null;
+        double jointsMass = kitMass.jointsMassKg();
+        JointTotal joints = new JointTotal(kit.joints().size(), kitMass.joints(), round(jointsMass, 3));
+        Double barsMassKg = massKnown ? round(kitMass.barsMassKg(), 3) : null;
+        Double kitMassKg = massKnown ? round(kitMass.totalKg(), 3) : null;
         return new KitSummary(kit.name(), kit.settings().description(), kit.bars().size(), bars, members,
                 reuseRatio, sections(kit), markList, structures(kit), joints, barsMassKg, round(jointsMass, 3),
-                kitMassKg, spares);
+                kitMassKg, spares, kitMass.spares(), kitMass.allowance());
     }
 
     private static List<SectionTotal> sections(Kit kit) {

@@ -7,6 +7,7 @@ import java.util.function.Supplier;
 import kitwright.cutting.CutPlan;
 import kitwright.loading.LoadPlan;
 import kitwright.loading.Shipping;
+import kitwright.metrics.KitMass;
 import kitwright.metrics.KitMetrics;
 import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Kit;
@@ -35,13 +36,13 @@ public final class Planner {
 
     public static PlanResult run(Kit kit, Options options, PlanProgress progress) {
         Map<String, Double> seconds = new LinkedHashMap<>();
-        KitSummary summary = KitSummary.of(kit);
 
         progress.stage("cutting", kit.usedSections().size() + " sections");
         SparesStage.Result cut = timed(seconds, "cutting", () -> SparesStage.cut(kit, options.sparesFromOffcuts(),
                 null, progress));
         CutPlan cutting = cut.plan();
         KitMetrics figures = KitMetricsCalculator.of(kit, cutting);
+        KitSummary summary = KitSummary.of(kit, KitMass.sparesCut(cutting));
 
         progress.stage("nesting", "every cut piece into bundles");
         NestResult nesting = timed(seconds, "nesting", () -> Nester.run(kit, cutting,

@@ -3,6 +3,7 @@ package kitwright.report;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import kitwright.ids.IdOrder;
 import kitwright.nesting.Bundle;
 import kitwright.nesting.NestedTube;
 import kitwright.packing.Crate;
@@ -73,9 +74,13 @@ public final class CrateContents {
         return sb.toString();
     }
 
-    /** Refs of the items of one kind, in crate order, separated by spaces. */
+    /** Refs of the items of one kind, in number order ({@link IdOrder}), separated by spaces. */
     public static String refs(Crate crate, ItemKind kind) {
-        List<String> refs = crate.items(kind).stream().map(CrateItem::ref).toList();
-        return String.join(" ", refs);
+        return ids(crate.items(kind).stream().map(CrateItem::ref).toList(), " ");
+    }
+
+    /** Ids in number order ({@link IdOrder}), joined by {@code separator}: how every list of ids is printed. */
+    public static String ids(List<String> ids, String separator) {
+        return String.join(separator, ids.stream().sorted(IdOrder.NUMBER_ORDER).toList());
     }
 }

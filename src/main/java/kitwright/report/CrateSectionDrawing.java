@@ -37,7 +37,7 @@ public final class CrateSectionDrawing {
 
     /**
      * @param drawingId identifier unique in the report (letters, digits and '-'), used for ids and data-crate
-     * @param laneFills fill of a lane by the ref of a bundle in it (the report tints by the host's section); lanes
+     * @param laneFills fill of a lane by the ref of a bundle in it (the report colours by the host's mark); lanes
      *                  not in it are white
      */
     public static String draw(String drawingId, Crate crate, Map<String, String> laneFills) {

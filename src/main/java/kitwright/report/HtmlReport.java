@@ -26,7 +26,8 @@ public final class HtmlReport {
     }
 
     /** What the page template reads. */
-    record Page(String kitName, String description, String date, String runningHeader, List<Rendered> sections) {
+    record Page(String kitName, String description, String date, String runningHeader, String pageRules,
+                List<Rendered> sections) {
     }
 
     private HtmlReport() {
@@ -35,12 +36,16 @@ public final class HtmlReport {
     /** The report as an HTML document. */
     public static String render(ReportModel model) {
         List<Rendered> sections = new ArrayList<>();
+        StringBuilder pageRules = new StringBuilder();
         for (ReportSection section : model.sections()) {
+            if (section.view() instanceof SawSheetSection.View saw) {
+                pageRules.append(saw.pageRules());
+            }
             sections.add(new Rendered(section.id(), section.title(), run(section.template(), section.view())));
         }
         String date = model.date().toString();
         Page page = new Page(model.kitName(), model.description(), date,
-                cssString(model.kitName() + " \u00B7 material plan \u00B7 " + date), sections);
+                cssString(model.kitName() + " \u00B7 material plan \u00B7 " + date), pageRules.toString(), sections);
         return run("report", page);
     }
 

@@ -2,6 +2,8 @@ package kitwright.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
+import java.util.stream.Collectors;
 import kitwright.metrics.KitMetrics;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -48,7 +50,8 @@ public final class KitFiguresSection {
     }
 
     record View(List<Figure> figures, boolean carbonKnown, List<CarbonRow> carbon, CarbonRow carbonTotal,
-                String members, String bars, String reuseRatio, boolean structures, Spares spares,
+                String members, String bars, String reuseRatio, boolean structures, boolean stockHoldsBars,
+                String usedStock, String barsMass, Spares spares,
                 String examplePolicy) {
     }
 
@@ -67,18 +70,27 @@ public final class KitFiguresSection {
         top.add(new Figure("Stock bought", ReportFormat.kg(figures.boughtMassKg()),
                 ShopFormat.count(figures.boughtPieces()) + " mill pieces, "
                         + ShopFormat.metres(figures.boughtLengthMm()) + "\u00A0m"));
+        top.add(new Figure("Stock used", ReportFormat.kg(figures.usedStockMassKg()),
+                ShopFormat.count(figures.stockPieces()) + " pieces: mill stock bought and rack offcuts taken"));
         top.add(new Figure("Kit mass with joints", ReportFormat.kg(figures.kitMassKg()),
-                "bars in the quantities of bars.csv, and joints"));
-        top.add(new Figure("Reuse ratio", ShopFormat.decimal(figures.reuseRatio(), 2, true),
-                ShopFormat.count(figures.members()) + " members / " + ShopFormat.count(figures.bars()) + " bars"));
+                "every bar, miscut allowance and spares cut included, and the joints"));
+        allowance(kit).ifPresent(top::add);
+        top.add(figures.reuseRatio() == null ? new Figure("Reuse ratio", "none", "no structures.csv")
+                : new Figure("Reuse ratio", reuseRatio(figures), ShopFormat.count(figures.members())
+                        + " members / " + ShopFormat.count(figures.bars()) + " bars"));
         List<CarbonRow> carbon = figures.carbon().stream().map(c -> new CarbonRow(c.material(),
                 ShopFormat.kg(c.boughtMassKg()), ShopFormat.decimal(c.co2eKgPerKg(), 3, false),
                 ShopFormat.kg(c.co2eKg()), c.source())).toList();
         CarbonRow carbonTotal = figures.co2eKg() == null ? null : new CarbonRow("All materials",
                 ShopFormat.kg(figures.boughtMassKg()), "", ShopFormat.kg(figures.co2eKg()), "");
+        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
+        Double barsMass = figures.kitMassKg() == null ? null : figures.kitMassKg() - jointsMass;
+        boolean stockHoldsBars = barsMass != null && figures.usedStockMassKg() != null
+                && figures.usedStockMassKg() >= barsMass;
         View view = new View(List.copyOf(top), figures.co2eKg() != null && !carbon.isEmpty(), carbon, carbonTotal,
-                ShopFormat.count(figures.members()), ShopFormat.count(figures.bars()),
-                ShopFormat.decimal(figures.reuseRatio(), 2, true), !kit.structures().isEmpty(),
+                figures.members() == null ? "" : ShopFormat.count(figures.members()), ShopFormat.count(figures.bars()),
+                reuseRatio(figures), figures.reuseRatio() != null, stockHoldsBars,
+                ReportFormat.kg(figures.usedStockMassKg()), ReportFormat.kg(barsMass),
                 spares == null ? null : spares(kit, spares), EXAMPLE_POLICY);
         return new ReportSection(ID, TITLE, "kit-figures", view);
     }
@@ -116,6 +128,34 @@ public final class KitFiguresSection {
                 outcome.rounds() == 1 ? "once" : ShopFormat.count(outcome.rounds()) + " times",
                 outcome.missing() == 0 ? null
                 : ShopFormat.count(outcome.missing()));
+    }
+
+    /**
+     * The miscut allowance of kit.json, when it adds pieces: how many of the pieces the order buys stock for are
+     * extra pieces for saw errors rather than the kit's bars, by mark.
+     */
+    private static Optional<Figure> allowance(Kit kit) {
+        return allowancePieces(kit).map(pieces -> new Figure("Miscut allowance", pieces, "cut beyond the kit's"
+                + " bars for saw errors, the order buys stock for them and they ship with the kit (labels and"
+                + " cut-list kind \u201Callowance\u201D): " + allowanceByMark(kit)));
+    }
+
+    /** "5 pieces": the kit's miscut allowance pieces, or empty when it has none. */
+    static Optional<String> allowancePieces(Kit kit) {
+        int total = kit.bars().stream().mapToInt(kit::allowance).sum();
+        return total == 0 ? Optional.empty()
+                : Optional.of(ShopFormat.count(total) + " piece" + (total == 1 ? "" : "s"));
+    }
+
+    /** "K1 × 1, K2 × 2": the miscut allowance pieces of each mark that has some, in the kit's order. */
+    static String allowanceByMark(Kit kit) {
+        return kit.bars().stream().filter(b -> kit.allowance(b) > 0)
+                .map(b -> b.mark() + " \u00D7\u2009" + kit.allowance(b)).collect(Collectors.joining(", "));
+    }
+
+    /** The reuse ratio to two decimals, or "none" without structures.csv. */
+    private static String reuseRatio(KitMetrics figures) {
+        return figures.reuseRatio() == null ? "none" : ShopFormat.decimal(figures.reuseRatio(), 2, true);
     }
 
     /** A probability in percent to three decimals at most: 0.0956179 gives "9.562 %". */

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.StringWriter;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
+import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 import java.util.stream.Collectors;
@@ -15,15 +16,15 @@ import kitwright.packing.Crate;
 import kitwright.packing.CratePlan;
 import kitwright.packing.ItemKind;
 import kitwright.packing.JointBoxLoad;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 /**
- * The logistics sheets as CSV (UTF-8, header row, comma-separated, "\n" line ends, numbers with a point and no
- * grouping so a spreadsheet reads them as numbers):
+ * The logistics sheets as CSV (laid out by {@link CsvFile}; numbers with a point and no grouping so a spreadsheet
+ * reads them as numbers):
  * <ul>
  *   <li>{@code packing-lists.csv}, one row per crate: {@code crate,type,marks,bundles,bundle_ids,boxes,box_ids,
- *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes);</li>
+ *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes; ids in
+ *   number order, BDL-2 before BDL-10);</li>
  *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
  *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
  *   to the rear face of the last crate; centre of gravity from the front).</li>
@@ -33,7 +34,6 @@ import org.apache.commons.csv.CSVPrinter;
 public final class LogisticsCsv {
     public static final String PACKING_LISTS = "packing-lists.csv";
     public static final String MANIFESTS = "manifests.csv";
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
 
     private LogisticsCsv() {
     }
@@ -44,9 +44,8 @@ public final class LogisticsCsv {
         Map<String, JointBoxLoad> boxes = plan.boxes().stream()
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
         StringWriter out = new StringWriter();
-        try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
-            csv.printRecord(SpreadsheetCell.row("crate", "type", "marks", "bundles", "bundle_ids", "boxes", "box_ids",
-                    "gross_kg", "max_gross_kg"));
+        try (CSVPrinter csv = CsvFile.printer(out, List.of("crate", "type", "marks", "bundles", "bundle_ids", "boxes",
+                "box_ids", "gross_kg", "max_gross_kg"))) {
             for (Crate c : plan.crates()) {
                 csv.printRecord(SpreadsheetCell.row(c.id(), c.type(),
                         CrateContents.plainText(CrateContents.marks(c, byId, boxes)), c.items(ItemKind.BUNDLE).size(),
@@ -61,12 +60,11 @@ public final class LogisticsCsv {
 
     public static String manifests(LoadPlan plan) {
         StringWriter out = new StringWriter();
-        try (CSVPrinter csv = new CSVPrinter(out, FORMAT)) {
-            csv.printRecord(SpreadsheetCell.row("vehicle", "type", "crates", "crate_ids", "mass_kg", "payload_kg",
-                    "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"));
+        try (CSVPrinter csv = CsvFile.printer(out, List.of("vehicle", "type", "crates", "crate_ids", "mass_kg",
+                "payload_kg", "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"))) {
             for (VehicleLoad v : plan.vehicles()) {
                 csv.printRecord(SpreadsheetCell.row(v.id(), v.type(), v.crates().size(),
-                        v.crates().stream().map(PlacedCrate::ref).collect(Collectors.joining(" ")),
+                        CrateContents.ids(v.crates().stream().map(PlacedCrate::ref).toList(), " "),
                         number(v.massKg(), 1), number(v.payloadKg(), 1), number(v.floorLengthMm(), 0),
                         number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2)));
             }

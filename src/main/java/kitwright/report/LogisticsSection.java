@@ -67,7 +67,7 @@ public final class LogisticsSection {
     /**
      * The block with the lanes of the crate cross-sections tinted by their bundles' host marks.
      *
-     * @param fillByMark tint by mark (the report's {@link SectionTints}); lanes of other marks stay white
+     * @param fillByMark fill by mark (the report's {@link MarkPalette}); lanes of other marks stay white
      */
     public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
                                    List<CrateType> catalog, Map<String, String> fillByMark) {
@@ -101,13 +101,13 @@ public final class LogisticsSection {
         }
         List<CrateDrawing> crateDrawings = alike.values().stream().map(group -> new CrateDrawing(group.get(0).id(),
                 group.get(0).type(), group.size() == 1 ? null
-                        : group.stream().skip(1).map(Crate::id).collect(Collectors.joining(", ")),
+                        : CrateContents.ids(group.stream().skip(1).map(Crate::id).toList(), ", "),
                 hosts(group.get(0), byId, fillByMark),
                 CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0), laneFills))).toList();
         Map<String, Crate> crateById = crates.crates().stream()
                 .collect(Collectors.toMap(Crate::id, Function.identity()));
         List<TripRow> trips = loads.vehicles().stream().map(v -> new TripRow(v.id(), v.type(),
-                v.crates().stream().map(p -> p.ref()).collect(Collectors.joining(" ")),
+                CrateContents.ids(v.crates().stream().map(p -> p.ref()).toList(), " "),
                 ShopFormat.kg(v.massKg()) + " / " + ShopFormat.kg(v.payloadKg()),
                 ShopFormat.mm(v.floorLengthMm()) + " / " + ShopFormat.mm(v.deckLengthMm()),
                 ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();

@@ -4,10 +4,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import kitwright.model.Bar;
+import kitwright.model.Kit;
 
 /**
- * One fill colour per mark, assigned in the kit's mark order so that a mark keeps its colour on every sheet of a
- * report. Colours are light enough for black labels to stay legible and for a greyscale print to show the labels
+ * One fill colour per mark, assigned in the kit's mark order so that a mark keeps its colour on every sheet and in
+ * every drawing of a report (saw sheets, bundles, crate lanes). Colours are light enough for black labels to stay legible and for a greyscale print to show the labels
  * and hatching rather than dark blocks; the colour only helps the eye, every piece also carries its mark as text.
  *
  * <p>The first twelve colours are hand-picked soft hues; further marks step round the colour wheel by the golden
@@ -33,6 +35,26 @@ public final class MarkPalette {
             }
         }
         return new MarkPalette(fills);
+    }
+
+    /**
+     * The kit's palette: every mark in the kit's order, so that a mark has one colour throughout the report (saw
+     * sheets, bundle drawings, crate lanes, their legends).
+     */
+    public static MarkPalette of(Kit kit) {
+        return of(kit.bars().stream().map(Bar::mark).toList());
+    }
+
+    /** This palette extended by further marks (those it holds keep their colour). */
+    public MarkPalette with(List<String> marks) {
+        List<String> all = new java.util.ArrayList<>(fills.keySet());
+        all.addAll(marks);
+        return of(all);
+    }
+
+    /** Fill by mark, in palette order. */
+    public Map<String, String> fills() {
+        return java.util.Collections.unmodifiableMap(fills);
     }
 
     /** The fill of a mark; a neutral grey for a mark the palette was not made for. */

@@ -4,11 +4,10 @@ import java.io.IOException;
 import java.io.Writer;
 import java.util.List;
 import kitwright.nesting.NestPlan;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 /**
- * Writes {@code nests.csv} and {@code assembly-order.csv} (UTF-8 by the caller, comma-separated, header row). The
+ * Writes {@code nests.csv} and {@code assembly-order.csv} (laid out by {@link CsvFile}, UTF-8 by the caller). The
  * writer is flushed, not closed.
  */
 public final class NestingCsv {
@@ -24,9 +23,7 @@ public final class NestingCsv {
     }
 
     private static void write(List<String> header, List<List<String>> rows, Writer out) throws IOException {
-        CSVFormat format = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
-        CSVPrinter printer = new CSVPrinter(out, format);
-        printer.printRecord(SpreadsheetCell.row(header));
+        CSVPrinter printer = CsvFile.printer(out, header);
         for (List<String> row : rows) {
             printer.printRecord(SpreadsheetCell.row(row));
         }

@@ -17,8 +17,8 @@ import kitwright.nesting.NestedTube;
  * The report block of the nesting stage: bundles against the lower bound and the status, envelope volume nested
  * and loose, bundles above the one-person lift, the fit rule used (which says that out-of-roundness and
  * straightness are not counted), a table of the distinct bundle layouts and one figure of each: the drawing
- * ({@link BundleDrawing}) and a table of its tubes. With the kit, tubes are coloured by section (one tint per tube
- * size, the same in every drawing, see {@link SectionTints}) and the tables name the section. Add it with
+ * ({@link BundleDrawing}) and a table of its tubes. With the kit, tubes are coloured by mark (the same colour as on
+ * the saw sheets and in the crate lanes, see {@link MarkPalette}) and the tables name the section. Add it with
  * {@code ReportModel.builder(...).section(NestingSection.of(result, kit))}.
  */
 public final class NestingSection {
@@ -47,13 +47,13 @@ public final class NestingSection {
         return of(result, Map.of(), Map.of());
     }
 
-    /** The block of a kit's plan: tubes coloured and named by section. */
+    /** The block of a kit's plan: tubes coloured by mark (the saw sheets' colours) and named by section. */
     public static ReportSection of(NestResult result, Kit kit) {
         Map<String, String> sectionOf = new LinkedHashMap<>();
         for (Bar b : kit.bars()) {
             sectionOf.put(b.mark(), b.section());
         }
-        Map<String, String> fills = SectionTints.byMark(kit);
+        Map<String, String> fills = MarkPalette.of(kit).fills();
         return of(result, sectionOf, fills);
     }
 

@@ -13,7 +13,7 @@ import kitwright.nesting.NestedTube;
 /**
  * The rows of {@code nests.csv} and {@code assembly-order.csv}, as lists of strings (pure; {@link NestingCsv}
  * writes them). Every tube of a bundle gets a place name: the bundle id for its host, then ".n" for the n-th guest
- * of each host down the nest (B004.1.2 is the second guest of the first guest of bundle B004). A guest's channel is
+ * of each host down the nest (BDL-4.1.2 is the second guest of the first guest of bundle BDL-4). A guest's channel is
  * numbered within its host by distinct centre, in the order guests appear (by offset).
  */
 public final class NestingTables {

@@ -30,9 +30,10 @@ public final class PlanFiguresJson {
      *
      * @param carbon embodied carbon per material of the stock bought (empty when materials are unknown)
      */
-    public record Figures(int marks, int bars, int members, double reuseRatio, int stockPieces, int boughtPieces,
+    public record Figures(int marks, int bars, Integer members, Double reuseRatio, int stockPieces, int boughtPieces,
                           double stockLengthMm, double boughtLengthMm, Double cost, double offcutPct,
-                          double scrapPct, double remnantPct, Double kitMassKg, Double boughtMassKg, Double co2eKg,
+                          double scrapPct, double remnantPct, Double kitMassKg, Double boughtMassKg,
+                          Double usedStockMassKg, Double co2eKg,
                           List<Carbon> carbon) {
         public Figures {
             carbon = List.copyOf(carbon);
@@ -91,7 +92,7 @@ public final class PlanFiguresJson {
         return new Figures(m.marks(), m.bars(), m.members(), round(m.reuseRatio(), 3), m.stockPieces(),
                 m.boughtPieces(), round(m.stockLengthMm(), 1), round(m.boughtLengthMm(), 1), round(m.cost(), 2),
                 round(m.offcutPct(), 2), round(m.scrapPct(), 2), round(m.remnantPct(), 2), round(m.kitMassKg(), 3),
-                round(m.boughtMassKg(), 3), round(m.co2eKg(), 3), carbon);
+                round(m.boughtMassKg(), 3), round(m.usedStockMassKg(), 3), round(m.co2eKg(), 3), carbon);
     }
 
     private static Carbon carbon(MaterialCarbon c) {

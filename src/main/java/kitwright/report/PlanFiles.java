@@ -1,5 +1,6 @@
 package kitwright.report;
 
+import java.nio.charset.StandardCharsets;
 import java.time.LocalDate;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -9,6 +10,8 @@ import kitwright.plan.PlanResult;
 import kitwright.report.cutting.CutListCsv;
 import kitwright.report.cutting.OrderCsv;
 import kitwright.report.cutting.RackAfterCsv;
+import kitwright.report.labels.LabelSet;
+import kitwright.report.labels.LabelsHtml;
 
 /**
  * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
@@ -22,6 +25,19 @@ public final class PlanFiles {
     private PlanFiles() {
     }
 
+    /**
+     * Every file of the plan folder as bytes, in a fixed order: the text files of {@link #of} (UTF-8), then
+     * {@code plan.xlsx}, the workbook of their CSVs ({@link PlanWorkbook}).
+     */
+    public static Map<String, byte[]> written(PlanResult result, LocalDate date) {
+        Map<String, String> text = of(result, date);
+        Map<String, byte[]> files = new LinkedHashMap<>();
+        text.forEach((name, content) -> files.put(name, content.getBytes(StandardCharsets.UTF_8)));
+        files.put(PlanWorkbook.FILE, PlanWorkbook.of(text, date));
+        return files;
+    }
+
+    /** The text files of the plan folder, by name, in a fixed order. */
     public static Map<String, String> of(PlanResult result, LocalDate date) {
         Kit kit = result.kit();
         Map<String, String> files = new LinkedHashMap<>();
@@ -32,6 +48,8 @@ public final class PlanFiles {
         files.put("cut-list.csv", CutListCsv.format(kit, result.cutting()));
         files.put("rack-after.csv", RackAfterCsv.format(kit, result.cutting()));
         files.putAll(NestingFiles.files(result.nesting().plan()));
+        files.put(LabelsHtml.FILE, LabelsHtml.render(kit.name(), date.toString(), LabelSet.of(kit,
+                result.cutting(), result.nesting().plan().bundles(), result.crates(), date.toString())));
         if (result.logisticsPlanned()) {
             files.put(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(result.crates(),
                     result.nesting().plan().bundles()));
@@ -62,7 +80,7 @@ public final class PlanFiles {
         builder.section(NestingSection.of(result.nesting(), result.kit()));
         if (result.logisticsPlanned()) {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
-                    result.kit().crates(), SectionTints.byMark(result.kit())));
+                    result.kit().crates(), MarkPalette.of(result.kit()).fills()));
             LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
         } else {
             builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"

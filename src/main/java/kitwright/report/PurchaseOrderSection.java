@@ -18,7 +18,8 @@ final class PurchaseOrderSection {
                 String mass) {
     }
 
-    record View(List<Line> mill, Line millTotal, List<Line> rack, Line rackTotal, boolean hasRack) {
+    /** @param allowance the line on the miscut allowance the stock covers, or null without one */
+    record View(List<Line> mill, Line millTotal, List<Line> rack, Line rackTotal, boolean hasRack, String allowance) {
     }
 
     private PurchaseOrderSection() {
@@ -32,7 +33,11 @@ final class PurchaseOrderSection {
                 (line.origin() == Origin.MILL ? mill : rack).add(line);
             }
         }
-        View view = new View(lines(kit, mill), total(kit, mill), lines(kit, rack), total(kit, rack), !rack.isEmpty());
+        String allowance = KitFiguresSection.allowancePieces(kit).map(pieces -> "Of the pieces cut from this stock, "
+                + pieces + " are miscut allowance for saw errors, beyond the kit's bars: "
+                + KitFiguresSection.allowanceByMark(kit) + ".").orElse(null);
+        View view = new View(lines(kit, mill), total(kit, mill), lines(kit, rack), total(kit, rack), !rack.isEmpty(),
+                allowance);
         return new ReportSection(ID, "Purchase order", "purchase-order", view);
     }
 

@@ -4,9 +4,12 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
+import kitwright.cutting.PieceKind;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
@@ -17,7 +20,9 @@ import kitwright.model.Status;
  * Saw sheets: per section, a legend of its marks and one card per distinct saw pattern with the drawing
  * ({@link SawSheetDrawing}) and the cut list the saw operator works down (sequence, mark, length and tolerance,
  * start and end measured from the stock piece's left end). Identical patterns listed apart in the plan are
- * merged and their counts added. Each section starts a new page in print.
+ * merged and their counts added. Each section starts a new page in print, on a named page (CSS Paged Media,
+ * {@code page} property) whose running header names the section, so a continuation page still says which tube it
+ * is for; every pattern's heading names the section too.
  */
 final class SawSheetSection {
     static final String ID = "saw-sheets";
@@ -38,7 +43,7 @@ final class SawSheetSection {
      *
      * @param ticks one box per stock piece to tick off as it is cut (empty above {@link #MAX_TICKS} pieces)
      */
-    record PatternCard(String id, String number, String stock, String origin, String count, String svg,
+    record PatternCard(String id, String number, String section, String stock, String origin, String count, String svg,
                        List<CutColumn> cutColumns, String offcut, String offcutClass, List<Integer> ticks,
                        boolean tallyLine) {
     }
@@ -55,10 +60,21 @@ final class SawSheetSection {
 
     record SawSection(String id, String section, String description, String settings, String status,
                       String statusClass, String reason, List<LegendItem> legend, String key,
-                      List<PatternCard> patterns, String totals, String spares) {
+                      List<PatternCard> patterns, String totals, String spares, String pageName,
+                      String runningHeader) {
     }
 
     record View(String kitName, String date, List<SawSection> sections) {
+        /** The print rules of the named pages: each section on pages of its own, headed with its name. */
+        String pageRules() {
+            StringBuilder rules = new StringBuilder();
+            for (SawSection s : sections) {
+                rules.append('#').append(s.id()).append(" { page: ").append(s.pageName()).append("; }\n@page ")
+                        .append(s.pageName()).append(" { @top-left { content: ").append(s.runningHeader())
+                        .append("; } }\n");
+            }
+            return rules.toString();
+        }
     }
 
     private SawSheetSection() {
@@ -67,21 +83,21 @@ final class SawSheetSection {
     static ReportSection of(Kit kit, List<SectionCutPlan> plans, String date) {
         List<SawSection> sections = new ArrayList<>();
         for (int i = 0; i < plans.size(); i++) {
-            sections.add(section(kit, plans.get(i), i + 1, palette(kit, plans.get(i))));
+            sections.add(section(kit, plans.get(i), i + 1, palette(kit, plans.get(i)), date));
         }
         return new ReportSection(ID, "Saw sheets", "saw-sheets",
                 new View(kit.name(), date, List.copyOf(sections)));
     }
 
     /**
-     * Colours for one section: its marks in kit order, then any other mark its plan cuts. A mark belongs to one
-     * section, so colouring per section keeps the first, most distinct colours for the marks seen together.
+     * Colours for one section: the kit's palette ({@link MarkPalette#of(Kit)}, the colours of the bundle and crate
+     * drawings too), extended by any mark the plan cuts that the kit does not list. The legend lists the marks of
+     * this section only.
      */
     static MarkPalette palette(Kit kit, SectionCutPlan plan) {
-        List<String> marks = new ArrayList<>();
-        kit.bars().stream().filter(b -> b.section().equals(plan.section())).forEach(b -> marks.add(b.mark()));
-        plan.patterns().forEach(p -> p.cuts().forEach(c -> marks.add(c.mark())));
-        return MarkPalette.of(marks);
+        List<String> cut = new ArrayList<>();
+        plan.patterns().forEach(p -> p.cuts().forEach(c -> cut.add(c.mark())));
+        return MarkPalette.of(kit).with(cut);
     }
 
     /** Patterns with the same stock, origin, cuts and offcut, merged in first-seen order with counts added. */
@@ -95,7 +111,8 @@ final class SawSheetSection {
         return List.copyOf(merged.values());
     }
 
-    private static SawSection section(Kit kit, SectionCutPlan plan, int index, MarkPalette palette) {
+    private static SawSection section(Kit kit, SectionCutPlan plan, int index, MarkPalette palette,
+                                      String date) {
         List<CutPattern> patterns = distinct(plan.patterns());
         double scale = patterns.stream().mapToDouble(CutPattern::stockLengthMm).max().orElse(1);
         List<PatternCard> cards = new ArrayList<>();
@@ -108,12 +125,19 @@ final class SawSheetSection {
         int pieces = patterns.stream().mapToInt(CutPattern::count).sum();
         String totals = ShopFormat.count(pieces) + " stock piece" + (pieces == 1 ? "" : "s") + " in "
                 + patterns.size() + " pattern" + (patterns.size() == 1 ? "" : "s");
-        String spares = plan.spares().isEmpty() ? null : "Spares cut beyond the kit: " + plan.spares().stream()
+        Map<String, Integer> allowance = PieceKind.counts(kit, plan, PieceKind.ALLOWANCE);
+        String allowanceText = allowance.isEmpty() ? null : "Miscut allowance cut beyond the kit: "
+                + allowance.entrySet().stream().map(a -> a.getKey() + " \u00D7\u2009" + a.getValue())
+                .collect(Collectors.joining(", "));
+        String sparesText = plan.spares().isEmpty() ? null : "Spares cut beyond the kit: " + plan.spares().stream()
                 .map(s -> s.mark() + " \u00D7\u2009" + s.count()).collect(Collectors.joining(", "));
+        String spares = Stream.of(allowanceText, sparesText).filter(Objects::nonNull)
+                .reduce((x, y) -> x + ". " + y).orElse(null);
         return new SawSection("saw-" + index, plan.section(), description(kit, plan.section()), settings,
                 ReportFormat.status(plan), ReportFormat.statusClass(plan.status()),
                 plan.status() == Status.INFEASIBLE ? plan.reason() : null, legend(kit, plan, palette),
-                Swatches.key("saw-" + index + "-key"), List.copyOf(cards), totals, spares);
+                Swatches.key("saw-" + index + "-key"), List.copyOf(cards), totals, spares, "saw-sheet-" + index,
+                HtmlReport.cssString(kit.name() + " \u00B7 saw sheet \u00B7 " + plan.section() + " \u00B7 " + date));
     }
 
     private static String description(Kit kit, String section) {
@@ -143,7 +167,7 @@ final class SawSheetSection {
         }
         List<Integer> ticks = p.count() > MAX_TICKS ? List.of()
                 : java.util.stream.IntStream.rangeClosed(1, p.count()).boxed().toList();
-        return new PatternCard(id, String.valueOf(number), stock, origin, "\u00D7\u2009" + p.count(), svg,
+        return new PatternCard(id, String.valueOf(number), plan.section(), stock, origin, "\u00D7\u2009" + p.count(), svg,
                 List.copyOf(columns), offcut, p.offcutMm() <= 0 ? "none" : p.offcutKind(), ticks, ticks.isEmpty());
     }
 
@@ -188,6 +212,9 @@ final class SawSheetSection {
         List<LegendItem> items = new ArrayList<>();
         for (String mark : palette.marks()) {
             Bar bar = kit.bar(mark).orElse(null);
+            if (bar != null ? !bar.section().equals(plan.section()) : !cut.containsKey(mark)) {
+                continue; // the palette is the kit's; the legend is this section's
+            }
             double length = bar != null ? bar.lengthMm() : lengths.getOrDefault(mark, 0.0);
             items.add(new LegendItem(mark, Swatches.mark(palette.fill(mark)), ShopFormat.sawMm(length),
                     tolerance(kit, mark), bar == null ? ShopFormat.UNKNOWN : ShopFormat.count(bar.quantity()),

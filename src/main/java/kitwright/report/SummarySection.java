@@ -2,7 +2,9 @@ package kitwright.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.cutting.CutPlan;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.metrics.KitMass;
 import kitwright.model.Bar;
 import kitwright.model.Joint;
 import kitwright.model.Kit;
@@ -69,13 +71,13 @@ final class SummarySection {
                             + ShopFormat.percent(stockMm == 0 ? 0 : scrapMm / stockMm) + "\u00A0% of stock length"));
             figures.add(new Figure("Remnants", ShopFormat.count(remnants),
                     ShopFormat.metres(remnantMm) + " m back on the rack"));
-            figures.add(kitMass(kit));
+            figures.add(kitMass(kit, sections));
             figures.add(plans(sections));
             total = new Row("All sections", "", "", ShopFormat.count(mill), ShopFormat.count(rack),
                     ShopFormat.metres(stockMm), ShopFormat.percent(share), ShopFormat.count(remnants),
                     ReportFormat.money(cost), "", "", "", null);
         } else {
-            figures.add(kitMass(kit));
+            figures.add(kitMass(kit, sections));
         }
         return new ReportSection(ID, "Summary", "summary",
                 new View(List.copyOf(figures), !sections.isEmpty(), List.copyOf(rows), total));
@@ -93,34 +95,20 @@ final class SummarySection {
                 p.status() == Status.INFEASIBLE ? p.reason() : null);
     }
 
-    /** Mass of every bar of the kit, when every section's material is known. */
-    static Double kitMassKg(Kit kit) {
-        double sum = 0;
-        for (Bar bar : kit.bars()) {
-            var mass = kit.barMassKg(bar);
-            if (mass.isEmpty()) {
-                return null;
-            }
-            sum += mass.get() * bar.quantity();
-        }
-        return sum;
-    }
-
     /**
-     * The kit's mass as kitwright gives it everywhere else (check, plan.json figures, compare): bars and joints,
-     * with the two parts in the note.
+     * The kit's mass as kitwright gives it everywhere else (check, plan.json figures, compare): {@link KitMass},
+     * every bar with the miscut allowance and the spares the plan cuts, and the joints, with the parts in the note.
      */
-    private static Figure kitMass(Kit kit) {
-        int bars = kit.bars().stream().mapToInt(Bar::quantity).sum();
-        Double barsMass = kitMassKg(kit);
-        int joints = kit.joints().stream().mapToInt(Joint::quantity).sum();
-        double jointsMass = kit.joints().stream().mapToDouble(j -> j.massKg() * j.quantity()).sum();
-        String barsNote = ShopFormat.count(bars) + " bars in " + ShopFormat.count(kit.bars().size()) + " marks"
-                + (barsMass == null ? " (no materials file)" : ", " + ReportFormat.kg(barsMass));
-        String jointsNote = joints == 0 ? "no joints" : ShopFormat.count(joints) + " joints, "
-                + ReportFormat.kg(jointsMass);
-        return new Figure("Kit mass", ReportFormat.kg(barsMass == null ? null : barsMass + jointsMass),
-                barsNote + "; " + jointsNote);
+    private static Figure kitMass(Kit kit, List<CuttingFigures> sections) {
+        KitMass mass = KitMass.of(kit, new CutPlan(sections.stream().map(CuttingFigures::plan).toList()));
+        String barsNote = ShopFormat.count(mass.bars() + mass.allowance() + mass.spares()) + " bars in "
+                + ShopFormat.count(kit.bars().size()) + " marks"
+                + (mass.allowance() == 0 ? "" : " (" + ShopFormat.count(mass.allowance()) + " of them miscut allowance)")
+                + (mass.spares() == 0 ? "" : " (" + ShopFormat.count(mass.spares()) + " of them spares cut)")
+                + (mass.barsMassKg() == null ? " (no materials file)" : ", " + ReportFormat.kg(mass.barsMassKg()));
+        String jointsNote = mass.joints() == 0 ? "no joints" : ShopFormat.count(mass.joints()) + " joints, "
+                + ReportFormat.kg(mass.jointsMassKg());
+        return new Figure("Kit mass", ReportFormat.kg(mass.totalKg()), barsNote + "; " + jointsNote);
     }
 
     private static Figure plans(List<CuttingFigures> sections) {

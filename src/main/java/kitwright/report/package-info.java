@@ -5,9 +5,9 @@
  * starts a new page, under a running header with the kit's name and the date). {@link kitwright.report.PlanFiles}
  * gives every file of a plan folder as text.
  *
- * <p>Colour: the saw sheets colour by mark ({@link kitwright.report.MarkPalette}); the bundle and crate drawings
- * tint by tube section ({@code SectionTints}), so a tube size looks the same from the bundle
- * figures to the crate lanes. Every drawing also labels in text and reads in greyscale.
+ * <p>Colour: one colour per mark throughout the report ({@link kitwright.report.MarkPalette}, in the kit's mark
+ * order): the saw sheets, the bundle drawings, the crate lanes and their legends. Every drawing also labels in text
+ * and reads in greyscale.
  *
  * <h2>Use</h2>
  * <pre>{@code

@@ -12,16 +12,6 @@ import org.apache.commons.statistics.distribution.BinomialDistribution;
  * <p><b>Problem.</b> Bars are lost or damaged at each assembly and take-down. How many spares per mark keep every
  * mark covered over the kit's whole life with a stated probability (the kit's service level)?
  *
-<<<<<<< HEAD
- * <p><b>Method.</b> A bar survives {@code c} cycles at loss rate {@code p} with probability {@code (1 - p)^c}
- * (each bar is lost at most once), so the losses of a mark of {@code n} bars in service follow
- * Binomial(n, q) with {@code q = 1 - (1 - p)^c}; the expected losses are {@code n q} (src/docs/sources.md). The
- * kit's level {@code L} is split over the {@code m} marks that have bars in service as {@code L^(1/m)} per mark:
- * with independent marks the chance that all are covered is the product of the marks' chances, hence at least
- * {@code L} (common practice). A mark's spares are the Binomial quantile: the smallest {@code s} with
- * {@code P(losses <= s) >= L^(1/m)}, taken from Apache Commons Statistics' {@link BinomialDistribution} and
- * confirmed against its cumulative probability, so the definition holds exactly in that library's arithmetic.
-=======
  * <p><b>Method.</b> A mark has {@code n} bars in service at once. At each of the {@code c} cycles every bar in
  * service is lost with probability {@code p}, independently, and a lost bar is replaced from the spares before the
  * next cycle, so {@code n} bars serve every cycle and a replacement can be lost in turn. The mark's losses over the
@@ -33,7 +23,6 @@ import org.apache.commons.statistics.distribution.BinomialDistribution;
  * are the Binomial quantile: the smallest {@code s} with {@code P(losses <= s) >= L^(1/m)}, taken from Apache
  * Commons Statistics' {@link BinomialDistribution} and confirmed against its cumulative probability, so the
  * definition holds exactly in that library's arithmetic.
->>>>>>> spares
  *
  * <p><b>Surplus.</b> The bars in service are the quantity the structures need ({@link Bar#requiredQuantity()}); the
  * kit's surplus over that counts towards the spares, and a mark's coverage is that of the spares it then holds

@@ -13,6 +13,7 @@ import kitwright.cutting.Spare;
 import kitwright.metrics.KitMetricsCalculator;
 import kitwright.model.Bar;
 import kitwright.model.Kit;
+import kitwright.model.MiscutAllowance;
 import kitwright.model.Status;
 
 /**
@@ -103,7 +104,10 @@ public final class SparesCutting {
         return new SparesCuttingResult(plan, supply, extraCost, rounds);
     }
 
-    /** Bars cut beyond the kit's quantity, per mark (never negative; sections without a plan cut nothing). */
+    /**
+     * Bars cut beyond the kit's quantity and its miscut allowance, per mark (never negative; sections without a
+     * plan cut nothing).
+     */
     static Map<String, Integer> produced(CutPlan plan, Kit kit) {
         Map<String, Integer> cut = zeros(kit);
         for (SectionCutPlan section : plan.sections()) {
@@ -115,7 +119,7 @@ public final class SparesCutting {
         }
         Map<String, Integer> beyond = zeros(kit);
         for (Bar bar : kit.bars()) {
-            beyond.put(bar.mark(), Math.max(0, cut.get(bar.mark()) - bar.quantity()));
+            beyond.put(bar.mark(), Math.max(0, cut.get(bar.mark()) - bar.quantity() - kit.allowance(bar)));
         }
         return beyond;
     }
@@ -135,7 +139,7 @@ public final class SparesCutting {
             }
             List<Spare> spares = new ArrayList<>();
             for (Bar bar : kit.bars()) {
-                int beyond = cut.getOrDefault(bar.mark(), 0) - bar.quantity();
+                int beyond = cut.getOrDefault(bar.mark(), 0) - bar.quantity() - kit.allowance(bar);
                 if (bar.section().equals(s.section()) && beyond > 0) {
                     spares.add(new Spare(bar.mark(), beyond));
                 }
@@ -159,14 +163,20 @@ public final class SparesCutting {
         return is > was;
     }
 
-    /** The kit with {@code extra} bars added to each mark's quantity (the structures' need unchanged). */
+    /**
+     * The kit with {@code extra} bars added to each mark's cutting demand (the structures' need unchanged). The
+     * miscut allowance is folded into the quantity and the policy dropped, so that a share in percent is not taken
+     * again of the larger quantity: the demand is exactly quantity + allowance + extra. The order of the marks by
+     * quantity stays the same, as the allowance never falls when the quantity grows.
+     */
     static Kit withExtraDemand(Kit kit, Map<String, Integer> extra) {
         List<Bar> bars = kit.bars().stream()
-                .map(b -> new Bar(b.mark(), b.section(), b.lengthMm(), b.quantity() + extra.getOrDefault(b.mark(), 0),
+                .map(b -> new Bar(b.mark(), b.section(), b.lengthMm(),
+                        b.quantity() + kit.allowance(b) + extra.getOrDefault(b.mark(), 0),
                         b.requiredQuantity(), b.nodeToNodeMm(), b.toleranceMm(), b.note()))
                 .toList();
-        return new Kit(kit.dir(), kit.settings(), bars, kit.structures(), kit.joints(), kit.catalog(),
-                kit.materials(), kit.crates(), kit.vehicles());
+        return new Kit(kit.dir(), kit.settings().withMiscutAllowance(MiscutAllowance.NONE), bars, kit.structures(),
+                kit.joints(), kit.catalog(), kit.materials(), kit.crates(), kit.vehicles(), kit.files());
     }
 
     private static Map<String, Integer> zeros(Kit kit) {

@@ -53,7 +53,8 @@ class CheckCommandTest {
                 .containsPattern("pavilion +300")
                 .contains("Joints: 1 type, 10 pieces, 16.0 kg")
                 .contains("Kit mass: 1453.9 kg (bars 1437.9 kg, joints 16.0 kg)")
-                .contains("Spares (bars beyond what the structures need): B 2");
+                .contains("Surplus bars (beyond what the structures need): B 2")
+                .doesNotContain("Spares (bars");
     }
 
     @Test

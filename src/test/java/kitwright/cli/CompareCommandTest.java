@@ -31,7 +31,7 @@ class CompareCommandTest {
         }
         Status status = name.startsWith("none") ? Status.INFEASIBLE : Status.OPTIMAL;
         return new OptionSummary(name, 6, 300, 750, 2.5, 80, 480000.0, 5000.0, 4.0, 1.5, 2.5, 1500.0, 1700.0,
-                2635.0, 30, 4, 2, 1800.0, status);
+                1750.0, 2635.0, 30, 4, 2, 1800.0, status);
     };
 
     private int run(String... args) {
@@ -40,6 +40,29 @@ class CompareCommandTest {
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
         return cl.execute(args);
+    }
+
+    @Test
+    @org.junit.jupiter.api.DisplayName("with the real planner, compare.json is the comparison of plans that pass the"
+            + " shared validator")
+    void realPlansAreValid() throws Exception {
+        Path six = kitwright.io.KitFiles.kit(tmp.resolve("kits").resolve("two-marks"),
+                "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1900,6\nE,CHS 33.7x2.6,1500,5\n");
+        Path one = kitwright.io.KitFiles.kit(tmp.resolve("kits").resolve("one-mark"),
+                "mark,section,length_mm,quantity\nA,CHS 48.3x3.2,1750,11\n");
+        CommandLine cl = KitwrightCommand.commandLine();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        Path written = tmp.resolve("written");
+        assertThat(cl.execute("compare", six.toString(), one.toString(), "--out", written.toString()))
+                .as(err.toString()).isEqualTo(ExitCode.OK.code());
+        java.util.List<OptionSummary> valid = java.util.List.of(
+                kitwright.compare.OptionSummaries.of(WrittenPlans.validated(six)),
+                kitwright.compare.OptionSummaries.of(WrittenPlans.validated(one)));
+        Path again = tmp.resolve("again");
+        kitwright.compare.CompareFiles.write(again, valid);
+        assertThat(Files.readString(written.resolve(kitwright.compare.CompareFiles.JSON)))
+                .isEqualTo(Files.readString(again.resolve(kitwright.compare.CompareFiles.JSON)));
     }
 
     @Test

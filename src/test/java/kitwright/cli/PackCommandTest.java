@@ -48,7 +48,7 @@ class PackCommandTest {
         assertThat(first.resolve("packing-lists.csv")).exists();
         assertThat(first.resolve("manifests.csv")).exists();
         assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
-                .anyMatch(n -> n.startsWith("crate-C1")).anyMatch(n -> n.startsWith("deck-V1"));
+                .anyMatch(n -> n.startsWith("crate-CRT-1")).anyMatch(n -> n.startsWith("deck-TRIP-1"));
         JsonNode json = new ObjectMapper().readTree(temp.resolve("first.json").toFile());
         List<String> keys = new ArrayList<>();
         json.fieldNames().forEachRemaining(keys::add);
@@ -114,10 +114,10 @@ class PackCommandTest {
         Path json = temp.resolve("plan.json");
         Run run = run("pack", kit.toString(), "--out", out.toString(), "--json", json.toString());
         assertThat(run.code()).as(run.out() + run.err()).isEqualTo(3);
-        assertThat(run.err()).contains("no load plan: crate C1").contains("fits no vehicle");
-        assertThat(run.out()).contains("Crates: 1").contains("Trips: none planned; INFEASIBLE: crate C1")
+        assertThat(run.err()).contains("no load plan: crate CRT-1").contains("fits no vehicle");
+        assertThat(run.out()).contains("Crates: 1").contains("Trips: none planned; INFEASIBLE: crate CRT-1")
                 .doesNotContain("INFEASIBLE, gap");
-        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("C1,");
+        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("CRT-1,");
         assertThat(new ObjectMapper().readTree(json.toFile()).path("loads").path("status").asText())
                 .isEqualTo("INFEASIBLE");
     }

@@ -24,8 +24,8 @@ class PlanCommandTest {
         WrittenPlans.planFolder(Path.of("sample-kits", "cinema-6"), out, java.time.LocalDate.of(2025, 6, 30));
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
-                "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "nests.csv",
-                "assembly-order.csv", "packing-lists.csv", "manifests.csv", "timing.json");
+                "report.html", "plan.json", "order.csv", "cut-list.csv", "rack-after.csv", "labels.html", "nests.csv",
+                "assembly-order.csv", "packing-lists.csv", "manifests.csv", "plan.xlsx", "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);
         assertThat(run.out()).startsWith("Kit cinema-6: ").contains("\nCrates: ", "\nTrips: ");
@@ -50,10 +50,11 @@ class PlanCommandTest {
         String text = Files.readString(first.resolve("summary.json"));
         assertThat(Files.readString(second.resolve("summary.json"))).isEqualTo(text);
         assertThat(text).startsWith("{\n  \"kit\": \"kit\",\n  \"description\": \"\",\n  \"marks\": 1,\n")
-                .contains("\n  \"spares\": []\n}").endsWith("}\n").doesNotContain("\r");
+                .contains("\n  \"spares\": [],\n  \"sparesToMake\": 0,\n  \"allowance\": 0\n}").endsWith("}\n").doesNotContain("\r");
         List<String> keys = KitFiles.listOf(PrettyJson.mapper().readTree(text).fieldNames());
         assertThat(keys).containsExactly("kit", "description", "marks", "bars", "members", "reuseRatio", "sections",
-                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares");
+                "markList", "structures", "joints", "barsMassKg", "jointsMassKg", "kitMassKg", "spares",
+                "sparesToMake", "allowance");
     }
 
     @Test
@@ -113,10 +114,10 @@ class PlanCommandTest {
         CliRun run = CliRun.of("plan", kit.toString(), "--out", out.toString(), "--date", "2025-06-30");
 
         assertThat(run.exitCode()).as(run.err()).isEqualTo(ExitCode.NO_FEASIBLE_PLAN.code());
-        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: bundle B001 (1000 mm long,")
+        assertThat(run.out()).contains("Crates: none planned; INFEASIBLE: bundle BDL-1 (1000 mm long,")
                 .contains("fits no crate type of the catalog").contains("Trips: none planned (no crates to load).")
                 .doesNotContain("INFEASIBLE, gap");
-        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle B001 (1000 mm long,");
+        assertThat(Files.readString(out.resolve("report.html"))).contains("No crate plan: bundle BDL-1 (1000 mm long,");
         assertThat(out.resolve("cut-list.csv")).exists();
     }
 
@@ -141,7 +142,8 @@ class PlanCommandTest {
         assertThat(absolute.exitCode()).as(absolute.err()).isZero();
         String report = Files.readString(dir.resolve("relative").resolve("report.html"));
         assertThat(Files.readString(dir.resolve("absolute").resolve("report.html"))).isEqualTo(report);
-        assertThat(report).contains("<td>aluminium-tube.csv</td>").contains("stopped by the time limit");
+        String fromTheKit = kit.toAbsolutePath().relativize(catalog).toString().replace('\\', '/');
+        assertThat(report).contains("<td>" + fromTheKit + "</td>").contains("stopped by the time limit");
         JsonNode sections = PrettyJson.mapper().readTree(Files.readString(dir.resolve("relative").resolve("plan.json")))
                 .get("cutting").get("sections");
         List<JsonNode> feasible = KitFiles.listOf(sections.elements()).stream()

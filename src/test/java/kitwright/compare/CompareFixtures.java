@@ -11,7 +11,8 @@ final class CompareFixtures {
     static OptionSummary option(String kit, int marks, double reuseRatio, Double cost, double offcutPct,
                                 Integer vehicles, Status status) {
         return new OptionSummary(kit, marks, 300, 750, reuseRatio, 80, 80 * 6000.0, cost, offcutPct,
-                offcutPct * 0.4, offcutPct * 0.6, 1500.0 + marks, 1700.0 + 10 * marks, 2635.0 + 15.5 * marks,
+                offcutPct * 0.4, offcutPct * 0.6, 1500.0 + marks, 1700.0 + 10 * marks, 1720.0 + 10 * marks,
+                2635.0 + 15.5 * marks,
                 40 - marks, 4, vehicles, vehicles == null ? null : vehicles * 900.0, status);
     }
 

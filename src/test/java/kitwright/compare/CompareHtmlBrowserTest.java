@@ -1,6 +1,7 @@
 package kitwright.compare;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.awt.image.BufferedImage;
 import java.io.IOException;
@@ -71,6 +72,48 @@ class CompareHtmlBrowserTest {
         assertThat(CompareWritersTest.count(dom, "<rect ")).isGreaterThanOrEqualTo(3 * 5);
         // The browser parsed the escaped name as text: no <b> element appeared.
         assertThat(dom).contains("&lt;b&gt;&amp;\"").doesNotContain("<b>&amp;");
+    }
+
+    /**
+     * Printed, compare.html comes out on A4 pages (595 x 842 pt, ISO 216) and every figure row's name is printed
+     * once, with its values on the same page (rows do not split across pages); pdftotext (poppler-utils) reads the
+     * pages back.
+     */
+    @Test
+    void printsOnA4WithNoRowSplitAcrossPages() throws Exception {
+        Path pdftotext = Path.of("/usr/bin/pdftotext");
+        if (!Files.isExecutable(pdftotext)) {
+            if ("true".equalsIgnoreCase(System.getenv("CI"))) {
+                throw new AssertionError("CI=true but pdftotext is missing: install the Debian package poppler-utils");
+            }
+            Assumptions.abort("pdftotext is missing (apt-get install poppler-utils)");
+        }
+        Path out = tmp.resolve("compare-print");
+        CompareFiles.write(out, CompareFixtures.three());
+        Path pdf = tmp.resolve("compare.pdf");
+        run(tmp, "--no-pdf-header-footer", "--print-to-pdf=" + pdf, out.resolve(CompareFiles.HTML).toUri().toString());
+        String raw = new String(Files.readAllBytes(pdf), StandardCharsets.ISO_8859_1);
+        java.util.regex.Matcher box = java.util.regex.Pattern
+                .compile("/MediaBox\\s*\\[\\s*0\\s+0\\s+([0-9.]+)\\s+([0-9.]+)\\s*\\]").matcher(raw);
+        int pages = 0;
+        while (box.find()) {
+            assertThat(Double.parseDouble(box.group(1))).as("page width, pt").isCloseTo(595.3, within(1.5));
+            assertThat(Double.parseDouble(box.group(2))).as("page height, pt").isCloseTo(841.9, within(1.5));
+            pages++;
+        }
+        assertThat(pages).as("pages").isPositive();
+        Process p = new ProcessBuilder(pdftotext.toString(), "-layout", pdf.toString(), "-")
+                .redirectError(ProcessBuilder.Redirect.DISCARD).start();
+        String text = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        p.waitFor(60, TimeUnit.SECONDS);
+        List<String> pageTexts = List.of(text.split("\f"));
+        // a row's line in the layout text: its name, then its unit or values after a run of spaces
+        for (String figure : List.of("Stock cost", "Crates", "Vehicles", "Trip cost", "Marks (bar types)")) {
+            java.util.regex.Pattern row = java.util.regex.Pattern.compile("(?m)^\\s*"
+                    + java.util.regex.Pattern.quote(figure) + " {2,}\\S");
+            long on = pageTexts.stream().filter(t -> row.matcher(t).find()).count();
+            assertThat(on).as("pages printing the row " + figure + " with its values").isEqualTo(1);
+        }
     }
 
     /** Runs headless Chromium with a fresh profile and returns its standard output. */

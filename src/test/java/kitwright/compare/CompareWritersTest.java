@@ -4,20 +4,19 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.StringReader;
 import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
+import kitwright.validate.CsvOutput;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 
 class CompareWritersTest {
     private static final List<String> KEYS = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
-            "stockLengthMm", "cost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg",
-            "bundles", "crates", "vehicles", "tripCost", "status");
+            "stockLengthMm", "cost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg",
+            "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
 
     @Test
     void jsonHasExactlyTheIssueKeysInOrder() throws Exception {
@@ -52,13 +51,15 @@ class CompareWritersTest {
     void csvHasTheKeysAsHeaderAndOneRowPerOption() throws Exception {
         StringWriter out = new StringWriter();
         CompareCsv.write(CompareFixtures.three(), out);
-        List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                .parse(new StringReader(out.toString())).getRecords();
-        assertThat(out.toString()).startsWith(String.join(",", KEYS) + "\r\n");
+        List<CSVRecord> records = CsvOutput.records(out.toString());
+        // compare.csv names the compare.json keys in snake_case
+        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream()
+                .map(k -> k.replaceAll("([A-Z])", "_$1").toLowerCase(java.util.Locale.ROOT))
+                .collect(java.util.stream.Collectors.joining(",")) + "\r\n");
         assertThat(records).hasSize(3);
         assertThat(records.get(2).get("kit")).isEqualTo("<b>&\"");
         assertThat(records.get(1).get("cost")).isEqualTo("4800.0");
-        assertThat(records.get(1).get("stockLengthMm")).isEqualTo("480000.0");
+        assertThat(records.get(1).get("stock_length_mm")).isEqualTo("480000.0");
         assertThat(records.get(0).get("status")).isEqualTo("OPTIMAL");
     }
 
@@ -66,7 +67,7 @@ class CompareWritersTest {
     void wasteBarReadsTheOffcutOfTheTable() throws Exception {
         // scrap 1.88 + remnant 3.84 (each rounded) = 5.72, where the offcut itself rounds to 5.71
         OptionSummary option = new OptionSummary("k", 6, 300, 750, 2.0, 80, 480_000.0, 5000.0, 5.71, 1.88, 3.84,
-                1500.0, 1700.0, 2635.0, 30, 2, 1, 900.0, kitwright.model.Status.OPTIMAL);
+                1500.0, 1700.0, 1750.0, 2635.0, 30, 2, 1, 900.0, kitwright.model.Status.OPTIMAL);
         String html = CompareHtml.render(List.of(option));
         assertThat(html).contains("5.71 %").doesNotContain("5.72");
     }

@@ -81,7 +81,7 @@ class ComparisonTest {
     @Test
     void summaryRoundsForReadingAndTakesTheWorstStatus() {
         KitMetrics metrics = new KitMetrics(6, 300, 750, 2.5, 80, 78, 480123.456, 468000, 5200.004, 9.87654,
-                3.33333, 6.54321, 1500.06, 1700.04, 2635.06, List.of());
+                3.33333, 6.54321, 1500.06, 1700.04, 1750.04, 2635.06, List.of());
         OptionSummary s = OptionSummary.of("k", metrics, new Logistics(40, 4, 2, 1800.005),
                 List.of(Status.OPTIMAL, Status.FEASIBLE, Status.OPTIMAL));
         assertThat(s.stockLengthMm()).isEqualTo(480123.5);

@@ -55,4 +55,26 @@ class CutPlanProperties {
             assertThat(filled.sections().get(s).value()).isEqualTo(plain.sections().get(s).value());
         }
     }
+
+    /**
+     * A random miscut allowance (0-3 pieces per mark, 0-100 % in hundredths, the edges 0 and 100 % included) with
+     * spares filled from offcuts: the validator finds every mark cut quantity + allowance times plus its spares,
+     * and the saw sheet's kinds in the order cut, allowance, spare.
+     */
+    @Property(tries = 20, seed = "20261203", edgeCases = net.jqwik.api.EdgeCasesMode.FIRST)
+    void aMiscutAllowanceIsCutOnTopOfEveryMark(@ForAll @LongRange(min = 1, max = 1_000_000) long seed,
+                                               @ForAll @IntRange(min = 0, max = 3) int pieces,
+                                               @ForAll @IntRange(min = 0, max = 10_000) int percentHundredths,
+                                               @ForAll boolean sparesFromOffcuts) {
+        Kit random = fractional(seed, 0, 0);
+        Kit kit = random.withSettings(random.settings().withMiscutAllowance(new kitwright.model.MiscutAllowance(
+                pieces, BigDecimal.valueOf(percentHundredths, 2).doubleValue())));
+        CutPlan plan = KitCutter.cut(kit, new KitCutter.Options(sparesFromOffcuts, TestSections.LIMITS),
+                CutProgress.NONE);
+        CutPlanValidator.validate(kit, plan);
+        String csv = CutListCsv.format(kit, plan);
+        CutPlanValidator.validateCutList(plan, csv);
+        CutPlanValidator.validateKinds(kit, plan, csv);
+        assertThat(plan.sections()).noneMatch(s -> s.status() == Status.INFEASIBLE);
+    }
 }

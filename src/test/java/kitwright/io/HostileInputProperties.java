@@ -102,6 +102,10 @@ class HostileInputProperties {
                 value = "{\"lossRatePerCycle\": " + JSON_VALUES[random.nextInt(JSON_VALUES.length)] + ", \"cycles\": "
                         + JSON_VALUES[random.nextInt(JSON_VALUES.length)] + ", \"serviceLevel\": 0.95}";
             }
+            if (key.equals("miscutAllowance") && random.nextBoolean()) {
+                value = "{\"piecesPerMark\": " + JSON_VALUES[random.nextInt(JSON_VALUES.length)] + ", \"percent\": "
+                        + JSON_VALUES[random.nextInt(JSON_VALUES.length)] + "}";
+            }
             if (key.equals("stockCatalog") && random.nextBoolean()) {
                 value = "\"stock.csv\"";
             }

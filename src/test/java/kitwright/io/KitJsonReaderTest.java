@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.stream.Stream;
 import kitwright.model.JointBox;
 import kitwright.model.KitSettings;
+import kitwright.model.MiscutAllowance;
 import kitwright.model.NestTolerance;
 import kitwright.model.SparesPolicy;
 import org.junit.jupiter.api.Test;
@@ -38,7 +39,8 @@ class KitJsonReaderTest {
                   "nestEndAllowanceMm": 20,
                   "maxBundleMassKg": 50,
                   "jointBox": {"lengthMm": 800, "widthMm": 600, "heightMm": 400, "maxMassKg": 30},
-                  "spares": {"lossRatePerCycle": 0.02, "cycles": 10, "serviceLevel": 0.95}
+                  "spares": {"lossRatePerCycle": 0.02, "cycles": 10, "serviceLevel": 0.95},
+                  "miscutAllowance": {"piecesPerMark": 1, "percent": 2.5}
                 }
                 """);
 
@@ -47,11 +49,22 @@ class KitJsonReaderTest {
         KitSettings s = json.settings();
         assertThat(s).isEqualTo(new KitSettings("tower", "a tower kit", 3.0, 8, 750, 30, true, 42.5,
                 NestTolerance.NOMINAL, 3, 20, 50.0, new JointBox(800, 600, 400, 30),
-                new SparesPolicy(0.02, 10, 0.95)));
+                new SparesPolicy(0.02, 10, 0.95), new MiscutAllowance(1, 2.5)));
         assertThat(json.stockCatalog()).isEqualTo(dir.getParent().resolve("catalogs/steel.csv"));
         assertThat(json.materialsFile()).isEqualTo(Path.of("/data/materials.csv"));
         assertThat(json.crateCatalogFile()).isEqualTo(dir.resolve("crates/timber.csv"));
         assertThat(json.vehicleCatalogFile()).isEqualTo(dir.resolve("trucks.csv"));
+    }
+
+    @Test
+    void aMiscutAllowanceMayGiveEitherKeyAndAnEmptyOneAddsNothing(@TempDir Path dir) throws Exception {
+        Path pieces = KitFiles.write(dir, "pieces.json", "{\"miscutAllowance\": {\"piecesPerMark\": 2}}");
+        Path percent = KitFiles.write(dir, "percent.json", "{\"miscutAllowance\": {\"percent\": 5}}");
+        Path empty = KitFiles.write(dir, "empty.json", "{\"miscutAllowance\": {}}");
+
+        assertThat(KitJsonReader.read(pieces, dir).settings().miscutAllowance()).isEqualTo(new MiscutAllowance(2, 0));
+        assertThat(KitJsonReader.read(percent, dir).settings().miscutAllowance()).isEqualTo(new MiscutAllowance(0, 5));
+        assertThat(KitJsonReader.read(empty, dir).settings().miscutAllowance()).isEqualTo(MiscutAllowance.NONE);
     }
 
     @Test

@@ -2,11 +2,14 @@ package kitwright.io;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
+import kitwright.model.Joint;
 import kitwright.model.Kit;
 import kitwright.model.Material;
 import kitwright.model.Origin;
@@ -14,6 +17,7 @@ import kitwright.model.StockLength;
 import kitwright.model.StructureCount;
 import kitwright.model.TubeCatalog;
 import kitwright.model.VehicleType;
+import kitwright.plan.JointClearance;
 import kitwright.plan.KitSummary;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -100,7 +104,7 @@ class SampleDataTest {
     }
 
     @Test
-    void theCinemaOptionsDescribeTheSameStructuresWithDifferentMarks() throws Exception {
+    void theCinemaOptionsReshapeTheSameStructuresToTheirOwnMarks() throws Exception {
         Set<String> nestingChain = Set.of("CHS 88.9x3.2", "CHS 76.1x3.2", "CHS 60.3x3.2", "CHS 48.3x3.2",
                 "CHS 33.7x2.6");
         Map<String, Integer> firstMembers = null;
@@ -115,12 +119,47 @@ class SampleDataTest {
             assertThat(members).as(name + ": members per structure").isEqualTo(firstMembers);
             assertThat(summary.bars()).as(name + ": bars").isBetween(200, 600);
             assertThat(kit.bars()).allMatch(b -> nestingChain.contains(b.section())
-                    && b.lengthMm() >= 700 && b.lengthMm() <= 3000);
+                    && b.lengthMm() >= 600 && b.lengthMm() <= 3000);
+            // every member is exactly its mark's length: node to node minus the deduction at each end
+            assertThat(kit.bars()).allSatisfy(b -> assertThat(b.lengthMm()).as(name + " " + b.mark())
+                    .isEqualTo(b.nodeToNodeMm() - b.startDeductionMm() - b.endDeductionMm()));
             assertThat(kit.joints()).isNotEmpty();
         }
         assertThat(firstMembers).containsOnlyKeys("screen-frame", "ticket-canopy", "lighting-mast");
         List<Integer> marks = CINEMA.stream().map(n -> read(n).bars().size()).toList();
         assertThat(marks).containsExactly(6, 12, 20);
+    }
+
+    @Test
+    void cinemaBarEndsClearTheirSpheresByTheInventedEndCone() throws Exception {
+        // sample-kits/README.md: each tube end is a 40 mm end cone (the samples' invented joint system) on a sphere,
+        // so a deduction is a joint's radius + 40 mm; every bar end then clears even the smallest sphere
+        for (String name : CINEMA) {
+            Kit kit = KitReader.read(Path.of("sample-kits", name));
+            Set<Double> deductions = kit.joints().stream().map(j -> j.diameterMm() / 2 + 40)
+                    .collect(Collectors.toSet());
+            assertThat(kit.bars()).allSatisfy(b -> assertThat(List.of(b.startDeductionMm(), b.endDeductionMm()))
+                    .as(name + " " + b.mark()).allMatch(deductions::contains));
+            assertThat(JointClearance.warnings(kit)).as(name).isEmpty();
+        }
+    }
+
+    @Test
+    void sampleReadmeTellsTheCinemaOptionsAsTheDataHasThem() throws Exception {
+        String readme = Files.readString(Path.of("sample-kits", "README.md"));
+        for (String name : CINEMA) {
+            KitSummary summary = KitSummary.of(read(name));
+            assertThat(readme).as(name + " row").containsPattern("\\| `" + name + "` \\| " + summary.marks()
+                    + " \\| " + summary.bars() + " \\| " + String.format(Locale.ROOT, "%.2f", summary.reuseRatio())
+                    + " \\|");
+            for (Joint joint : read(name).joints()) {
+                assertThat(readme).contains(String.format(Locale.ROOT, "%.0f mm at an %s",
+                        joint.diameterMm() / 2 + 40, joint.mark()));
+            }
+        }
+        // a kit of parts: each option re-shapes the structures, a bar never fills a shorter member
+        assertThat(readme).contains("every member is exactly the length of one of that option's marks")
+                .doesNotContain("same members").doesNotContain("longest member").doesNotContain("35 mm");
     }
 
     private static Kit read(String name) {

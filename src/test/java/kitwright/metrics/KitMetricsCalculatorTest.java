@@ -167,15 +167,17 @@ class KitMetricsCalculatorTest {
     }
 
     @Test
-    @DisplayName("Without structures.csv the members are the bars the kit needs; without materials masses are null")
+    @DisplayName("Without structures.csv there are no members and no reuse ratio (null, as check has it);"
+            + " without materials masses are null")
     void withoutStructuresOrMaterials() {
         Kit kit = new Kit(null, KitSettings.defaults("plain"),
                 List.of(MetricsFixtures.bar("A", CHS_48, 2900, 12, 10), MetricsFixtures.bar("B", CHS_48, 1800, 3, 3)),
                 List.of(), List.of(), MetricsFixtures.catalog(), Map.of(), List.of(), List.of());
         KitMetrics m = KitMetricsCalculator.of(kit, plan());
-        assertThat(m.members()).isEqualTo(13);
-        assertThat(m.reuseRatio()).isCloseTo(13.0 / 15, within(1e-12));
+        assertThat(m.members()).isNull();
+        assertThat(m.reuseRatio()).isNull();
         assertThat(m.kitMassKg()).isNull();
+        assertThat(m.usedStockMassKg()).isNull();
         assertThat(m.boughtMassKg()).isNull();
         assertThat(m.co2eKg()).isNull();
         assertThat(m.carbon()).isEmpty();
@@ -193,5 +195,33 @@ class KitMetricsCalculatorTest {
         assertThat(KitMetricsCalculator.stockCost(with.apply(rows), plan())).isEqualTo(550.0);
         rows.set(0, new kitwright.model.StockLength(CHS_48, 6000, null, null, Origin.MILL));
         assertThat(KitMetricsCalculator.stockCost(with.apply(rows), plan())).isNull();
+    }
+
+    @Test
+    @DisplayName("Used stock mass = mill and rack pieces cut; bought mass = mill only (EN 10219-2 table masses)")
+    void usedStockMassCountsTheRackOffcutsTaken() {
+        KitMetrics m = KitMetricsCalculator.of(MetricsFixtures.kit(MetricsFixtures.materials()), plan());
+        // Cut: 42 m mill + 2.5 m rack of CHS 48.3x3.2, 12 m mill of CHS 60.3x3.2. EN 10219-2 table masses
+        // (from memory, src/docs/sources.md): 3.56 kg/m and 4.51 kg/m, each to 0.01 kg/m.
+        assertThat(m.usedStockMassKg()).isCloseTo(44.5 * 3.56 + 12 * 4.51, within(56.5 * 0.01));
+        assertThat(m.usedStockMassKg() - m.boughtMassKg()).as("the 2.5 m rack piece")
+                .isCloseTo(2.5 * 3.56, within(2.5 * 0.01));
+    }
+
+    @Test
+    @DisplayName("Kit mass counts the spare bars a plan cuts beyond bars.csv, as the bundles carry them")
+    void kitMassCountsTheSparesCut() {
+        Kit kit = MetricsFixtures.kit(MetricsFixtures.materials());
+        SectionCutPlan plain = plan().sections().get(0);
+        List<kitwright.cutting.CutPattern> patterns = new java.util.ArrayList<>(plain.patterns());
+        patterns.add(MetricsFixtures.pattern(6000, Origin.MILL, 1, A, A)); // the two spares of A
+        CutPlan withSpares = new CutPlan(List.of(new SectionCutPlan(plain.section(), 2, 5, 500, "cost",
+                Status.OPTIMAL, null, 450.0, 450.0, 0.0, plain.stockPieces() + 1, patterns,
+                List.of(new kitwright.cutting.Spare("A", 2))), new SectionCutPlan(CHS_60, 2, 5, 500, "cost",
+                Status.OPTIMAL, null, 160.0, 160.0, 0.0, 2, plan().sections().get(1).patterns(), List.of())));
+        kitwright.validate.CutPlanValidator.validate(kit, withSpares);
+        double m48 = Math.PI * (48.3 - 3.2) * 3.2 * 7850e-6; // EN 10219-2 mass formula, steel 7850 kg/m3
+        assertThat(KitMetricsCalculator.of(kit, withSpares).kitMassKg() - KitMetricsCalculator.of(kit, plan())
+                .kitMassKg()).isCloseTo(2 * 2.9 * m48, within(1e-9));
     }
 }

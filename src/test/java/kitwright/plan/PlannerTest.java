@@ -40,7 +40,8 @@ class PlannerTest {
     /** What every plan folder holds besides the files of {@link PlanFiles}. */
     private static final List<String> FOLDER_EXTRAS = List.of("timing.json", OutputFolder.MARKER);
     private static final List<String> CHAIN_FILES = List.of("report.html", "plan.json", "summary.json", "order.csv",
-            "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv");
+            "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "labels.html", "packing-lists.csv",
+            "manifests.csv", "plan.xlsx");
 
     static Stream<Path> sampleKits() throws Exception {
         try (Stream<Path> kits = Files.list(Path.of("sample-kits"))) {
@@ -72,7 +73,7 @@ class PlannerTest {
         assertThat(result.crates().lowerBound()).isLessThanOrEqualTo(result.crates().crates().size());
         assertThat(result.loads().status()).isIn(Status.OPTIMAL, Status.FEASIBLE);
         assertThat(result.loads().lowerBound()).isLessThanOrEqualTo(result.loads().tripCost() + 1e-9);
-        assertThat(files.keySet()).containsExactlyElementsOf(CHAIN_FILES);
+        assertThat(PlanFiles.written(result, DATE).keySet()).containsExactlyElementsOf(CHAIN_FILES);
         assertThat(result.stageSeconds().keySet()).containsExactlyElementsOf(Planner.STAGES);
 
         JsonNode plan = PrettyJson.mapper().readTree(files.get("plan.json"));
@@ -181,5 +182,6 @@ class PlannerTest {
                 .as("legend row, bundle drawing bars and bundle tables").isGreaterThanOrEqualTo(3);
         assertThat(files.get("packing-lists.csv")).contains("\"<b>&\"\" x 6");
         assertThat(files.get("nests.csv")).contains("\"<b>&\"\"");
+        assertThat(files.get("labels.html")).doesNotContain("<b>&").contains("&lt;b&gt;&amp;&quot;");
     }
 }

@@ -121,9 +121,11 @@ class HtmlReportTest {
         Kit kit = new Kit(bare.dir(), bare.settings(), bare.bars(), bare.structures(),
                 List.of(new kitwright.model.Joint("N90", 90, 1.6, 120), new kitwright.model.Joint("N110", 110, 2.6, 90)),
                 bare.catalog(), bare.materials(), bare.crates(), bare.vehicles());
-        kitwright.plan.KitSummary summary = kitwright.plan.KitSummary.of(kit);
+        var plan = ReportFixtures.samplePlan(kit);
+        kitwright.plan.KitSummary summary = kitwright.plan.KitSummary.of(kit,
+                kitwright.metrics.KitMass.sparesCut(plan));
         assertThat(summary.jointsMassKg()).isCloseTo(120 * 1.6 + 90 * 2.6, org.assertj.core.data.Offset.offset(1e-9));
-        String html = HtmlReport.render(ReportModel.of(kit, ReportFixtures.samplePlan(kit), DATE));
+        String html = HtmlReport.render(ReportModel.of(kit, plan, DATE));
         assertThat(html).containsPattern("figure-label\">Kit mass</div>\\s*<div class=\"figure-value\">"
                 + Pattern.quote(ShopFormat.kg(summary.kitMassKg()) + "\u00A0kg") + "</div>");
         assertThat(html).contains(ShopFormat.kg(summary.barsMassKg()) + "\u00A0kg; 210 joints, "

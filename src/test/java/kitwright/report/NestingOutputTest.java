@@ -14,7 +14,7 @@ import kitwright.model.Status;
 import kitwright.nesting.Bundle;
 import kitwright.nesting.NestPlan;
 import kitwright.nesting.NestedTube;
-import org.apache.commons.csv.CSVFormat;
+import kitwright.validate.CsvOutput;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -41,8 +41,7 @@ class NestingOutputTest {
     void nestsCsv() throws Exception {
         StringWriter out = new StringWriter();
         NestingCsv.writeNests(plan(), out);
-        List<CSVRecord> rows = CSVFormat.DEFAULT.builder().setHeader().get().parse(new StringReader(out.toString()))
-                .getRecords();
+        List<CSVRecord> rows = CsvOutput.records(out.toString());
         assertThat(rows).hasSize(7);
         CSVRecord chain = rows.get(2);
         assertThat(chain.get("tube")).isEqualTo("B001.1.1");

@@ -99,7 +99,7 @@ class PlanFiguresJsonTest {
                 "toMake", "fromOffcuts", "bought", "missing");
         assertThat(fieldNames(json.get("figures"))).containsExactly("marks", "bars", "members", "reuseRatio",
                 "stockPieces", "boughtPieces", "stockLengthMm", "boughtLengthMm", "cost", "offcutPct", "scrapPct",
-                "remnantPct", "kitMassKg", "boughtMassKg", "co2eKg", "carbon");
+                "remnantPct", "kitMassKg", "boughtMassKg", "usedStockMassKg", "co2eKg", "carbon");
     }
 
     @Test
@@ -188,6 +188,7 @@ class PlanFiguresJsonTest {
         double scrap = 0;
         double remnant = 0;
         double boughtMass = 0;
+        double usedMass = 0;
         for (SectionCutPlan s : result.cutting().sections()) {
             double[] dt = sections.get(s.section());
             double perMetre = Math.PI * (dt[0] - dt[1]) * dt[1] * density * 1e-6; // EN 10219-2 mass formula
@@ -200,6 +201,7 @@ class PlanFiguresJsonTest {
                 } else {
                     scrap += p.count() * p.offcutMm();
                 }
+                usedMass += p.count() * p.stockLengthMm() / 1000 * perMetre;
                 if (p.origin() == Origin.MILL) {
                     bought += p.count() * p.stockLengthMm();
                     boughtMass += p.count() * p.stockLengthMm() / 1000 * perMetre;
@@ -215,10 +217,18 @@ class PlanFiguresJsonTest {
         assertThat(f.get("remnantPct").asDouble()).isCloseTo(100 * remnant / stock, within(0.0051));
         double[] a = sections.get("CHS 48.3x3.2");
         double[] c = sections.get("CHS 33.7x2.6");
-        double kitMass = (10 * 1.450 + 6 * 2.400) * Math.PI * (a[0] - a[1]) * a[1] * density * 1e-6
-                + 12 * 0.950 * Math.PI * (c[0] - c[1]) * c[1] * density * 1e-6 + 14 * 0.8;
+        // the kit mass counts every bar the kit holds: bars.csv and the spares the plan cuts beyond it
+        Map<String, Integer> listed = listedSpares(result.cutting());
+        assertThat(listed.values().stream().mapToInt(Integer::intValue).sum()).as("the policy makes spares")
+                .isPositive();
+        double kitMass = ((10 + listed.getOrDefault("A", 0)) * 1.450 + (6 + listed.getOrDefault("B", 0)) * 2.400)
+                * Math.PI * (a[0] - a[1]) * a[1] * density * 1e-6
+                + (12 + listed.getOrDefault("C", 0)) * 0.950 * Math.PI * (c[0] - c[1]) * c[1] * density * 1e-6
+                + 14 * 0.8;
         assertThat(f.get("kitMassKg").asDouble()).isCloseTo(kitMass, within(0.0006));
         assertThat(f.get("boughtMassKg").asDouble()).isCloseTo(boughtMass, within(0.0006));
+        assertThat(f.get("usedStockMassKg").asDouble()).as("no rack offcuts in this catalog: used = bought")
+                .isCloseTo(usedMass, within(0.0006));
         assertThat(f.get("co2eKg").asDouble()).as("bought mass x the steel factor of materials.csv")
                 .isCloseTo(boughtMass * factor, within(0.0006));
         JsonNode carbon = f.get("carbon");

@@ -213,4 +213,50 @@ class ReportBrowserTest {
         assertThat(Double.parseDouble(box.group(1))).isCloseTo(595.3, org.assertj.core.data.Offset.offset(1.0));
         assertThat(Double.parseDouble(box.group(2))).isCloseTo(841.9, org.assertj.core.data.Offset.offset(1.0));
     }
+
+    @Test
+    @DisplayName("printed, every page of the saw sheets names the section it shows, continuation pages too")
+    void everyPrintedSawSheetPageNamesItsSection(@TempDir Path dir) throws Exception {
+        HeadlessChromium chromium = chromiumOrSkip(dir);
+        Path pdftotext = Path.of("/usr/bin/pdftotext");
+        if (!java.nio.file.Files.isExecutable(pdftotext)) {
+            String message = "pdftotext is not installed (apt-get install poppler-utils); the print test needs it";
+            if ("true".equals(System.getenv("CI"))) {
+                fail(message + " and CI=true");
+            }
+            Assumptions.abort(message + "; skipped outside CI");
+        }
+        Path out = dir.resolve("cinema-12");
+        CliRun run = CliRun.of("plan", "sample-kits/cinema-12", "--out", out.toString(), "--date", "2026-12-01");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        Path pdf = dir.resolve("report.pdf");
+        chromium.printToPdf(out.resolve("report.html"), pdf);
+        Process p = new ProcessBuilder(pdftotext.toString(), "-layout", pdf.toString(), "-")
+                .redirectErrorStream(true).start();
+        String text = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertThat(p.waitFor()).isZero();
+        List<String> sections = KitReader.read(Path.of("sample-kits", "cinema-12")).bars().stream()
+                .map(Bar::section).distinct().toList();
+        int sawPages = 0;
+        int continuations = 0;
+        for (String page : text.split("\f")) {
+            if (!page.matches("(?s).*\\bPattern \\d+.*")) {
+                continue;
+            }
+            sawPages++;
+            String head = page.strip().lines().findFirst().orElse("");
+            assertThat(head).as("first line of a saw-sheet page").contains("saw sheet");
+            assertThat(sections.stream().filter(head::contains)).as(head).hasSize(1);
+            String section = sections.stream().filter(head::contains).findFirst().orElseThrow();
+            if (!page.contains("Saw sheet \u00B7 " + section)) {
+                continuations++;
+            }
+            for (String line : page.lines().filter(l -> l.matches("\\s*Pattern \\d+.*")).toList()) {
+                assertThat(line).as("pattern heading on the page of " + section).contains(section);
+            }
+        }
+        assertThat(sawPages).as("pages with patterns").isGreaterThanOrEqualTo(sections.size());
+        // cinema-12 printed on A4: two sections run onto a second page (measured with Chromium 156)
+        assertThat(continuations).as("continuation pages").isPositive();
+    }
 }

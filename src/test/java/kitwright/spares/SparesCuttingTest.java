@@ -121,4 +121,19 @@ class SparesCuttingTest {
             assertThat(s.missing()).isZero();
         }
     }
+
+    @Test
+    void aReplanForSparesTakesTheAllowanceOnceNotOfTheLargerQuantity() {
+        // 50 % of A's 4 bars is 2 allowance pieces, of B's 5 bars 3 (2.5 rounded up); 3 bought spares of A must
+        // raise A's demand to 4 + 2 + 3 = 9, not to 7 + 50 % of 7 rounded up = 11
+        Kit kit = kit(null);
+        Kit withAllowance = kit.withSettings(kit.settings().withMiscutAllowance(
+                new kitwright.model.MiscutAllowance(0, 50)));
+
+        Kit more = SparesCutting.withExtraDemand(withAllowance, Map.of("A", 3));
+
+        assertThat(kitwright.cutting.KitCutter.problem(more, CHS, kitwright.cutting.SearchLimits.defaults(1))
+                .demands()).extracting(kitwright.cutting.Demand::quantity).containsExactly(9, 8);
+        assertThat(more.bars()).extracting(Bar::requiredQuantity).containsExactly(4, 5);
+    }
 }

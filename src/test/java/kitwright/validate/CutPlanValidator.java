@@ -21,7 +21,8 @@ import kitwright.model.Status;
 
 /**
  * Re-checks a cutting plan from first principles, independent of the optimiser's code: every pattern fits the saw
- * model, offcuts and their kind are right, every mark is cut as often as demanded (plus the spares reported), rack
+ * model, offcuts and their kind are right, every mark is cut as often as demanded (its quantity plus its miscut
+ * allowance, then the spares reported), rack
  * and limited stock are not overdrawn, the value is the sum of prices (or lengths), the bound is below the value and
  * the status agrees with the numbers. Throws AssertionError naming the first thing wrong.
  *
@@ -38,7 +39,11 @@ public final class CutPlanValidator {
     private CutPlanValidator() {
     }
 
-    /** Every section of a kit's plan, against the kit's bars and catalog (settings as given in the kit). */
+    /**
+     * Every section of a kit's plan, against the kit's bars and catalog (settings as given in the kit): each mark's
+     * demand is its quantity plus the miscut allowance of kit.json, max(piecesPerMark, ceil(percent / 100 x
+     * quantity)), worked out here again.
+     */
     public static void validate(Kit kit, CutPlan plan) {
         List<String> sections = kit.usedSections();
         check(plan.sections().size() == sections.size(), "one plan per used section: " + sections);
@@ -47,7 +52,7 @@ public final class CutPlanValidator {
             SectionCutPlan section = plan.sections().get(s);
             check(section.section().equals(name), "sections in catalog order: expected " + name);
             List<Demand> demands = kit.bars().stream().filter(b -> b.section().equals(name))
-                    .map(b -> new Demand(b.mark(), b.lengthMm(), b.quantity())).toList();
+                    .map(b -> new Demand(b.mark(), b.lengthMm(), b.quantity() + allowance(kit, b))).toList();
             List<StockOption> stock = kit.catalog().stockFor(name).stream().map(StockOption::of).toList();
             validate(demands, stock, kit.settings().kerfMm(), kit.settings().trimMm(),
                     kit.settings().minRemnantMm(), section);
@@ -181,13 +186,7 @@ public final class CutPlanValidator {
      * and ends by the far trim line. No row places a cut past the stock end.
      */
     public static void validateCutList(CutPlan plan, String csv) {
-        List<org.apache.commons.csv.CSVRecord> rows;
-        try {
-            rows = org.apache.commons.csv.CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
-                    .parse(new java.io.StringReader(csv)).getRecords();
-        } catch (java.io.IOException e) {
-            throw new AssertionError("cut-list.csv unreadable: " + e.getMessage());
-        }
+        List<org.apache.commons.csv.CSVRecord> rows = rows(csv);
         int row = 0;
         int stockPiece = 0;
         for (SectionCutPlan section : plan.sections()) {
@@ -223,6 +222,56 @@ public final class CutPlanValidator {
             }
         }
         check(row == rows.size(), "cut-list.csv has " + (rows.size() - row) + " rows more than the plan");
+    }
+
+    /**
+     * The miscut allowance of a mark from kit.json's setting: the larger of the pieces per mark and the least whole
+     * number of pieces k with 100 k at least percent x quantity, compared in exact decimals.
+     */
+    static int allowance(Kit kit, Bar bar) {
+        kitwright.model.MiscutAllowance setting = kit.settings().miscutAllowance();
+        BigDecimal share = exact(setting.percent()).multiply(BigDecimal.valueOf(bar.quantity()));
+        int k = 0;
+        while (BigDecimal.valueOf(100L * k).compareTo(share) < 0) {
+            k++;
+        }
+        return Math.max(setting.piecesPerMark(), k);
+    }
+
+    /**
+     * Re-checks the {@code kind} column of a saw sheet ({@code cut-list.csv} text) against the kit: taking each
+     * mark's pieces in the sheet's order, the first {@code quantity} are {@code cut}, the next {@code allowance}
+     * (the miscut allowance) are {@code allowance}, and the rest {@code spare}; offcut rows are {@code remnant} or
+     * {@code scrap}. Each mark's rows add up to what the plan cuts of it.
+     */
+    public static void validateKinds(Kit kit, CutPlan plan, String csv) {
+        List<org.apache.commons.csv.CSVRecord> rows = rows(csv);
+        Map<String, Integer> seen = new HashMap<>();
+        for (org.apache.commons.csv.CSVRecord r : rows) {
+            String kind = r.get("kind");
+            String mark = r.get("mark");
+            String at = "cut-list.csv line " + (r.getRecordNumber() + 1) + ": ";
+            if (mark.isEmpty()) {
+                check(kind.equals("remnant") || kind.equals("scrap"), at + "an offcut row is remnant or scrap, not "
+                        + kind);
+                continue;
+            }
+            Bar bar = kit.bar(mark).orElseThrow(() -> new AssertionError(at + "unknown mark " + mark));
+            int n = seen.merge(mark, 1, Integer::sum);
+            String expected = n <= bar.quantity() ? "cut" : n <= bar.quantity() + allowance(kit, bar) ? "allowance"
+                    : "spare";
+            check(kind.equals(expected), at + "piece " + n + " of mark " + mark + " is " + kind + ", expected "
+                    + expected + " (quantity " + bar.quantity() + ", allowance " + allowance(kit, bar) + ")");
+        }
+        Map<String, Integer> cut = new HashMap<>();
+        plan.sections().forEach(s -> s.patterns().forEach(p -> p.cuts()
+                .forEach(c -> cut.merge(c.mark(), p.count(), Integer::sum))));
+        check(cut.equals(seen), "cut-list.csv pieces per mark " + seen + ", the plan cuts " + cut);
+    }
+
+    /** The rows of a saw sheet, by header name (the file's byte-order mark and CRLF checked). */
+    private static List<org.apache.commons.csv.CSVRecord> rows(String csv) {
+        return CsvOutput.records(csv);
     }
 
     /** The decimal a double was written as: its shortest decimal form. */

@@ -69,22 +69,23 @@ class CutPlanValidatorTest {
     @Test
     void rejectsASawSheetThatPlacesACutPastTheStockEnd() {
         CutPlan plan = new CutPlan(List.of(plan(1190.2, 1190.2, 5, 43.8)));
-        String header = "stock_piece,section,stock_length_mm,origin,sequence,kind,mark,length_mm,tolerance_mm,"
-                + "start_mm\n";
+        // laid out as kitwright writes every CSV: byte-order mark, CRLF line ends
+        String header = "\uFEFFstock_piece,section,stock_length_mm,origin,sequence,kind,mark,length_mm,"
+                + "tolerance_mm,start_mm\r\n";
         StringBuilder good = new StringBuilder(header);
         double[] starts = {0, 1191.24, 2382.48, 3573.72, 4764.96}; // k x (1190.2 + 1.04), by hand
         for (int i = 0; i < 5; i++) {
             good.append("1,AL 30x2,6000,mill,").append(i + 1).append(",cut,A1,1190.2,,").append(starts[i])
-                    .append('\n');
+                    .append("\r\n");
         }
-        String valid = good + "1,AL 30x2,6000,mill,6,scrap,,43.8,,5956.2\n";
+        String valid = good + "1,AL 30x2,6000,mill,6,scrap,,43.8,,5956.2\r\n";
         assertThatCode(() -> CutPlanValidator.validateCutList(plan, valid)).doesNotThrowAnyException();
         // the scrap row one kerf late: 5957.24 + 43.8 = 6001.04, past the stock end
-        String late = good + "1,AL 30x2,6000,mill,6,scrap,,43.8,,5957.24\n";
+        String late = good + "1,AL 30x2,6000,mill,6,scrap,,43.8,,5957.24\r\n";
         assertThatThrownBy(() -> CutPlanValidator.validateCutList(plan, late))
                 .isInstanceOf(AssertionError.class).hasMessageContaining("starts at 5957.24, expected 5956.2");
         // the last cut moved 50 mm on: it would end at 6005.16
-        String past = valid.replace(",4764.96\n", ",4814.96\n");
+        String past = valid.replace(",4764.96\r\n", ",4814.96\r\n");
         assertThatThrownBy(() -> CutPlanValidator.validateCutList(plan, past))
                 .isInstanceOf(AssertionError.class).hasMessageContaining("row 6: starts at 4814.96");
         // the saw sheet written for the overfull plan of the report: ten 599.1 mm pieces, kerf 1.04, the tenth
@@ -93,9 +94,9 @@ class CutPlanValidatorTest {
         for (int i = 0; i < 10; i++) {
             overrun.append("1,AL 30x2,6000,mill,").append(i + 1).append(",cut,A1,599.1,,")
                     .append(new java.math.BigDecimal("600.14").multiply(java.math.BigDecimal.valueOf(i))
-                            .stripTrailingZeros().toPlainString()).append('\n');
+                            .stripTrailingZeros().toPlainString()).append("\r\n");
         }
-        overrun.append("1,AL 30x2,6000,mill,11,scrap,,0,,6000\n");
+        overrun.append("1,AL 30x2,6000,mill,11,scrap,,0,,6000\r\n");
         assertThatThrownBy(() -> CutPlanValidator.validateCutList(new CutPlan(List.of(plan(599.1, 599.1, 10, 0))),
                 overrun.toString())).isInstanceOf(AssertionError.class)
                 .hasMessageContaining("row 11: ends at 6000.36, past the far trim line 6000");

@@ -1,12 +1,16 @@
 package kitwright.validate;
 
-import java.io.IOException;
-import java.io.StringReader;
+import java.math.BigInteger;
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.SectionCutPlan;
@@ -25,7 +29,6 @@ import kitwright.packing.ItemKind;
 import kitwright.packing.JointBoxLoad;
 import kitwright.plan.PlanResult;
 import kitwright.report.LogisticsCsv;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 
 /**
@@ -40,13 +43,19 @@ import org.apache.commons.csv.CSVRecord;
  *   <li>every crate is on exactly one vehicle;</li>
  *   <li>the packing lists ({@code packing-lists.csv}) name each crate once with its type, the marks and counts of
  *   its tubes and joints, its bundles and boxes and its gross mass, and over all crates the marks add up to the
- *   pieces cut plus the kit's joints; the manifests ({@code manifests.csv}) list each vehicle's crates and mass.</li>
+ *   pieces cut plus the kit's joints; the manifests ({@code manifests.csv}) list each vehicle's crates and mass;
+ *   every list of ids in them is in number order (the same text before the last number, the numbers rising);</li>
+ *   <li>the ids of bundles, joint boxes, crates and trips are all different and none reads like a mark of the kit's
+ *   bars or joints: no two have the same letters before their first digit, counted in upper case without the
+ *   characters that are neither letters nor digits (so no id equals a mark, whatever the case).</li>
  * </ul>
  * A stage that has no feasible plan must say why, and the stages after it must not pretend otherwise. Throws an
  * AssertionError naming what is wrong.
  */
 public final class PlanValidator {
     private static final double KG = 0.051; // the CSVs round masses to 0.1 kg
+    private static final Pattern LAST_NUMBER = Pattern.compile("(.*?)(\\d+)");
+    private static final Pattern LEADING_LETTERS = Pattern.compile("^\\p{L}*");
 
     private PlanValidator() {
     }
@@ -62,15 +71,23 @@ public final class PlanValidator {
         validate(result, files);
     }
 
-    /** The records of a plan and the files written for it (by file name; CSVs not given are not checked). */
+    /**
+     * The records of a plan and the files written for it (by file name; CSVs not given are not checked): the saw
+     * sheet ({@code cut-list.csv}) with its kinds, the packing lists and the manifests.
+     */
     public static void validate(PlanResult result, Map<String, String> files) {
         Kit kit = result.kit();
         CutPlanValidator.validate(kit, result.cutting());
+        if (files.containsKey("cut-list.csv")) {
+            CutPlanValidator.validateCutList(result.cutting(), files.get("cut-list.csv"));
+            CutPlanValidator.validateKinds(kit, result.cutting(), files.get("cut-list.csv"));
+        }
         check(result.nesting() != null, "the nesting stage ran");
         NestPlanValidator.validate(kit, result.cutting(), result.nesting().plan());
         check((result.nesting().plan().status() == Status.INFEASIBLE) == (result.nesting().reason() != null),
                 "a nesting reason exactly when the nesting is INFEASIBLE");
         cutPiecesAreTubes(result);
+        idsReadLikeNoMark(result);
         if (!result.logisticsPlanned()) {
             check(result.crates() == null && result.loads() == null, "crates and loads planned together or not");
             check(kit.crates().isEmpty() || kit.vehicles().isEmpty(), "logistics skipped only without a catalog");
@@ -179,9 +196,11 @@ public final class PlanValidator {
             }
             check(parseMarks(row.get("marks")).equals(marks), at + "marks " + row.get("marks") + ", holds " + marks);
             check(Integer.parseInt(row.get("bundles")) == bundleIds.size()
-                    && words(row.get("bundle_ids")).equals(bundleIds), at + "bundles");
-            check(Integer.parseInt(row.get("boxes")) == boxIds.size() && words(row.get("box_ids")).equals(boxIds),
+                    && sameIds(words(row.get("bundle_ids")), bundleIds), at + "bundles");
+            check(Integer.parseInt(row.get("boxes")) == boxIds.size() && sameIds(words(row.get("box_ids")), boxIds),
                     at + "joint boxes");
+            check(inNumberOrder(words(row.get("bundle_ids"))) && inNumberOrder(words(row.get("box_ids"))),
+                    at + "ids in number order: " + row.get("bundle_ids") + " / " + row.get("box_ids"));
             double contents = c.items().stream().mapToDouble(CrateItem::massKg).sum();
             check(Math.abs(Double.parseDouble(row.get("gross_kg")) - (c.tareKg() + contents)) <= KG,
                     at + "gross " + row.get("gross_kg") + " kg, tare + contents " + (c.tareKg() + contents));
@@ -212,8 +231,9 @@ public final class PlanValidator {
             String at = "manifest of " + v.id() + ": ";
             check(row.get("vehicle").equals(v.id()) && row.get("type").equals(v.type()), at + "id and type");
             List<String> refs = v.crates().stream().map(PlacedCrate::ref).toList();
-            check(Integer.parseInt(row.get("crates")) == refs.size() && words(row.get("crate_ids")).equals(refs),
+            check(Integer.parseInt(row.get("crates")) == refs.size() && sameIds(words(row.get("crate_ids")), refs),
                     at + "crates");
+            check(inNumberOrder(words(row.get("crate_ids"))), at + "ids in number order: " + row.get("crate_ids"));
             double mass = refs.stream().mapToDouble(r -> byId.get(r).grossKg()).sum();
             check(Math.abs(Double.parseDouble(row.get("mass_kg")) - mass) <= KG, at + "mass " + row.get("mass_kg")
                     + " kg, its crates weigh " + mass);
@@ -221,15 +241,64 @@ public final class PlanValidator {
         }
     }
 
-    private static List<CSVRecord> read(String csv, List<String> header) {
-        try {
-            List<CSVRecord> rows = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get()
-                    .parse(new StringReader(csv)).getRecords();
-            check(rows.isEmpty() || rows.get(0).getParser().getHeaderNames().equals(header), "CSV header " + header);
-            return rows;
-        } catch (IOException e) {
-            throw new AssertionError("CSV unreadable", e);
+    /** Every id of the plan against every mark of the kit, and against each other. */
+    private static void idsReadLikeNoMark(PlanResult result) {
+        Map<String, List<String>> byKind = new TreeMap<>();
+        byKind.put("bundle", result.nesting().plan().bundles().stream().map(Bundle::id).toList());
+        if (result.crates() != null) {
+            byKind.put("joint box", result.crates().boxes().stream().map(JointBoxLoad::id).toList());
+            byKind.put("crate", result.crates().crates().stream().map(Crate::id).toList());
         }
+        if (result.loads() != null) {
+            byKind.put("trip", result.loads().vehicles().stream().map(VehicleLoad::id).toList());
+        }
+        Map<String, String> markOf = new HashMap<>();
+        result.kit().bars().forEach(b -> markOf.put(letters(b.mark()), b.mark()));
+        result.kit().joints().forEach(j -> markOf.put(letters(j.mark()), j.mark()));
+        Map<String, String> kindOf = new HashMap<>();
+        Set<String> seen = new HashSet<>();
+        byKind.forEach((kind, ids) -> {
+            for (String id : ids) {
+                check(seen.add(id), "id " + id + " given twice");
+                String mark = markOf.get(letters(id));
+                check(mark == null, kind + " " + id + " reads like mark " + mark);
+                String other = kindOf.putIfAbsent(letters(id), kind);
+                check(other == null || other.equals(kind), kind + " " + id + " reads like the ids of a " + other);
+            }
+        });
+    }
+
+    /**
+     * The letters a text starts with, in upper case, once everything but letters and digits is dropped: two texts
+     * with the same such letters read alike (C1, c-01; BDL-1, bdl12).
+     */
+    public static String letters(String text) {
+        String plain = text.toUpperCase(Locale.ROOT).replaceAll("[^\\p{L}\\p{Nd}]", "");
+        Matcher m = LEADING_LETTERS.matcher(plain);
+        return m.find() ? m.group() : "";
+    }
+
+    private static boolean sameIds(List<String> printed, List<String> held) {
+        return printed.stream().sorted().toList().equals(held.stream().sorted().toList());
+    }
+
+    /** Each id has the text of the one before it before its last number, and a larger last number. */
+    public static boolean inNumberOrder(List<String> ids) {
+        for (int i = 1; i < ids.size(); i++) {
+            Matcher a = LAST_NUMBER.matcher(ids.get(i - 1));
+            Matcher b = LAST_NUMBER.matcher(ids.get(i));
+            if (!a.matches() || !b.matches() || !a.group(1).equals(b.group(1))
+                    || new BigInteger(a.group(2)).compareTo(new BigInteger(b.group(2))) >= 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static List<CSVRecord> read(String csv, List<String> header) {
+        List<CSVRecord> rows = CsvOutput.records(csv);
+        check(rows.isEmpty() || rows.get(0).getParser().getHeaderNames().equals(header), "CSV header " + header);
+        return rows;
     }
 
     /** "A1 x 12; N90 x 40" (packing-lists.csv) as a map. */

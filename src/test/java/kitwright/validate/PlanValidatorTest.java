@@ -127,7 +127,7 @@ class PlanValidatorTest {
         String lists = files.get(LogisticsCsv.PACKING_LISTS);
         Map<String, String> wrongCount = new HashMap<>(files);
         wrongCount.put(LogisticsCsv.PACKING_LISTS, lists.replace("A x 6", "A x 5"));
-        rejects(good, wrongCount, "packing list of C1: marks");
+        rejects(good, wrongCount, "packing list of CRT-1: marks");
         Map<String, String> noJoints = new HashMap<>(files);
         noJoints.put(LogisticsCsv.PACKING_LISTS, lists.replace("; N90 x 12", ""));
         rejects(good, noJoints, "marks");
@@ -137,6 +137,38 @@ class PlanValidatorTest {
         cells[4] = String.valueOf(Double.parseDouble(cells[4]) + 5);
         Map<String, String> heavier = new HashMap<>(files);
         heavier.put(LogisticsCsv.MANIFESTS, manifests.replace(row, String.join(",", cells)));
-        rejects(good, heavier, "manifest of V1: mass");
+        rejects(good, heavier, "manifest of TRIP-1: mass");
+    }
+
+    @Test
+    @DisplayName("rejects packing lists and manifests whose ids are out of number order")
+    void rejectsIdsOutOfNumberOrder() {
+        Map<String, String> files = files(good);
+        String lists = files.get(LogisticsCsv.PACKING_LISTS);
+        Crate crate = good.crates().crates().stream().filter(c -> c.items(kitwright.packing.ItemKind.BUNDLE).size() > 1)
+                .findFirst().orElseThrow();
+        String ids = kitwright.report.CrateContents.refs(crate, kitwright.packing.ItemKind.BUNDLE);
+        List<String> reversed = new ArrayList<>(List.of(ids.split(" ")));
+        java.util.Collections.reverse(reversed);
+        Map<String, String> unordered = new HashMap<>(files);
+        unordered.put(LogisticsCsv.PACKING_LISTS, lists.replace(ids, String.join(" ", reversed)));
+        rejects(good, unordered, "packing list of " + crate.id() + ": ids in number order");
+    }
+
+    @Test
+    @DisplayName("rejects a trip id that reads like a mark (mark E, trip e-01) and an id given twice")
+    void rejectsAnIdLikeAMark() {
+        LoadPlan l = good.loads();
+        List<VehicleLoad> renamed = new ArrayList<>(l.vehicles());
+        VehicleLoad v = renamed.get(0);
+        renamed.set(0, new VehicleLoad("e-01", v.type(), v.deckLengthMm(), v.deckWidthMm(), v.deckHeightMm(),
+                v.payloadKg(), v.massKg(), v.centreOfGravityMm(), v.crates(), v.costPerTrip(), v.floorLengthMm()));
+        rejects(with(good.nesting().plan(), good.crates(), new LoadPlan(l.status(), l.lowerBound(), renamed,
+                l.tripCost(), l.bounds(), null)), Map.of(), "trip e-01 reads like mark E");
+        renamed.set(0, new VehicleLoad(good.crates().crates().get(0).id(), v.type(), v.deckLengthMm(),
+                v.deckWidthMm(), v.deckHeightMm(), v.payloadKg(), v.massKg(), v.centreOfGravityMm(), v.crates(),
+                v.costPerTrip(), v.floorLengthMm()));
+        rejects(with(good.nesting().plan(), good.crates(), new LoadPlan(l.status(), l.lowerBound(), renamed,
+                l.tripCost(), l.bounds(), null)), Map.of(), "given twice");
     }
 }

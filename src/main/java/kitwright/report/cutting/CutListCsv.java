@@ -7,6 +7,7 @@ import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.PieceKind;
 import kitwright.cutting.SawArithmetic;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.model.Bar;
@@ -18,8 +19,8 @@ import kitwright.model.Kit;
  * {@code trim + sum over earlier pieces of (length + kerf)}; the offcut starts after the last piece's kerf, or on
  * the far trim line when that kerf would pass it (no row ever starts past the stock end). Positions are summed in
  * exact decimals ({@link SawArithmetic}).
- * {@code kind} is {@code cut}, {@code spare} (a bar beyond the kit's quantity of its mark), {@code remnant} or
- * {@code scrap}.
+ * {@code kind} is {@code cut}, {@code allowance} (a miscut allowance piece), {@code spare} (a bar beyond the kit's
+ * quantity and allowance of its mark; {@link PieceKind} decides), {@code remnant} or {@code scrap}.
  */
 public final class CutListCsv {
     public static final List<String> HEADER = List.of("stock_piece", "section", "stock_length_mm", "origin",
@@ -43,7 +44,7 @@ public final class CutListCsv {
                     for (Cut cut : pattern.cuts()) {
                         Bar bar = bars.get(cut.mark());
                         int made = cutSoFar.merge(cut.mark(), 1, Integer::sum);
-                        String kind = bar != null && made > bar.quantity() ? "spare" : "cut";
+                        String kind = PieceKind.of(kit, bar, made).code();
                         rows.add(List.of(stockPiece, section.section(), pattern.stockLengthMm(),
                                 pattern.origin().code(), ++sequence, kind, cut.mark(), cut.lengthMm(),
                                 bar == null || bar.toleranceMm() == null ? "" : bar.toleranceMm(),

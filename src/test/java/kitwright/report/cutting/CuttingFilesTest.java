@@ -16,6 +16,7 @@ import kitwright.model.KitSettings;
 import kitwright.model.Origin;
 import kitwright.model.Status;
 import kitwright.model.StockLength;
+import kitwright.validate.CsvOutput;
 import kitwright.validate.CutPlanValidator;
 import org.junit.jupiter.api.Test;
 
@@ -46,7 +47,7 @@ class CuttingFilesTest {
         CutPlanValidator.validate(kit(), plan());
         String csv = CutListCsv.format(kit(), plan());
         CutPlanValidator.validateCutList(plan(), csv);
-        assertThat(csv.lines()).containsExactly(
+        assertThat(CsvOutput.lines(csv)).containsExactly(
                 "stock_piece,section,stock_length_mm,origin,sequence,kind,mark,length_mm,tolerance_mm,start_mm",
                 "1,CHS 48.3x3.2,6000,mill,1,cut,A,2500,0.5,5",
                 "1,CHS 48.3x3.2,6000,mill,2,cut,A,2500,0.5,2507",
@@ -74,7 +75,7 @@ class CuttingFilesTest {
         CutPlanValidator.validate(kit, plan);
         String csv = CutListCsv.format(kit, plan);
         CutPlanValidator.validateCutList(plan, csv);
-        List<String> lines = csv.lines().toList();
+        List<String> lines = CsvOutput.lines(csv);
         assertThat(lines).hasSize(12);
         assertThat(lines.get(3)).isEqualTo("1,CHS 48.3x3.2,6000,mill,3,cut,A,599.06,0.5,1200.2");
         assertThat(lines.get(10)).isEqualTo("1,CHS 48.3x3.2,6000,mill,10,cut,A,599.06,0.5,5400.9");
@@ -83,7 +84,7 @@ class CuttingFilesTest {
 
     @Test
     void orderListsMillStockThenTheRackOffcutsApart() {
-        assertThat(OrderCsv.format(kit(), plan()).lines()).containsExactly(
+        assertThat(CsvOutput.lines(OrderCsv.format(kit(), plan()))).containsExactly(
                 "section,origin,stock_length_mm,pieces,unit_price,total",
                 "CHS 48.3x3.2,mill,6000,1,30,30",
                 "CHS 48.3x3.2,rack,3200,1,2,2");
@@ -91,7 +92,7 @@ class CuttingFilesTest {
 
     @Test
     void rackAfterKeepsTheUnusedOffcutsAndAddsTheNewRemnants() {
-        assertThat(RackAfterCsv.format(kit(), plan()).lines()).containsExactly(
+        assertThat(CsvOutput.lines(RackAfterCsv.format(kit(), plan()))).containsExactly(
                 "section,material,outer_diameter_mm,wall_mm,length_mm,price,available,origin,weld_bead_mm,"
                         + "od_tolerance_mm,wall_tolerance_pct",
                 "CHS 48.3x3.2,steel,48.3,3.2,3200,2,2,rack,,,",
