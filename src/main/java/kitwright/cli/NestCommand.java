@@ -186,7 +186,7 @@ public final class NestCommand implements Callable<Integer> {
         StringBuilder sb = new StringBuilder();
         sb.append(String.format(Locale.ROOT, "Kit %s: %d cut pieces nest into %d bundles (lower bound %s; %s).%n",
                 kit.name(), result.pieces(), plan.bundles().size(), PlanSummaryText.bound(plan.lowerBound()),
-                plan.status()));
+                result.statusText()));
         sb.append(String.format(Locale.ROOT, "Envelope volume %.3f m3 nested, %.3f m3 loose; %d bundles above %.0f kg"
                 + " (%s).%n", result.bundledVolumeM3(), result.looseVolumeM3(), heavy, Handling.ONE_PERSON_LIFT_KG,
                 Handling.TWO_PEOPLE_OR_HOIST));

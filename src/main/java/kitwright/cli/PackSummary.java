@@ -54,7 +54,7 @@ final class PackSummary {
         if (crates.bounds().price() != null) {
             sb.append(", price ").append(money(crates.bounds().price()));
         }
-        sb.append("; ").append(crates.status()).append(", gap ").append(percent(crates.bounds().gap()))
+        sb.append("; ").append(crates.status()).append(limited(crates.status(), crates.reason())).append(", gap ").append(percent(crates.bounds().gap()))
                 .append(" %.\n");
         sb.append("Joint boxes: ").append(crates.boxes().size()).append(".\n");
         if (loads.status() == Status.INFEASIBLE) {
@@ -68,7 +68,7 @@ final class PackSummary {
                 .append(", cost ").append(money(loads.tripCost()))
                 .append("; lower bound ").append(money(loads.lowerBound()))
                 .append(" (fleet LP ").append(money(loads.bounds().fleetRelaxation())).append("); ")
-                .append(loads.status()).append(", gap ").append(percent(loads.bounds().gap()))
+                .append(loads.status()).append(limited(loads.status(), loads.reason())).append(", gap ").append(percent(loads.bounds().gap()))
                 .append(" %.\n");
         for (VehicleLoad v : loads.vehicles()) {
             sb.append("  ").append(v.id()).append(' ').append(v.type()).append(": ").append(v.crates().size())
@@ -100,6 +100,11 @@ final class PackSummary {
     }
 
     /** The reason of an INFEASIBLE plan as a sentence. */
+    /** ", stopped by the time limit" after a FEASIBLE status whose search the clock cut short, else "". */
+    private static String limited(Status status, String reason) {
+        return status == Status.FEASIBLE && reason != null ? ", " + reason : "";
+    }
+
     private static String reason(String reason) {
         String text = reason == null || reason.isBlank() ? "no reason given" : reason.strip();
         return text.endsWith(".") ? text : text + ".";

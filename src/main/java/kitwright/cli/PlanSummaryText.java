@@ -21,7 +21,7 @@ final class PlanSummaryText {
                 "%nNesting (%s, clearance %.1f mm): %d pieces in %d bundles; lower bound %s; %s."
                         + " Shipping volume %.2f m3 nested, %.2f m3 loose.%n",
                 nest.tolerance().code(), nest.clearanceMm(), nesting.pieces(), nest.bundles().size(),
-                bound(nest.lowerBound()), nest.status(), nesting.bundledVolumeM3(), nesting.looseVolumeM3()));
+                bound(nest.lowerBound()), nesting.statusText(), nesting.bundledVolumeM3(), nesting.looseVolumeM3()));
         if (nesting.reason() != null) {
             sb.append("  ").append(nesting.reason()).append(System.lineSeparator());
         }

@@ -10,7 +10,8 @@ import kitwright.model.Status;
  *
  * @param lowerBound proven lower bound on the total trip cost (the number of trips when no vehicle has a cost)
  * @param tripCost   total cost of the trips (not in the JSON contract)
- * @param reason     why no plan exists (INFEASIBLE only), else null
+ * @param reason     why no plan exists (INFEASIBLE); "stopped by the time limit" for a FEASIBLE plan whose search
+ *                   the wall-clock limit cut short; else null
  */
 @JsonPropertyOrder({"status", "lowerBound", "vehicles"})
 public record LoadPlan(Status status, double lowerBound, List<VehicleLoad> vehicles, @JsonIgnore double tripCost,

@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import kitwright.cutting.Deadline;
 import kitwright.ids.IdScheme;
 import kitwright.model.CrateType;
 import kitwright.model.Status;
@@ -23,7 +24,8 @@ import kitwright.packing.PatternCover;
  *
  * <p>Status: OPTIMAL when the trip cost meets the proven bound (the larger of {@link FleetCostBound}, the issue's
  * linear relaxation, and {@link WholeVehicleBound}), else FEASIBLE with the gap;
- * INFEASIBLE when a crate fits no vehicle type (the reason names it). Crates of types missing from the crate
+ * FEASIBLE with the reason "stopped by the time limit" when the stage's deadline, not a work limit, cut a step
+ * short; INFEASIBLE when a crate fits no vehicle type (the reason names it). Crates of types missing from the crate
  * catalog are treated as not stackable. Loads start at the front of the deck; the centre of gravity is reported,
  * not balanced, and axle loads and load securing (EN 12195-1) are not checked. Loads take the trip ids of the kit's
  * {@link IdScheme} (TRIP-1, TRIP-2, ... unless a mark reads like them).
@@ -31,7 +33,11 @@ import kitwright.packing.PatternCover;
 public final class RowLoadPlanner implements LoadPlanner {
     private static final double EPS = 1e-6;
 
-    /** Solver limits: CP-SAT deterministic work limit, wall-clock safety net, column generation rounds. */
+    /**
+     * Solver limits: CP-SAT deterministic work limit, the wall-clock safety net of the whole loading stage (one
+     * deadline, set when {@link #load} starts, for every loop and solver call; kit.json timeLimitSeconds), column
+     * generation rounds.
+     */
     public record Limits(double deterministicTime, double safetySeconds, int pricingRounds) {
         public static final Limits DEFAULT = new Limits(1.0, 10.0, 10);
     }
@@ -57,6 +63,7 @@ public final class RowLoadPlanner implements LoadPlanner {
 
     @Override
     public LoadPlan load(CratePlan plan, List<CrateType> crateCatalog, List<VehicleType> vehicles) {
+        Deadline deadline = Deadline.in(limits.safetySeconds());
         if (plan.status() == Status.INFEASIBLE) {
             return LoadPlan.infeasible("no crate plan to load: " + plan.reason());
         }
@@ -94,8 +101,8 @@ public final class RowLoadPlanner implements LoadPlanner {
         boolean costed = vehicles.stream().anyMatch(v -> v.costPerTrip() > 0);
         double[] cost = vehicles.stream().mapToDouble(v -> costed ? v.costPerTrip() : 1.0).toArray();
 
-        VehicleChoice choice = new VehicleChoice(new PatternCover(limits.deterministicTime(),
-                limits.safetySeconds()), limits.pricingRounds());
+        VehicleChoice choice = new VehicleChoice(new PatternCover(limits.deterministicTime(), deadline),
+                limits.pricingRounds(), deadline);
         Map<String, DeckLayout> patterns = new LinkedHashMap<>();
         List<DeckLayout> construction = choice.construct(vehicles, cost, classes, patterns);
         if (construction.isEmpty()) {
@@ -111,13 +118,15 @@ public final class RowLoadPlanner implements LoadPlanner {
         List<VehicleLoad> loads = realise(decks, vehicles, classes, members, ids);
         double tripCost = VehicleChoice.total(decks, cost);
         double relaxation = FleetCostBound.compute(classes, vehicles, cost);
-        double whole = WholeVehicleBound.compute(classes, vehicles, cost);
+        double whole = WholeVehicleBound.compute(classes, vehicles, cost, deadline);
         whole = Double.isNaN(whole) ? relaxation : Math.max(relaxation, whole);
         double cheapest = Arrays.stream(cost).min().orElse(0);
         double bound = Math.max(whole, cheapest);
         double gap = tripCost <= 0 ? 0 : Math.max(0, (tripCost - bound) / tripCost);
         Status status = tripCost <= bound + 1e-6 * Math.max(1, tripCost) ? Status.OPTIMAL : Status.FEASIBLE;
-        return new LoadPlan(status, bound, loads, tripCost, new LoadBounds(relaxation, whole, bound, gap), null);
+        // a step the deadline cut short makes the plan depend on the machine's speed: say so, as cutting does
+        String reason = status == Status.FEASIBLE && deadline.struck() ? Deadline.STOPPED_BY_TIME_LIMIT : null;
+        return new LoadPlan(status, bound, loads, tripCost, new LoadBounds(relaxation, whole, bound, gap), reason);
     }
 
     /** Leaves empty, from the tops of stacks, the places beyond each class's demand; null when it cannot. */

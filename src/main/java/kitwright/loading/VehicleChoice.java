@@ -3,6 +3,7 @@ package kitwright.loading;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import kitwright.cutting.Deadline;
 import kitwright.model.VehicleType;
 import kitwright.packing.CoverSearch;
 import kitwright.packing.PatternCover;
@@ -26,10 +27,13 @@ final class VehicleChoice {
     private final DeckFiller filler = new DeckFiller();
     private final PatternCover cover;
     private final int pricingRounds;
+    private final Deadline deadline;
 
-    VehicleChoice(PatternCover cover, int pricingRounds) {
+    /** @param deadline the loading stage's deadline: once passed, no further construction or pricing round runs */
+    VehicleChoice(PatternCover cover, int pricingRounds, Deadline deadline) {
         this.cover = cover;
         this.pricingRounds = pricingRounds;
+        this.deadline = deadline;
     }
 
     /** The cheapest construction found (a complete cover), or empty when some crate cannot be loaded. */
@@ -42,7 +46,7 @@ final class VehicleChoice {
                 left));
         CoverSearch.Share<DeckLayout> share = (deck, left) -> share(deck, left, classes);
         List<DeckLayout> best = CoverSearch.greedy(demand, all, cost, filling, share, patterns);
-        for (int v = 0; v < vehicles.size(); v++) {
+        for (int v = 0; v < vehicles.size() && !deadline.passed(); v++) {
             List<DeckLayout> single = CoverSearch.greedy(demand, new int[] {v}, cost, filling, share, patterns);
             if (!single.isEmpty() && (best.isEmpty() || total(single, cost) < total(best, cost) - EPS
                     || (Math.abs(total(single, cost) - total(best, cost)) <= EPS && single.size() < best.size()))) {
@@ -56,7 +60,7 @@ final class VehicleChoice {
     List<DeckLayout> improve(List<VehicleType> vehicles, double[] cost, List<CrateClass> classes,
                              Map<String, DeckLayout> patterns, List<DeckLayout> construction) {
         int[] demand = classes.stream().mapToInt(CrateClass::demand).toArray();
-        for (int v = 0; v < vehicles.size(); v++) {
+        for (int v = 0; v < vehicles.size() && !deadline.passed(); v++) {
             for (CrateClass c : classes) {
                 int[] only = new int[classes.size()];
                 only[c.index()] = c.demand();
@@ -64,7 +68,7 @@ final class VehicleChoice {
             }
         }
         CoverSearch.price(pricingRounds, vehicles.size(), cost, demand, (v, duals) -> List.of(positive(classes,
-                duals)), (v, offer) -> List.of(filler.fill(v, vehicles.get(v), classes, offer)), patterns);
+                duals)), (v, offer) -> List.of(filler.fill(v, vehicles.get(v), classes, offer)), patterns, deadline);
         return CoverSearch.choose(cover, patterns, cost, demand, construction);
     }
 

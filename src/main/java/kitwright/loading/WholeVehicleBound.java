@@ -5,6 +5,7 @@ import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
 import java.util.List;
+import kitwright.cutting.Deadline;
 import kitwright.model.VehicleType;
 import kitwright.natives.SolverLibraries;
 
@@ -28,8 +29,6 @@ import kitwright.natives.SolverLibraries;
  * into that many lanes, each a set of crates end to end ({@link LanePatterns}).
  */
 final class WholeVehicleBound {
-    /** Wall-clock safety net only; the node limit below ends the search the same way on every machine. */
-    private static final double SECONDS = 5;
     /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
     private static final int MAX_NODES = 10_000;
     private static final int MAX_LANE_PATTERNS = 2000;
@@ -101,8 +100,16 @@ final class WholeVehicleBound {
         return share < lambda - 1e-12 ? 0 : share;
     }
 
-    /** The bound, or NaN when no MIP solver is at hand or it proved nothing. */
+    /** As below, with the default time limit (kit.json's default timeLimitSeconds) as the safety net. */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost) {
+        return compute(classes, vehicles, cost, Deadline.in(kitwright.model.KitSettings.DEFAULT_TIME_LIMIT_SECONDS));
+    }
+
+    /**
+     * The bound, or NaN when no MIP solver is at hand or it proved nothing. The node limit ends the search the
+     * same way on every machine; what is left of the loading stage's deadline is only a safety net.
+     */
+    static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost, Deadline deadline) {
         SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("SCIP");
         if (solver == null) {
@@ -175,8 +182,11 @@ final class WholeVehicleBound {
                 }
             }
             solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
-            solver.setTimeLimit((long) (SECONDS * 1000));
+            solver.setTimeLimit((long) Math.ceil(deadline.remainingSeconds() * 1000));
             MPSolver.ResultStatus status = solver.solve();
+            if (status != MPSolver.ResultStatus.OPTIMAL) {
+                deadline.passed(); // remembers whether the clock rather than the node limit stopped it
+            }
             if (status != MPSolver.ResultStatus.OPTIMAL && status != MPSolver.ResultStatus.FEASIBLE) {
                 return Double.NaN;
             }

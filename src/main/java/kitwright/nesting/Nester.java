@@ -37,6 +37,8 @@ public final class Nester {
         double bundled = plan.bundles().stream()
                 .mapToDouble(b -> Math.PI / 4 * b.envelopeDiameterMm() * b.envelopeDiameterMm() * b.lengthMm())
                 .sum() / 1e9;
-        return new NestResult(plan, solution.reason(), rule.description(), problem.tubes().size(), loose, bundled);
+        boolean infeasible = solution.status() == kitwright.model.Status.INFEASIBLE;
+        return new NestResult(plan, infeasible ? solution.reason() : null, rule.description(),
+                problem.tubes().size(), loose, bundled, infeasible ? null : solution.reason());
     }
 }

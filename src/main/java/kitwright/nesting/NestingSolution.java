@@ -5,7 +5,8 @@ import kitwright.model.Status;
 
 /**
  * The outcome of a nesting algorithm: one placement per tube, the status, a lower bound on the number of bundles and,
- * when INFEASIBLE, the reason (the placements are then still complete, but break the bundle mass limit).
+ * when INFEASIBLE, the reason (the placements are then still complete, but break the bundle mass limit); a FEASIBLE
+ * solution whose search the wall-clock limit cut short gives the reason "stopped by the time limit".
  */
 public record NestingSolution(List<Placement> placements, Status status, double lowerBound, String reason) {
     public NestingSolution {

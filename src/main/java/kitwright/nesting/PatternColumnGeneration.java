@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import kitwright.cutting.Deadline;
 import kitwright.natives.SolverLibraries;
 
 /**
@@ -124,6 +125,14 @@ final class PatternColumnGeneration implements AutoCloseable {
 
     /** Column generation with these weights for at most {@code maxRounds} LP solves; returns the LP value. */
     double generate(double[] weights, int maxRounds) {
+        return generate(weights, maxRounds, Deadline.in(Double.POSITIVE_INFINITY));
+    }
+
+    /**
+     * As {@link #generate(double[], int)}, stopping after the round in which the deadline passed (the duals of
+     * that last solve still give a valid {@link #lagrangianBound()}).
+     */
+    double generate(double[] weights, int maxRounds, Deadline deadline) {
         weight = weights;
         for (int c = 0; c < variables.size(); c++) {
             objective.setCoefficient(variables.get(c), lpCounts.get(c).value(weight));
@@ -157,7 +166,7 @@ final class PatternColumnGeneration implements AutoCloseable {
                     added = true;
                 }
             }
-            if (!added || pricing.exhausted()) {
+            if (!added || pricing.exhausted() || deadline.passed()) {
                 break;
             }
         }

@@ -2,6 +2,7 @@ package kitwright.nesting;
 
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.cutting.Deadline;
 
 /**
  * Diving with column generation, the rounding that turns the LP into whole patterns: solve the LP over what is
@@ -10,8 +11,8 @@ import java.util.List;
  * problem and repeat until the LP has nothing left to nest. A fixed pattern is capped at the guests still left, so
  * the counts always respect the supply. The same scheme is the usual primal heuristic of column generation for
  * cutting stock (residual rounding; see Wascher and Gau 1996, "Heuristics for the integer one-dimensional cutting
- * stock problem: a computational study", OR Spektrum 18). Stops early when the pricing work budget is spent; what
- * is not fixed by then is left to best-fit decreasing.
+ * stock problem: a computational study", OR Spektrum 18). Stops early when the pricing work budget is spent or the
+ * stage's deadline passes; what is not fixed by then is left to best-fit decreasing.
  */
 final class PatternDiving {
     /** Fixed pattern counts: the layouts and how many hosts use each. */
@@ -21,16 +22,17 @@ final class PatternDiving {
     private PatternDiving() {
     }
 
-    static Dive dive(PatternColumnGeneration cg, List<TubeType> types, int roundsPerDive, int maxDives) {
+    static Dive dive(PatternColumnGeneration cg, List<TubeType> types, int roundsPerDive, int maxDives,
+                     Deadline deadline) {
         int n = types.size();
         int[] guests = types.stream().mapToInt(TubeType::count).toArray();
         int[] freeHosts = guests.clone();
         List<Pattern> patterns = new ArrayList<>();
         List<Long> counts = new ArrayList<>();
         double[] weights = PatternColumnGeneration.bulkyWeights(types);
-        for (int dive = 0; dive < maxDives && !cg.exhausted(); dive++) {
+        for (int dive = 0; dive < maxDives && !cg.exhausted() && !deadline.passed(); dive++) {
             cg.setSupply(guests, freeHosts);
-            if (cg.generate(weights, roundsPerDive) < 1e-6) {
+            if (cg.generate(weights, roundsPerDive, deadline) < 1e-6) {
                 break;
             }
             double[] x = cg.values();

@@ -14,16 +14,18 @@ final class PatternEnumeration {
     }
 
     /**
-     * All non-empty patterns, or null when there are more than {@code maxPatterns} or some pattern would carry more
-     * than {@code maxGuests} guests (too many to be sure the enumeration is complete and quick).
+     * All non-empty patterns, or null when there are more than {@code maxPatterns}, some pattern would carry more
+     * than {@code maxGuests} guests, or the layout searches spend {@code work} (too many to be sure the enumeration
+     * is complete and quick).
      */
     static List<Pattern> all(NestingProblem problem, List<TubeType> types, PatternPricing pricing, int maxPatterns,
-                             int maxGuests) {
+                             int maxGuests, LayoutSearchWork work) {
         List<Pattern> out = new ArrayList<>();
         for (int h : pricing.hostTypes()) {
             List<Integer> guestTypes = pricing.guestsOf(h);
             int[] counts = new int[types.size()];
-            if (!extend(problem, types, h, guestTypes, 0, counts, new ArrayList<>(), out, maxPatterns, maxGuests)) {
+            if (!extend(problem, types, h, guestTypes, 0, counts, new ArrayList<>(), out, maxPatterns, maxGuests,
+                    work) || work.stopped()) {
                 return null;
             }
         }
@@ -32,7 +34,7 @@ final class PatternEnumeration {
 
     private static boolean extend(NestingProblem problem, List<TubeType> types, int host, List<Integer> guestTypes,
                                   int position, int[] counts, List<Tube> guests, List<Pattern> out,
-                                  int maxPatterns, int maxGuests) {
+                                  int maxPatterns, int maxGuests, LayoutSearchWork work) {
         if (position == guestTypes.size()) {
             return true;
         }
@@ -40,12 +42,16 @@ final class PatternEnumeration {
         TubeType guestType = types.get(type);
         int added = 0;
         boolean ok = extend(problem, types, host, guestTypes, position + 1, counts, guests, out, maxPatterns,
-                maxGuests);
+                maxGuests, work);
         while (ok && added < guestType.count()) {
             guests.add(guestType.sample());
             counts[type]++;
             added++;
-            List<Pattern.Segment> layout = layout(problem, types, host, counts, guests);
+            List<Pattern.Segment> layout = layout(problem, types, host, counts, guests, work);
+            if (work.stopped()) {
+                ok = false;
+                break;
+            }
             if (layout == null) {
                 break;
             }
@@ -54,7 +60,8 @@ final class PatternEnumeration {
                 break;
             }
             out.add(new Pattern(host, TypeCounts.of(counts), layout));
-            ok = extend(problem, types, host, guestTypes, position + 1, counts, guests, out, maxPatterns, maxGuests);
+            ok = extend(problem, types, host, guestTypes, position + 1, counts, guests, out, maxPatterns, maxGuests,
+                    work);
         }
         for (int i = 0; i < added; i++) {
             guests.remove(guests.size() - 1);
@@ -64,7 +71,7 @@ final class PatternEnumeration {
     }
 
     private static List<Pattern.Segment> layout(NestingProblem problem, List<TubeType> types, int host, int[] counts,
-                                                List<Tube> guests) {
+                                                List<Tube> guests, LayoutSearchWork work) {
         Tube h = types.get(host).sample();
         double usable = problem.usableLengthMm(h);
         double inner = problem.innerDiameterMm(h);
@@ -92,6 +99,6 @@ final class PatternEnumeration {
                 ordered.add(types.get(t).sample());
             }
         }
-        return SegmentPacker.pack(inner, usable, ordered, typeOfGuest);
+        return SegmentPacker.pack(inner, usable, ordered, typeOfGuest, work);
     }
 }

@@ -7,6 +7,7 @@ import com.google.ortools.sat.IntVar;
 import com.google.ortools.sat.LinearExpr;
 import com.google.ortools.sat.LinearExprBuilder;
 import java.util.List;
+import kitwright.cutting.Deadline;
 import kitwright.natives.SolverLibraries;
 
 /**
@@ -35,9 +36,9 @@ final class PatternIntegerPhase {
     private PatternIntegerPhase() {
     }
 
-    /** Returns null when CP-SAT found no solution within its limits. */
+    /** Returns null when CP-SAT found no solution within its limits; what is left of the deadline is its net. */
     static Result solve(List<TubeType> types, List<Pattern> columns, double[] hint, double deterministicSeconds,
-                        double wallSeconds) {
+                        Deadline deadline) {
         SolverLibraries.load();
         int n = types.size();
         long tubes = types.stream().mapToLong(TubeType::count).sum();
@@ -89,8 +90,11 @@ final class PatternIntegerPhase {
 
         CpSolver solver = new CpSolver();
         solver.getParameters().setNumWorkers(1).setRandomSeed(20260101)
-                .setMaxDeterministicTime(deterministicSeconds).setMaxTimeInSeconds(wallSeconds);
+                .setMaxDeterministicTime(deterministicSeconds).setMaxTimeInSeconds(deadline.remainingSeconds());
         CpSolverStatus status = solver.solve(model);
+        if (status != CpSolverStatus.OPTIMAL) {
+            deadline.passed(); // remembers whether the clock rather than the deterministic limit stopped it
+        }
         if (status != CpSolverStatus.OPTIMAL && status != CpSolverStatus.FEASIBLE) {
             return null;
         }

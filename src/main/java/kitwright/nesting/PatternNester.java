@@ -2,6 +2,7 @@ package kitwright.nesting;
 
 import java.util.ArrayList;
 import java.util.List;
+import kitwright.cutting.Deadline;
 import kitwright.model.Status;
 
 /**
@@ -19,8 +20,10 @@ import kitwright.model.Status;
  *       earlier on a tie).
  * </ol>
  * Status OPTIMAL when the bundles equal the lower bound rounded up (the largest of the counting, mass, LP and exact
- * bounds), FEASIBLE otherwise, INFEASIBLE when a single tube is heavier than the bundle mass limit (the plan is
- * complete all the same). Deterministic: fixed orders, one CP-SAT worker, deterministic limits.
+ * bounds), FEASIBLE otherwise (with the reason "stopped by the time limit" when the stage's deadline, not a work
+ * limit, cut a step short), INFEASIBLE when a single tube is heavier than the bundle mass limit (the plan is
+ * complete all the same). Deterministic: fixed orders, one CP-SAT worker, deterministic limits; one wall-clock
+ * deadline ({@link NestingOptions#wallSeconds()}) for the whole solve is the safety net.
  */
 public final class PatternNester implements NestingAlgorithm {
     private final NestingOptions options;
@@ -31,6 +34,7 @@ public final class PatternNester implements NestingAlgorithm {
 
     @Override
     public NestingSolution solve(NestingProblem problem) {
+        Deadline deadline = Deadline.in(options.wallSeconds());
         List<TubeType> types = TubeType.of(problem);
         double bound = LowerBounds.counting(problem).bundles();
         NestForest best = new NestForest(problem);
@@ -41,33 +45,36 @@ public final class PatternNester implements NestingAlgorithm {
         PatternPricing pricing = new PatternPricing(problem, types, unit, options.maxPricingCells());
         if (!pricing.hostTypes().isEmpty()) {
             List<Pattern> all = unit == 1.0 ? PatternEnumeration.all(problem, types, pricing,
-                    options.maxExactPatterns(), options.maxExactGuests()) : null;
+                    options.maxExactPatterns(), options.maxExactGuests(),
+                    new LayoutSearchWork(options.maxExactNodes(), deadline)) : null;
             List<NestForest> candidates = new ArrayList<>();
             boolean proven = false;
-            if (all != null) {
+            if (all != null && !deadline.passed()) {
                 PatternIntegerPhase.Result exact = PatternIntegerPhase.solve(types, all, null,
-                        options.deterministicSeconds(), options.wallSeconds());
+                        options.deterministicSeconds(), deadline);
                 if (exact != null) {
                     bound = Math.max(bound, tubes - exact.nestedUpperBound());
                     proven = exact.proven();
                     candidates.add(PatternRealisation.realise(problem, types, all, exact.counts()));
                 }
             }
-            if (!proven) {
+            if (!proven && !deadline.passed()) {
                 try (PatternColumnGeneration cg = new PatternColumnGeneration(types, pricing)) {
-                    cg.generate(PatternColumnGeneration.unitWeights(types.size()), options.maxColumnIterations());
+                    cg.generate(PatternColumnGeneration.unitWeights(types.size()), options.maxColumnIterations(),
+                            deadline);
                     bound = Math.max(bound, tubes - cg.lagrangianBound());
                     PatternDiving.Dive dive = PatternDiving.dive(cg, types, options.maxColumnIterations(),
-                            options.maxDives());
+                            options.maxDives(), deadline);
                     candidates.add(PatternRealisation.realise(problem, types, dive.patterns(), dive.counts()));
-                    if (Math.ceil(bound - 1e-6) < candidates.get(candidates.size() - 1).bundles()) {
+                    if (Math.ceil(bound - 1e-6) < candidates.get(candidates.size() - 1).bundles()
+                            && !deadline.passed()) {
                         List<Pattern> columns = new ArrayList<>();
                         int[] everyTube = pricing.supplyOfAll();
                         for (int c = 0; c < cg.size(); c++) {
                             columns.add(cg.realisable(c, everyTube));
                         }
                         PatternIntegerPhase.Result integer = PatternIntegerPhase.solve(types, columns, null,
-                                options.deterministicSeconds(), options.wallSeconds());
+                                options.deterministicSeconds(), deadline);
                         if (integer != null) {
                             candidates.add(PatternRealisation.realise(problem, types, columns, integer.counts()));
                         }
@@ -82,7 +89,7 @@ public final class PatternNester implements NestingAlgorithm {
                 }
             }
         }
-        return finish(problem, best, bound);
+        return finish(problem, best, bound, deadline.struck());
     }
 
     private static boolean better(NestForest a, NestForest b) {
@@ -92,7 +99,8 @@ public final class PatternNester implements NestingAlgorithm {
         return a.envelopeVolumeMm3() < b.envelopeVolumeMm3() * (1 - 1e-12);
     }
 
-    private static NestingSolution finish(NestingProblem problem, NestForest forest, double rawBound) {
+    private static NestingSolution finish(NestingProblem problem, NestForest forest, double rawBound,
+                                          boolean stoppedByClock) {
         double bound = Math.round(rawBound * 1e6) / 1e6; // LP round-off, e.g. 3.0000000000000036
         Double limit = problem.maxBundleMassKg();
         if (limit != null) {
@@ -109,6 +117,8 @@ public final class PatternNester implements NestingAlgorithm {
             }
         }
         Status status = forest.bundles() <= Math.ceil(bound - 1e-6) ? Status.OPTIMAL : Status.FEASIBLE;
-        return new NestingSolution(forest.placements(), status, bound, null);
+        // a step the deadline cut short makes the plan depend on the machine's speed: say so, as cutting does
+        String reason = status == Status.FEASIBLE && stoppedByClock ? Deadline.STOPPED_BY_TIME_LIMIT : null;
+        return new NestingSolution(forest.placements(), status, bound, reason);
     }
 }

@@ -10,7 +10,8 @@ import java.util.List;
  * lanes end to end), a segment is as long as its fullest lane, and the segments must fit the usable length.
  * Depth-first search over (k, lane) for each guest, widest and longest guests first, pruning as soon as the segments
  * outgrow the host; identical guests take non-decreasing (k, lane), and a new lane is only opened after the used
- * ones, so symmetric layouts are tried once. Exponential in the number of guests: meant for up to about ten.
+ * ones, so symmetric layouts are tried once. Exponential in the number of guests: meant for up to about ten, and
+ * every node is counted against a {@link LayoutSearchWork} budget (a spent budget fails the search).
  */
 final class SegmentPacker {
     private static final double EPS = 1e-9;
@@ -25,8 +26,11 @@ final class SegmentPacker {
     private final int[] lanesUsed;
     private final int[] chosenK;
     private final int[] chosenLane;
+    private final LayoutSearchWork work;
 
-    private SegmentPacker(double innerDiameterMm, double usableLengthMm, double[] outer, double[] length, int[] type) {
+    private SegmentPacker(double innerDiameterMm, double usableLengthMm, double[] outer, double[] length, int[] type,
+                          LayoutSearchWork work) {
+        this.work = work;
         this.usableLengthMm = usableLengthMm;
         this.shape = new HostLoad(usableLengthMm, innerDiameterMm);
         this.outer = outer;
@@ -46,9 +50,10 @@ final class SegmentPacker {
      * A layout carrying every guest (lanes list guest types), or null when none exists.
      *
      * @param guests guest tubes with their type index, sorted widest, then longest first by the caller or here
+     * @param work   the node budget this search draws on; when it runs out the answer is null as well
      */
     static List<Pattern.Segment> pack(double innerDiameterMm, double usableLengthMm, List<Tube> guests,
-                                      int[] typeOfGuest) {
+                                      int[] typeOfGuest, LayoutSearchWork work) {
         int n = guests.size();
         Integer[] order = new Integer[n];
         for (int i = 0; i < n; i++) {
@@ -63,11 +68,14 @@ final class SegmentPacker {
             length[i] = guests.get(order[i]).lengthMm();
             type[i] = typeOfGuest[order[i]];
         }
-        SegmentPacker packer = new SegmentPacker(innerDiameterMm, usableLengthMm, outer, length, type);
+        SegmentPacker packer = new SegmentPacker(innerDiameterMm, usableLengthMm, outer, length, type, work);
         return packer.search(0, 0) ? packer.layout() : null;
     }
 
     private boolean search(int guest, double used) {
+        if (!work.step()) {
+            return false;
+        }
         if (guest == outer.length) {
             return true;
         }

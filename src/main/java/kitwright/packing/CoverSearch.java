@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import kitwright.cutting.Deadline;
 
 /**
  * The steps the crate mix and the vehicle mix share, over patterns of any container ({@link CoverPattern}):
@@ -100,12 +101,14 @@ public final class CoverSearch {
 
     /**
      * Column generation rounds: per round, the LP over the patterns so far; each container type filled from each
-     * offer; fillings with negative reduced cost join {@code patterns}. Stops when a round adds none.
+     * offer; fillings with negative reduced cost join {@code patterns}. Stops when a round adds none, or before a
+     * round when the stage's deadline has passed.
      */
     public static <L extends CoverPattern> void price(int rounds, int containerTypes, double[] cost, int[] demand,
-                                                      Offers offers, Filling<L> filling, Map<String, L> patterns) {
+                                                      Offers offers, Filling<L> filling, Map<String, L> patterns,
+                                                      Deadline deadline) {
         CoverRelaxation relaxation = new CoverRelaxation();
-        for (int round = 0; round < rounds; round++) {
+        for (int round = 0; round < rounds && !deadline.passed(); round++) {
             List<L> list = new ArrayList<>(patterns.values());
             CoverRelaxation.Solution lp = relaxation.solve(list.stream().map(CoverPattern::counts)
                     .toArray(int[][]::new), list.stream().mapToDouble(p -> cost[p.containerType()]).toArray(),

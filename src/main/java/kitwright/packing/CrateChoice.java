@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import kitwright.cutting.Deadline;
 import kitwright.model.CrateType;
 
 /**
@@ -32,10 +33,29 @@ final class CrateChoice {
     private final CrateFiller filler = new CrateFiller();
     private final PatternCover cover;
     private final int pricingRounds;
+    private final long maxFillings;
+    private final Deadline deadline;
+    /** Crate fillings spent so far: the deterministic step counter of this choice. */
+    private long fillings;
 
-    CrateChoice(PatternCover cover, int pricingRounds) {
+    /**
+     * @param maxFillings crate fillings ({@link CrateFiller} calls) the choice may spend in all: there is one
+     *                    construction per crate type and per pair of types, so their work grows with the square of
+     *                    the catalog, and the candidate patterns take (40 + item types) fillings per crate type;
+     *                    past the budget no further construction, candidate or pricing filling is tried (the first
+     *                    construction, over every crate type, always runs, so a cover is always found)
+     * @param deadline    the crating stage's deadline: once passed, likewise
+     */
+    CrateChoice(PatternCover cover, int pricingRounds, long maxFillings, Deadline deadline) {
         this.cover = cover;
         this.pricingRounds = pricingRounds;
+        this.maxFillings = maxFillings;
+        this.deadline = deadline;
+    }
+
+    /** Crate fillings spent in the last {@link #choose}. */
+    long fillings() {
+        return fillings;
     }
 
     /** Layouts, one per crate, covering every item; empty when some item fits no crate. */
@@ -52,11 +72,17 @@ final class CrateChoice {
             }
         }
         CoverSearch.Share<CrateLayout> share = (layout, left) -> share(layout, left, types);
+        fillings = 0;
+        boolean first = true;
         for (boolean boxesFirst : new boolean[] {false, true}) {
             CoverSearch.Filling<CrateLayout> filling = boxesFirst
-                    ? (t, left) -> filler.fills(t, crates.get(t), types, left)
-                    : (t, left) -> List.of(filler.fill(t, crates.get(t), types, left));
+                    ? (t, left) -> count(filler.fills(t, crates.get(t), types, left))
+                    : (t, left) -> count(List.of(filler.fill(t, crates.get(t), types, left)));
             for (int[] allowed : subsets) {
+                if (!first && spent()) {
+                    break;
+                }
+                first = false;
                 List<CrateLayout> run = CoverSearch.greedy(demand, allowed, crateCost, filling, share, patterns);
                 double c = CoverSearch.total(run, crateCost);
                 if (!run.isEmpty() && (best.isEmpty() || c < bestCost - EPS
@@ -69,18 +95,30 @@ final class CrateChoice {
         if (best.isEmpty()) {
             return best;
         }
-        for (int t = 0; t < crates.size(); t++) {
+        for (int t = 0; t < crates.size() && !spent(); t++) {
             for (ItemType it : types) {
                 int[] only = new int[types.size()];
                 only[it.index()] = it.demand();
+                fillings++;
                 CoverSearch.add(patterns, filler.fill(t, crates.get(t), types, only));
             }
         }
         complements(crates, types, demand, patterns);
         CoverSearch.price(pricingRounds, crates.size(), crateCost, demand,
                 (t, duals) -> offers(crates.get(t), types, duals),
-                (t, offer) -> filler.fills(t, crates.get(t), types, offer), patterns);
+                (t, offer) -> spent() ? List.of() : count(filler.fills(t, crates.get(t), types, offer)), patterns,
+                deadline);
         return CoverSearch.choose(cover, patterns, crateCost, demand, best);
+    }
+
+    /** True when the budget of fillings is spent or the deadline has passed. */
+    private boolean spent() {
+        return fillings >= maxFillings || deadline.passed();
+    }
+
+    private List<CrateLayout> count(List<CrateLayout> layouts) {
+        fillings++;
+        return layouts;
     }
 
     private static int[] allTypes(int n) {
@@ -109,6 +147,9 @@ final class CrateChoice {
         List<CrateLayout> first = new ArrayList<>(patterns.values()).subList(0, Math.min(COMPLEMENTS,
                 patterns.size()));
         for (CrateLayout p : first) {
+            if (spent()) {
+                return;
+            }
             int[] rest = new int[demand.length];
             for (int i = 0; i < rest.length; i++) {
                 rest[i] = Math.max(0, demand[i] - p.counts()[i]);
@@ -117,7 +158,7 @@ final class CrateChoice {
                 continue;
             }
             for (int t = 0; t < crates.size(); t++) {
-                for (CrateLayout layout : filler.fills(t, crates.get(t), types, rest)) {
+                for (CrateLayout layout : count(filler.fills(t, crates.get(t), types, rest))) {
                     CoverSearch.add(patterns, layout);
                 }
             }

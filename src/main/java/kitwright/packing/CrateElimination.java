@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.Comparator;
 import java.util.List;
+import kitwright.cutting.Deadline;
 import kitwright.model.CrateType;
 
 /**
@@ -15,7 +16,8 @@ import kitwright.model.CrateType;
  * again from their own items plus what is still to move, each kept when the new layout holds every one of its own
  * items and takes at least one more. The crate is dropped only when all its items moved (the total price does not
  * rise and the count falls); otherwise nothing changes. A move repeats until no crate can be emptied or the budget
- * of crate fillings is spent (half of it at most for merges), so the result depends only on the input.
+ * of crate fillings is spent (half of it at most for merges), so the result depends only on the input (or, on a
+ * slow machine, the crating stage's deadline passes first).
  * When no crate can be emptied, two crates are repacked as two of types that cost less in all (see
  * {@link #repack}), and the emptying starts again.
  * The same idea as the "eliminate a bin" moves of bin-packing local search (e.g. Fleszar &amp; Hindi 2002).
@@ -28,10 +30,22 @@ final class CrateElimination {
     private static final double STAGGERED_GAIN = 1.2;
     private final CrateFiller filler = new CrateFiller();
     private final int budget;
+    private final Deadline deadline;
 
     /** @param budget the most crate fillings ({@link CrateFiller#fills} calls) to try in all */
     CrateElimination(int budget) {
+        this(budget, Deadline.in(Double.POSITIVE_INFINITY));
+    }
+
+    /** With the crating stage's deadline: once it has passed no further filling is tried. */
+    CrateElimination(int budget, Deadline deadline) {
         this.budget = budget;
+        this.deadline = deadline;
+    }
+
+    /** True when the budget of fillings is spent or the deadline has passed. */
+    private boolean out(int[] spent) {
+        return spent[0] >= budget || deadline.passed();
     }
 
     /**
@@ -45,7 +59,7 @@ final class CrateElimination {
         // fillings spent: in all, and on merges
         int[] spent = {0, 0};
         boolean emptied = true;
-        while (emptied && spent[0] < budget && current.size() > 1) {
+        while (emptied && !out(spent) && current.size() > 1) {
             emptied = false;
             List<Integer> order = byFill(current, crates, types);
             for (int victim : order) {
@@ -58,11 +72,11 @@ final class CrateElimination {
                     emptied = true;
                     break;
                 }
-                if (spent[0] >= budget) {
+                if (out(spent)) {
                     break;
                 }
             }
-            if (!emptied && spent[0] < budget) {
+            if (!emptied && !out(spent)) {
                 List<CrateLayout> next = repack(current, crates, cost, types, spent);
                 if (next != null) {
                     current = next;
@@ -95,7 +109,7 @@ final class CrateElimination {
                         if (cost[first] + cost[second] >= pair - 1e-9) {
                             continue;
                         }
-                        if (spent[0] >= budget) {
+                        if (out(spent)) {
                             return null;
                         }
                         spent[0]++;
@@ -107,7 +121,7 @@ final class CrateElimination {
                             if (one.isEmpty() || Arrays.stream(rest).allMatch(n -> n == 0)) {
                                 continue;
                             }
-                            if (spent[0] >= budget) {
+                            if (out(spent)) {
                                 return null;
                             }
                             spent[0]++;
@@ -150,7 +164,7 @@ final class CrateElimination {
                 if (cost[t] >= pair - 1e-9 || !mayHold(crates.get(t), gone, other, types)) {
                     continue;
                 }
-                if (spent[0] >= budget || spent[1] >= budget / 2) {
+                if (out(spent) || spent[1] >= budget / 2) {
                     return null;
                 }
                 spent[0]++;
@@ -183,7 +197,7 @@ final class CrateElimination {
         List<Integer> hosts = new ArrayList<>(byFill(layouts, crates, types));
         Collections.reverse(hosts);
         for (int host : hosts) {
-            if (host == victim || spent[0] >= budget) {
+            if (host == victim || out(spent)) {
                 continue;
             }
             CrateLayout own = result.get(host);

@@ -5,6 +5,7 @@ import com.google.ortools.linearsolver.MPObjective;
 import com.google.ortools.linearsolver.MPSolver;
 import com.google.ortools.linearsolver.MPVariable;
 import java.util.List;
+import kitwright.cutting.Deadline;
 import kitwright.model.CrateType;
 import kitwright.natives.SolverLibraries;
 
@@ -35,15 +36,23 @@ final class CrateLowerBounds {
     private static final double CUBIC_MM_PER_M3 = 1e9;
     /**
      * Deterministic work limit of the whole-crate model: SCIP branch-and-bound nodes (the sample kits need 0 or 1);
-     * its proven bound at the limit is the same on every machine. The time limit is only a safety net.
+     * its proven bound at the limit is the same on every machine. The crating stage's deadline (kit.json
+     * timeLimitSeconds) is only a safety net.
      */
     private static final int MAX_NODES = 10_000;
-    private static final long SAFETY_MILLIS = 5000;
 
     private CrateLowerBounds() {
     }
 
+    /** With the default time limit (kit.json's default timeLimitSeconds) as the safety net. */
     static CrateBounds compute(List<ItemType> types, List<CrateType> crates, int crateCount, Double totalPrice) {
+        return compute(types, crates, crateCount, totalPrice,
+                Deadline.in(kitwright.model.KitSettings.DEFAULT_TIME_LIMIT_SECONDS));
+    }
+
+    /** The bounds; the whole-crate model gets what is left of the crating stage's deadline. */
+    static CrateBounds compute(List<ItemType> types, List<CrateType> crates, int crateCount, Double totalPrice,
+                               Deadline deadline) {
         double boxVolume = 0;
         double solidVolume = 0;
         double mass = 0;
@@ -69,8 +78,8 @@ final class CrateLowerBounds {
         double gap;
         if (totalPrice != null) {
             double cheapest = crates.stream().mapToDouble(CrateType::price).min().orElseThrow();
-            relaxation = priceRelaxation(types, crates, false);
-            double whole = priceRelaxation(types, crates, true);
+            relaxation = priceRelaxation(types, crates, false, deadline);
+            double whole = priceRelaxation(types, crates, true, deadline);
             price = Math.max(count * cheapest, Double.isNaN(whole) ? relaxation : Math.max(relaxation, whole));
             gap = totalPrice <= 0 ? 0 : Math.max(0, (totalPrice - price) / totalPrice);
         } else {
@@ -84,7 +93,8 @@ final class CrateLowerBounds {
     }
 
     /** The model's optimum (its proven bound for whole crates); 0 or NaN when the solver proves nothing. */
-    private static double priceRelaxation(List<ItemType> types, List<CrateType> crates, boolean whole) {
+    private static double priceRelaxation(List<ItemType> types, List<CrateType> crates, boolean whole,
+                                          Deadline deadline) {
         SolverLibraries.load();
         double[] lengths = crates.stream().mapToDouble(CrateType::innerLengthMm).distinct().sorted().toArray();
         MPSolver solver = MPSolver.createSolver(whole ? "SCIP" : "GLOP");
@@ -125,10 +135,13 @@ final class CrateLowerBounds {
             }
             if (whole) {
                 solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
-                solver.setTimeLimit(SAFETY_MILLIS);
+                solver.setTimeLimit((long) Math.ceil(deadline.remainingSeconds() * 1000));
             }
             MPSolver.ResultStatus status = solver.solve();
             if (whole) {
+                if (status != MPSolver.ResultStatus.OPTIMAL) {
+                    deadline.passed(); // remembers whether the clock rather than the node limit stopped it
+                }
                 boolean solved = status == MPSolver.ResultStatus.OPTIMAL || status == MPSolver.ResultStatus.FEASIBLE;
                 return solved ? objective.bestBound() : Double.NaN;
             }

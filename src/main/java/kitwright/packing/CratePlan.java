@@ -12,7 +12,8 @@ import kitwright.model.Status;
  *
  * @param lowerBound proven lower bound on the number of crates ({@link CrateBounds#crates()})
  * @param boxes      every joint box, in id order (each one is a box item of exactly one crate)
- * @param reason     why no plan exists (INFEASIBLE only), else null
+ * @param reason     why no plan exists (INFEASIBLE); "stopped by the time limit" for a FEASIBLE plan whose search
+ *                   the wall-clock limit cut short; else null
  */
 @JsonPropertyOrder({"status", "lowerBound", "crates"})
 public record CratePlan(Status status, int lowerBound, List<Crate> crates,

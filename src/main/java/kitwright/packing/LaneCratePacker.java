@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import kitwright.cutting.Deadline;
 import kitwright.ids.IdScheme;
 import kitwright.model.CrateType;
 import kitwright.model.Joint;
@@ -22,7 +23,9 @@ import kitwright.nesting.NestedTube;
  *
  * <p>Status: OPTIMAL when the count meets the proven count bound and the price meets the price bound
  * ({@link CrateLowerBounds}); else FEASIBLE with the gap. INFEASIBLE when an item fits no crate type, with the
- * reason. Deterministic: stable ordering, one CP-SAT worker, a deterministic work limit.
+ * reason; FEASIBLE with the reason "stopped by the time limit" when the stage's deadline
+ * ({@link Limits#safetySeconds()}), not a work limit, cut a step short. Deterministic: stable ordering, one CP-SAT
+ * worker, deterministic work limits.
  */
 public final class LaneCratePacker implements CratePacker {
     private static final double EPS = 1e-6;
@@ -30,14 +33,23 @@ public final class LaneCratePacker implements CratePacker {
     private static final int ELIMINATION_BUDGET = 400;
 
     /**
-     * Solver limits.
+     * Work and time limits of the crating stage.
      *
      * @param deterministicTime CP-SAT deterministic work limit for the crate mix
-     * @param safetySeconds     wall-clock safety net per solver call
+     * @param safetySeconds     wall-clock safety net of the whole crating stage (one deadline, set when
+     *                          {@link #pack} starts, for every loop and solver call) [10, kit.json timeLimitSeconds]
      * @param pricingRounds     column generation rounds
+     * @param maxFillings       crate fillings the greedy constructions of the crate mix may spend
+     *                          ({@link CrateChoice}; the sample kits take 108-563) [2,000]
      */
-    public record Limits(double deterministicTime, double safetySeconds, int pricingRounds) {
+    public record Limits(double deterministicTime, double safetySeconds, int pricingRounds, long maxFillings) {
+        public static final long FILLINGS = 2_000L;
         public static final Limits DEFAULT = new Limits(1.0, 10.0, 20);
+
+        /** The given limits with the default budget of crate fillings. */
+        public Limits(double deterministicTime, double safetySeconds, int pricingRounds) {
+            this(deterministicTime, safetySeconds, pricingRounds, FILLINGS);
+        }
     }
 
     private final Limits limits;
@@ -62,6 +74,7 @@ public final class LaneCratePacker implements CratePacker {
 
     @Override
     public CratePlan pack(List<Bundle> bundles, List<Joint> joints, List<CrateType> crates, JointBox jointBox) {
+        Deadline deadline = Deadline.in(limits.safetySeconds());
         IdScheme ids = this.ids != null ? this.ids : IdScheme.avoiding(marks(bundles, joints));
         List<JointBoxLoad> boxes;
         try {
@@ -83,23 +96,24 @@ public final class LaneCratePacker implements CratePacker {
         }
         boolean priced = crates.stream().allMatch(c -> c.price() != null);
         double[] cost = crates.stream().mapToDouble(c -> priced ? c.price() : 1.0).toArray();
-        PatternCover cover = new PatternCover(limits.deterministicTime(), limits.safetySeconds());
-        List<CrateLayout> layouts = new CrateChoice(cover, limits.pricingRounds())
+        PatternCover cover = new PatternCover(limits.deterministicTime(), deadline);
+        List<CrateLayout> layouts = new CrateChoice(cover, limits.pricingRounds(), limits.maxFillings(), deadline)
                 .choose(crates, cost, items.types());
         if (layouts.isEmpty()) {
             return CratePlan.infeasible("no crate filling holds every item (check the crate catalog)");
         }
         layouts = downsize(dropSurplus(layouts, items.types(), crates), crates, cost, items.types());
-        List<CrateLayout> fewer = new CrateElimination(ELIMINATION_BUDGET).improve(layouts, crates, cost,
+        List<CrateLayout> fewer = new CrateElimination(ELIMINATION_BUDGET, deadline).improve(layouts, crates, cost,
                 items.types());
         layouts = downsize(fewer, crates, cost, items.types());
         List<Crate> result = realise(layouts, crates, items, ids);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
-        CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price);
+        CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price, deadline);
         boolean optimal = result.size() <= bounds.crates()
                 && (price == null || price <= bounds.price() + 1e-6 * Math.max(1, price));
+        // a step the deadline cut short makes the plan depend on the machine's speed: say so, as cutting does
         return new CratePlan(optimal ? Status.OPTIMAL : Status.FEASIBLE, bounds.crates(), result, boxes, bounds,
-                null);
+                !optimal && deadline.struck() ? Deadline.STOPPED_BY_TIME_LIMIT : null);
     }
 
     /** The marks of every tube of the bundles and of the joints. */

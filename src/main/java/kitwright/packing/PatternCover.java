@@ -6,6 +6,7 @@ import com.google.ortools.sat.CpSolverStatus;
 import com.google.ortools.sat.IntVar;
 import com.google.ortools.sat.LinearExpr;
 import java.util.Arrays;
+import kitwright.cutting.Deadline;
 import kitwright.natives.SolverLibraries;
 
 /**
@@ -28,15 +29,23 @@ public final class PatternCover {
     }
 
     private final double deterministicTime;
-    private final double safetySeconds;
+    private final Deadline deadline;
 
     /**
      * @param deterministicTime CP-SAT deterministic work limit (about seconds on a fast machine)
-     * @param safetySeconds     wall-clock safety net
+     * @param safetySeconds     wall-clock safety net, from now
      */
     public PatternCover(double deterministicTime, double safetySeconds) {
+        this(deterministicTime, Deadline.in(safetySeconds));
+    }
+
+    /**
+     * @param deterministicTime CP-SAT deterministic work limit (about seconds on a fast machine)
+     * @param deadline          the stage's deadline: each solve gets what is left of it as its wall-clock net
+     */
+    public PatternCover(double deterministicTime, Deadline deadline) {
         this.deterministicTime = deterministicTime;
-        this.safetySeconds = safetySeconds;
+        this.deadline = deadline;
     }
 
     /**
@@ -96,8 +105,11 @@ public final class PatternCover {
 
         CpSolver solver = new CpSolver();
         solver.getParameters().setNumWorkers(1).setRandomSeed(1).setMaxDeterministicTime(deterministicTime)
-                .setMaxTimeInSeconds(safetySeconds);
+                .setMaxTimeInSeconds(deadline.remainingSeconds());
         CpSolverStatus status = solver.solve(model);
+        if (status != CpSolverStatus.OPTIMAL) {
+            deadline.passed(); // remembers whether the clock rather than the deterministic limit stopped it
+        }
         if (status != CpSolverStatus.OPTIMAL && status != CpSolverStatus.FEASIBLE) {
             return new Result(hint == null ? new int[patterns] : hint.clone(), false);
         }

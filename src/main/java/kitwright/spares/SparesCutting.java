@@ -7,6 +7,7 @@ import java.util.Map;
 import kitwright.cutting.Cut;
 import kitwright.cutting.CutPattern;
 import kitwright.cutting.CutPlan;
+import kitwright.cutting.Deadline;
 import kitwright.cutting.SectionCutPlan;
 import kitwright.cutting.Spare;
 import kitwright.metrics.KitMetricsCalculator;
@@ -23,7 +24,11 @@ import kitwright.model.Status;
  * plan cuts beyond the demand anyway count as spares too. (2) While some mark is short, add the shortfall to that
  * mark's demand, re-plan, and fill the new plan's offcuts again with the spares still missing. Each round adds at
  * least one bar to the demand of a short mark and a plan with demand + r holds at least r spares, so the loop ends
- * after at most (total spares + 1) rounds; in practice one or two.
+ * after at most (total spares + 1) rounds; in practice one or two. Every round re-solves the changed sections, each
+ * up to its own time limit, so the rounds are bounded twice: by a deterministic budget ({@link #MAX_ROUNDS}) and by
+ * one wall-clock deadline for the whole loop (kit.json timeLimitSeconds, from the end of the first plan). The round
+ * that reaches either buys every spare outright (a plan with demand + r cuts at least r spares), so the loop always
+ * ends with the spares made.
  *
  * <p><b>Accounting.</b> A mark's bought spares are the bars added to its demand; the rest of its spares came from
  * offcuts. The spares' cost is the stock cost of the final plan minus that of the plan without spares. When a
@@ -33,11 +38,20 @@ import kitwright.model.Status;
  * <p>Pure function over {@link CuttingSteps}: no state, no I/O.
  */
 public final class SparesCutting {
+    /** Re-plan rounds at most; the last one buys what is still short. */
+    public static final int MAX_ROUNDS = 5;
+
     private SparesCutting() {
     }
 
     public static SparesCuttingResult apply(Kit kit, SparesPlan spares, CuttingSteps cutting) {
+        return apply(kit, spares, cutting, MAX_ROUNDS);
+    }
+
+    /** As {@link #apply(Kit, SparesPlan, CuttingSteps)} with at most {@code maxRounds} (at least 1) re-plans. */
+    static SparesCuttingResult apply(Kit kit, SparesPlan spares, CuttingSteps cutting, int maxRounds) {
         CutPlan base = cutting.plan(kit);
+        Deadline deadline = Deadline.in(kit.settings().timeLimitSeconds());
         Map<String, Integer> need = new LinkedHashMap<>();
         for (Bar bar : kit.bars()) {
             MarkSpares m = spares.mark(bar.mark());
@@ -54,6 +68,12 @@ public final class SparesCutting {
             }
             Map<String, Integer> next = new LinkedHashMap<>(added);
             stillShort.forEach((mark, v) -> next.merge(mark, v, Integer::sum));
+            boolean last = rounds + 1 >= maxRounds || deadline.passed();
+            if (last) {
+                // buy every spare outright: the re-plan then holds them all, whatever its offcuts do (a mark that
+                // is not short now may lose its free spares in the re-plan)
+                need.forEach((mark, n) -> next.merge(mark, n, Math::max));
+            }
             Kit more = withExtraDemand(kit, next);
             CutPlan replanned = cutting.plan(more);
             if (lostFeasibility(plan, replanned)) {
@@ -63,6 +83,10 @@ public final class SparesCutting {
             rounds++;
             added = next;
             plan = cutting.fillOffcuts(more, replanned, shortfall(need, produced(replanned, kit)));
+            if (last) {
+                missing = shortfall(need, produced(plan, kit)); // none when the re-plan met its demand
+                break;
+            }
         }
         plan = withSparesOf(plan, kit);
         Map<String, Integer> extra = produced(plan, kit);

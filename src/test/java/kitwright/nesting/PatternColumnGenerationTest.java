@@ -56,7 +56,8 @@ class PatternColumnGenerationTest {
                 continue;
             }
             PatternColumnGeneration.Result cg = PatternColumnGeneration.run(problem, types, pricing, 100);
-            List<Pattern> all = PatternEnumeration.all(problem, types, pricing, 20000, 12);
+            List<Pattern> all = PatternEnumeration.all(problem, types, pricing, 20000, 12,
+                    new LayoutSearchWork(Long.MAX_VALUE, kitwright.cutting.Deadline.in(600)));
             assertThat(all).isNotNull();
             double overGenerated = referenceLp(types, cg.columns().stream().map(Pattern::hostType).toList(),
                     cg.lpCounts());
