@@ -120,7 +120,7 @@ final class CutSummaryText {
 
     /** A kerf or trim as written, at least one decimal: 3.0, 1.04 (a hundredth of kerf decides a fit). */
     private static String saw(double mm) {
-        return fixed(mm, Math.max(1, java.math.BigDecimal.valueOf(mm).stripTrailingZeros().scale()));
+        return fixed(mm, Math.max(1, kitwright.cutting.SawArithmetic.decimals(mm)));
     }
 
     private static String fixed(double value, int decimals) {

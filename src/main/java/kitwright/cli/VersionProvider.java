@@ -1,12 +1,12 @@
 package kitwright.cli;
 
+import kitwright.io.KitwrightVersion;
 import picocli.CommandLine;
 
 /** Version from the jar manifest (Implementation-Version), or "development" when run from classes. */
 public final class VersionProvider implements CommandLine.IVersionProvider {
     @Override
     public String[] getVersion() {
-        String v = KitwrightCommand.class.getPackage().getImplementationVersion();
-        return new String[] {"kitwright " + (v == null ? "development" : v)};
+        return new String[] {"kitwright " + KitwrightVersion.current()};
     }
 }

@@ -49,7 +49,7 @@ record LengthScale(int decimals, boolean exact) {
 
     /** Decimals of a length as written: 6000 has 0, 599.1 has 1, 1.04 has 2. */
     static int decimalsOf(double mm) {
-        return Math.max(0, SawArithmetic.exact(mm).stripTrailingZeros().scale());
+        return SawArithmetic.decimals(mm);
     }
 
     private static List<Double> lengths(SectionProblem problem) {

@@ -19,6 +19,11 @@ public final class SawArithmetic {
     private SawArithmetic() {
     }
 
+    /** Decimals of a length as written: 6000 has 0, 599.1 has 1, 1.04 has 2. */
+    public static int decimals(double mm) {
+        return Math.max(0, exact(mm).stripTrailingZeros().scale());
+    }
+
     /** The decimal a length was written as. */
     public static BigDecimal exact(double mm) {
         return BigDecimal.valueOf(mm);

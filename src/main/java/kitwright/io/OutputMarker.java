@@ -35,9 +35,8 @@ final class OutputMarker {
 
     /** The marker's text for a folder holding {@code files} (relative names, '/'-separated). */
     static String text(Set<String> files) {
-        String version = OutputMarker.class.getPackage().getImplementationVersion();
         StringBuilder sb = new StringBuilder(HEADER).append(", written by kitwright ")
-                .append(version == null ? "development" : version).append('\n')
+                .append(KitwrightVersion.current()).append('\n')
                 .append("# The next kitwright run into this folder replaces the files listed below; it stops if it"
                         + " finds any other file here. Keep your own files elsewhere.\n");
         files.forEach(name -> sb.append(name).append('\n'));

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import kitwright.cutting.SectionCutPlan;
+import kitwright.io.KitwrightVersion;
 import kitwright.model.JointBox;
 import kitwright.model.Kit;
 import kitwright.model.KitSettings;
@@ -46,7 +47,7 @@ final class InputsSection {
         if (kit.dir() != null) {
             settings.add(new Setting("Kit folder", folderName(kit.dir())));
         }
-        settings.add(new Setting("kitwright", version()));
+        settings.add(new Setting("kitwright", KitwrightVersion.current()));
         settings.add(new Setting("Tube catalog", file(kit.dir(), kit.catalog().file())));
         settings.add(new Setting("Materials catalog", catalog(kit.dir(), kit.files().materials(),
                 "none (masses and carbon unknown)")));
@@ -119,11 +120,6 @@ final class InputsSection {
         return file == null ? none : file(kitDir, file);
     }
 
-    /** The version of the running kitwright (the jar's manifest), or "development" when run from classes. */
-    static String version() {
-        String v = InputsSection.class.getPackage().getImplementationVersion();
-        return v == null ? "development" : v;
-    }
 
     /** The kit folder's own name, also when it was typed as "." or with a trailing "..". */
     private static String folderName(Path kitDir) {

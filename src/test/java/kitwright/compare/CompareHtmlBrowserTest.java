@@ -81,13 +81,7 @@ class CompareHtmlBrowserTest {
      */
     @Test
     void printsOnA4WithNoRowSplitAcrossPages() throws Exception {
-        Path pdftotext = Path.of("/usr/bin/pdftotext");
-        if (!Files.isExecutable(pdftotext)) {
-            if ("true".equalsIgnoreCase(System.getenv("CI"))) {
-                throw new AssertionError("CI=true but pdftotext is missing: install the Debian package poppler-utils");
-            }
-            Assumptions.abort("pdftotext is missing (apt-get install poppler-utils)");
-        }
+        Path pdftotext = kitwright.testing.ExternalTool.require("/usr/bin/pdftotext", "poppler-utils");
         Path out = tmp.resolve("compare-print");
         CompareFiles.write(out, CompareFixtures.three());
         Path pdf = tmp.resolve("compare.pdf");

@@ -26,9 +26,9 @@ import kitwright.report.cutting.CutListCsv;
 import kitwright.report.labels.CodeLine;
 import kitwright.report.labels.LabelsHtml;
 import kitwright.validate.CsvOutput;
+import kitwright.testing.ExternalTool;
 import kitwright.validate.PlanValidator;
 import org.apache.commons.csv.CSVRecord;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -45,17 +45,6 @@ class LabelsPrintTest {
     private static final String KIT = "sample-kits/alu-kiosk";
     private static final String DATE = "2026-12-03";
 
-    private static Path tool(String path, String debianPackage) {
-        Path tool = Path.of(path);
-        if (!Files.isExecutable(tool)) {
-            String message = path + " is not installed (apt-get install " + debianPackage + "); the label test needs it";
-            if ("true".equals(System.getenv("CI"))) {
-                fail(message + " and CI=true");
-            }
-            Assumptions.abort(message + "; skipped outside CI");
-        }
-        return tool;
-    }
 
     private static String run(Path dir, String... command) throws IOException, InterruptedException {
         Path log = dir.resolve("tool-" + Path.of(command[0]).getFileName() + ".out");
@@ -120,11 +109,11 @@ class LabelsPrintTest {
     void everyPrintedCodeIsACutListRow(@TempDir Path dir) throws Exception {
         HeadlessChromium chromium = HeadlessChromium.find(dir).orElse(null);
         if (chromium == null) {
-            tool("/usr/bin/chromium", "chromium");
+            ExternalTool.require("/usr/bin/chromium", "chromium");
             fail("chromium is installed but could not be started");
         }
-        Path pdftoppm = tool("/usr/bin/pdftoppm", "poppler-utils");
-        Path zbarimg = tool("/usr/bin/zbarimg", "zbar-tools");
+        Path pdftoppm = ExternalTool.require("/usr/bin/pdftoppm", "poppler-utils");
+        Path zbarimg = ExternalTool.require("/usr/bin/zbarimg", "zbar-tools");
         Path out = dir.resolve("plan");
         CliRun plan = CliRun.of("plan", KIT, "--out", out.toString(), "--date", DATE);
         assertThat(plan.exitCode()).as(plan.err()).isZero();
