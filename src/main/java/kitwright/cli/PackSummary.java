@@ -46,7 +46,7 @@ final class PackSummary {
         Map<String, Integer> byType = new TreeMap<>();
         crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
         sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");
-        Double price = price(crates, catalog);
+        Double price = crates.price(catalog);
         if (price != null) {
             sb.append(", price ").append(money(price));
         }
@@ -114,17 +114,5 @@ final class PackSummary {
         StringBuilder sb = new StringBuilder();
         counts.forEach((k, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(k).append(" x ").append(n));
         return sb.toString();
-    }
-
-    private static Double price(CratePlan plan, List<CrateType> catalog) {
-        double sum = 0;
-        for (Crate c : plan.crates()) {
-            CrateType t = catalog.stream().filter(x -> x.name().equals(c.type())).findFirst().orElse(null);
-            if (t == null || t.price() == null) {
-                return null;
-            }
-            sum += t.price();
-        }
-        return sum;
     }
 }

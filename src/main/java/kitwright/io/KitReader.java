@@ -148,7 +148,7 @@ public final class KitReader {
     }
 
     /** The materials, or null when a defaulted file is absent or the file has problems (no material check). */
-    private static Map<String, Material> materials(Path file, boolean named, Problems problems) {
+    static Map<String, Material> materials(Path file, boolean named, Problems problems) {
         if (!named && !present(file)) {
             return null;
         }
@@ -158,7 +158,7 @@ public final class KitReader {
     }
 
     /** The tube catalog, or null when it is missing or has problems (section checks would mislead). */
-    private static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
+    static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
                                        Path materialsFile, Problems problems) {
         if (!present(file)) {
             String hint = named ? "check the path; kit.json paths are relative to the kit folder"
