@@ -39,7 +39,7 @@ final class SweepCharts {
         for (int i = 0; i < rows.size(); i++) {
             max = Math.max(max, total(series, i));
         }
-        double step = step(max);
+        double step = decimals == 0 ? Math.max(1, step(max)) : step(max); // whole counts get whole ticks
         double top = Math.max(step, Math.ceil(max / step) * step);
         Svg svg = open(label);
         axes(svg, top, step, unit, decimals);
