@@ -89,14 +89,14 @@ class CompareWritersTest {
         assertThat(count(html, "<th scope=\"col\" class=\"option\">")).isEqualTo(3);
         String cost = rowOf(html, "cost");
         assertThat(cellsOf(cost)).hasSize(3);
-        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4\u202F800.00<span class=\"badge best\">best");
-        assertThat(cellsOf(cost).get(0)).contains("+400.00 (+8.3 %)").doesNotContain("badge");
+        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4\u202F800.00<span class=\"best-mark\">best");
+        assertThat(cellsOf(cost).get(0)).contains("+400.00 (+8.3 %)").doesNotContain("best-mark");
         assertThat(cellsOf(cost).get(2)).contains("+300.50 (+6.3 %)");
         String reuse = rowOf(html, "reuseRatio");
-        assertThat(cellsOf(reuse).get(0)).contains("badge best");
+        assertThat(cellsOf(reuse).get(0)).contains("best-mark");
         assertThat(cellsOf(reuse).get(2)).contains("\u22120.70 (\u221228.0 %)");
         assertThat(cellsOf(rowOf(html, "offcutPct")).get(0)).contains("+6.50 points");
-        assertThat(cellsOf(rowOf(html, "members"))).allSatisfy(c -> assertThat(c).doesNotContain("badge"));
+        assertThat(cellsOf(rowOf(html, "members"))).allSatisfy(c -> assertThat(c).doesNotContain("best-mark"));
         assertThat(count(html, "<svg class=\"chart\"")).isEqualTo(4);
         for (String chart : List.of("cost", "waste", "mass", "vehicles")) {
             assertThat(html).contains("<svg class=\"chart\" data-metric=\"" + chart + "\"");
