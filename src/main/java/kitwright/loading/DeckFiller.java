@@ -30,7 +30,7 @@ final class DeckFiller {
 
     DeckLayout fill(int vehicleIndex, VehicleType vehicle, List<CrateClass> classes, int[] available) {
         List<CrateClass> offered = offer(vehicle, classes, available);
-        List<Stack> pending = stack(offered, vehicle.deckHeightMm());
+        List<Stack> pending = stack(offered, vehicle.loadHeightMm());
         pending.sort(Comparator.<Stack>comparingDouble(s -> -Math.max(s.base().lengthMm(), s.base().widthMm()))
                 .thenComparingDouble(s -> -s.base().footprint()).thenComparingDouble(s -> -s.mass()));
         int[] counts = new int[classes.size()];
@@ -95,7 +95,7 @@ final class DeckFiller {
     /** Whether a crate of this class can ride on the vehicle at all. */
     static boolean fitsVehicle(CrateClass c, VehicleType v) {
         return (fits(c, false, v.deckLengthMm(), v.deckWidthMm()) || fits(c, true, v.deckLengthMm(), v.deckWidthMm()))
-                && c.heightMm() <= v.deckHeightMm() + EPS && c.massKg() <= v.payloadKg() + PAYLOAD_TOLERANCE_KG;
+                && c.heightMm() <= v.loadHeightMm() + EPS && c.massKg() <= v.payloadKg() + PAYLOAD_TOLERANCE_KG;
     }
 
     private static List<CrateClass> offer(VehicleType v, List<CrateClass> classes, int[] available) {
@@ -104,7 +104,7 @@ final class DeckFiller {
                 .sorted(Comparator.<CrateClass>comparingDouble(c -> -c.footprint())
                         .thenComparingDouble(c -> -c.massKg()).thenComparingInt(CrateClass::index))
                 .toList();
-        double deckVolume = v.deckLengthMm() * v.deckWidthMm() * v.deckHeightMm();
+        double deckVolume = v.deckLengthMm() * v.deckWidthMm() * v.loadHeightMm();
         double volume = 0;
         double mass = 0;
         List<CrateClass> offered = new ArrayList<>();

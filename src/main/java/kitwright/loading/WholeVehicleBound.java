@@ -116,7 +116,7 @@ final class WholeVehicleBound {
             return Double.NaN;
         }
         try {
-            double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::deckHeightMm).max().orElse(0);
+            double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::loadHeightMm).max().orElse(0);
             boolean[] top = new boolean[classes.size()];
             boolean[] floor = new boolean[classes.size()];
             for (CrateClass c : classes) {
@@ -147,7 +147,7 @@ final class WholeVehicleBound {
                 MPConstraint mass = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "payload_" + v);
                 MPConstraint volume = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "volume_" + v);
                 mass.setCoefficient(y[v], -t.payloadKg());
-                volume.setCoefficient(y[v], -t.deckLengthMm() * t.deckWidthMm() * t.deckHeightMm() / 1e9);
+                volume.setCoefficient(y[v], -t.deckLengthMm() * t.deckWidthMm() * t.loadHeightMm() / 1e9);
                 for (CrateClass c : classes) {
                     mass.setCoefficient(x[c.index()][v], c.massKg());
                     volume.setCoefficient(x[c.index()][v], c.volume() / 1e9);
