@@ -39,6 +39,7 @@ final class DeckFiller {
         double mass = 0;
         double floor = 0;
         int stackId = 0;
+        int rowId = 0;
         while (!pending.isEmpty()) {
             Stack first = null;
             for (Stack s : pending) {
@@ -71,7 +72,8 @@ final class DeckFiller {
                 double z = 0;
                 for (int level = 0; level < p.stack().crates().size(); level++) {
                     CrateClass c = p.stack().crates().get(level);
-                    slots.add(new DeckLayout.Slot(c.index(), x + p.x(), p.y(), z, p.rotated(), stackId, level));
+                    slots.add(new DeckLayout.Slot(c.index(), x + p.x(), p.y(), z, p.rotated(), stackId, level,
+                            rowId));
                     counts[c.index()]++;
                     z += c.heightMm();
                 }
@@ -80,6 +82,7 @@ final class DeckFiller {
                 stackId++;
             }
             x += best.depth();
+            rowId++;
         }
         return new DeckLayout(vehicleIndex, counts, slots, mass, floor);
     }
