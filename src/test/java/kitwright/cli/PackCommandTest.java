@@ -47,6 +47,7 @@ class PackCommandTest {
                 .matches("\\p{ASCII}*").containsPattern("centre of gravity \\d+(\\.\\d)? mm");
         assertThat(first.resolve("packing-lists.csv")).exists();
         assertThat(first.resolve("manifests.csv")).exists();
+        assertThat(first.resolve("load-lists.csv")).exists();
         assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
                 .anyMatch(n -> n.startsWith("crate-CRT-1")).anyMatch(n -> n.startsWith("deck-TRIP-1"));
         JsonNode json = new ObjectMapper().readTree(temp.resolve("first.json").toFile());
