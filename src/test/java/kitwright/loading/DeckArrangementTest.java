@@ -116,4 +116,26 @@ class DeckArrangementTest {
         assertThat(load(plan(c, 3, 100), List.of(c), open).vehicles()).hasSize(1);
         assertThat(load(plan(c, 3, 100), List.of(c), door).vehicles()).hasSize(2);
     }
+
+    @Test
+    @DisplayName("loading order: the crate holding joint boxes goes to the doors (loaded last, unloaded first) though"
+            + " it is the heaviest; the others heaviest forward; every crate in its own row (2600 x 1300 on a 2400"
+            + " deck)")
+    void jointsComeOffFirst() {
+        CrateType c = crateType("c", 2600, 1300, 1000, false, 0);
+        List<kitwright.packing.Crate> crates = new java.util.ArrayList<>();
+        double[] gross = {2000, 1500, 1000};
+        for (int i = 0; i < 3; i++) {
+            List<kitwright.packing.CrateItem> items = i == 0 ? List.of(new kitwright.packing.CrateItem(
+                    kitwright.packing.ItemKind.BOX, "BOX-1", 0, 0, 0, 600, 400, 300, 20)) : List.of();
+            crates.add(new kitwright.packing.Crate("C" + (i + 1), "c", 2550, 1250, 950, 2600, 1300, 1000, 40, 5000,
+                    gross[i], items));
+        }
+        CratePlan plan = new CratePlan(Status.FEASIBLE, 1, crates, List.of(), null, null);
+        VehicleType deck = new VehicleType("deck", 9000, 2400, 2400, 9000, 400, "invented");
+        VehicleLoad v = load(plan, List.of(c), deck).vehicles().get(0);
+        assertThat(v.crates()).extracting(kitwright.loading.PlacedCrate::ref).containsExactly("C2", "C3", "C1");
+        assertThat(v.crates().get(0).xMm()).isLessThan(v.crates().get(1).xMm());
+        assertThat(v.crates().get(1).xMm()).isLessThan(v.crates().get(2).xMm());
+    }
 }
