@@ -113,9 +113,10 @@ final class CompareCharts {
     /** The four charts of the page: cost, waste, mass and vehicles. */
     static List<Spec> specs() {
         return List.of(
-                new Spec("cost", "Cost per option", "Stock cost with the trip cost stacked on it.",
+                new Spec("cost", "Cost per option", "Stock cost with the crate and trip costs stacked on it.",
                         List.of(new Series("cost", List.of(
                                 new Segment("stock", "#3b6ea8", OptionSummary::cost),
+                                new Segment("crates", "#6f93c4", OptionSummary::crateCost),
                                 new Segment("trips", "#9cb8d9", OptionSummary::tripCost)), "", 2))),
                 new Spec("waste", "Waste per option", "Offcut in percent of the stock length cut: scrap and "
                         + "remnants that go back to the rack.",

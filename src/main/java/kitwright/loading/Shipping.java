@@ -121,7 +121,7 @@ public final class Shipping {
     }
 
     /** The total price of the plan's crates, from the catalog. */
-    static double cratePrice(CratePlan plan, List<CrateType> catalog) {
+    public static double cratePrice(CratePlan plan, List<CrateType> catalog) {
         double sum = 0;
         for (kitwright.packing.Crate c : plan.crates()) {
             sum += catalog.stream().filter(t -> t.name().equals(c.type())).findFirst()
