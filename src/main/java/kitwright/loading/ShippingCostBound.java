@@ -86,6 +86,9 @@ final class ShippingCostBound {
         if (demand.items().stream().anyMatch(i -> i.bundle() && i.lengthMm() > longestInside + 1e-6)) {
             return Double.POSITIVE_INFINITY;
         }
+        if (deadline.passed()) {
+            return 0; // the clock has stopped the stage: 0 is a valid bound, and the same on every machine
+        }
         kitwright.natives.SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("SCIP");
         if (solver == null) {
@@ -144,7 +147,7 @@ final class ShippingCostBound {
                 }
             }
             solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
-            solver.setTimeLimit((long) Math.ceil(Math.max(0.05, deadline.remainingSeconds()) * 1000));
+            solver.setTimeLimit((long) Math.ceil(deadline.remainingSeconds() * 1000));
             MPSolver.ResultStatus status = solver.solve();
             if (status == MPSolver.ResultStatus.INFEASIBLE) {
                 return Double.POSITIVE_INFINITY;

@@ -110,6 +110,9 @@ final class WholeVehicleBound {
      * same way on every machine; what is left of the loading stage's deadline is only a safety net.
      */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost, Deadline deadline) {
+        if (deadline.passed()) {
+            return Double.NaN; // the clock has stopped the stage: how far SCIP would get depends on the machine
+        }
         SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("SCIP");
         if (solver == null) {
