@@ -21,10 +21,11 @@ final class CompareCharts {
     private static final int LABEL_MAX_CHARS = 24;
 
     // Fills of the look (kitwright/style/look.css): each at least 3:1 against the paper (WCAG 2.1, SC 1.4.11
-    // non-text contrast), and the two parts of a stacked bar at least 2:1 apart in luminance, so that they
+    // non-text contrast), and the parts of a stacked bar at least 2:1 apart from each other in luminance, so that they
     // separate in greyscale print; the legend names every fill.
-    static final String STOCK = "#2e4a62";
-    static final String TRIPS = "#6f8aa3";
+    static final String STOCK = "#15202b";
+    static final String CRATES = "#3f5a72";
+    static final String TRIPS = "#7891a9";
     static final String SCRAP = "#8f3b1b";
     static final String REMNANT = "#c0843a";
     static final String BOUGHT = "#3f5b3a";
@@ -124,9 +125,10 @@ final class CompareCharts {
     /** The four charts of the page: cost, waste, mass and vehicles. */
     static List<Spec> specs() {
         return List.of(
-                new Spec("cost", "Cost per option", "Stock cost with the trip cost stacked on it.",
+                new Spec("cost", "Cost per option", "Stock cost with the crate and trip costs stacked on it.",
                         List.of(new Series("cost", List.of(
                                 new Segment("stock", STOCK, OptionSummary::cost),
+                                new Segment("crates", CRATES, OptionSummary::crateCost),
                                 new Segment("trips", TRIPS, OptionSummary::tripCost)), "", 2))),
                 new Spec("waste", "Waste per option", "Offcut in percent of the stock length cut: scrap and "
                         + "remnants that go back to the rack.",

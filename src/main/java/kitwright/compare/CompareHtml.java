@@ -23,7 +23,8 @@ public final class CompareHtml {
     private CompareHtml() {
     }
 
-    record OptionHead(String name, String status, String statusClass) {
+    /** @param reason which stages are not proven and by how much, or null */
+    record OptionHead(String name, String status, String statusClass, String reason) {
     }
 
     record CellView(String text, boolean best, String difference, String cssClass) {
@@ -54,7 +55,7 @@ public final class CompareHtml {
     static Page page(Comparison comparison) {
         List<OptionHead> heads = comparison.options().stream()
                 .map(o -> new OptionHead(o.kit(), o.status().name(),
-                        "status-" + o.status().name().toLowerCase(Locale.ROOT)))
+                        "status-" + o.status().name().toLowerCase(Locale.ROOT), o.statusReason()))
                 .toList();
         List<RowView> rows = new ArrayList<>();
         for (Comparison.Row row : comparison.rows()) {

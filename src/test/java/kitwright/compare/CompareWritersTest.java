@@ -16,7 +16,8 @@ import org.junit.jupiter.api.Test;
 class CompareWritersTest {
     private static final List<String> KEYS = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
             "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg",
-            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
+            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "crateCost",
+            "totalCost", "status", "statusReason", "stages");
 
     @Test
     void jsonHasExactlyTheIssueKeysInOrder() throws Exception {
@@ -53,7 +54,8 @@ class CompareWritersTest {
         CompareCsv.write(CompareFixtures.three(), out);
         List<CSVRecord> records = CsvOutput.records(out.toString());
         // compare.csv names the compare.json keys in snake_case
-        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream()
+        // every key but the stages (a list: compare.csv gives them as status_reason)
+        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream().filter(k -> !k.equals("stages"))
                 .map(k -> k.replaceAll("([A-Z])", "_$1").toLowerCase(java.util.Locale.ROOT))
                 .collect(java.util.stream.Collectors.joining(",")) + "\r\n");
         assertThat(records).hasSize(3);
@@ -95,7 +97,11 @@ class CompareWritersTest {
         String reuse = rowOf(html, "reuseRatio");
         assertThat(cellsOf(reuse).get(0)).contains("best-mark");
         assertThat(cellsOf(reuse).get(2)).contains("\u22120.70 (\u221228.0 %)");
-        assertThat(cellsOf(rowOf(html, "offcutPct")).get(0)).contains("+6.50 points");
+        assertThat(cellsOf(rowOf(html, "scrapPct")).get(0)).contains("+2.60 points");
+        // remnants go back to the rack as stock with value: neither they nor the offcut holding them are ranked
+        for (String key : List.of("offcutPct", "remnantPct")) {
+            assertThat(cellsOf(rowOf(html, key))).allSatisfy(c -> assertThat(c).doesNotContain("best-mark"));
+        }
         assertThat(cellsOf(rowOf(html, "members"))).allSatisfy(c -> assertThat(c).doesNotContain("best-mark"));
         assertThat(count(html, "<svg class=\"chart\"")).isEqualTo(4);
         for (String chart : List.of("cost", "waste", "mass", "vehicles")) {
