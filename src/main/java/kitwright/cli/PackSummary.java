@@ -76,7 +76,17 @@ final class PackSummary {
                     .append(" kg of ")
                     .append(kg(v.payloadKg())).append(" kg, floor ").append(mm(v.floorLengthMm()))
                     .append(" of ").append(mm(v.deckLengthMm())).append(" mm, centre of gravity ")
-                    .append(mm(v.centreOfGravityMm())).append(" mm from the front.\n");
+                    .append(mm(v.centreOfGravityMm())).append(" mm from the front, ")
+                    .append(mm(Math.abs(v.lateralCentreOfGravityMm()))).append(" mm off the centreline; ")
+                    .append(axles(v)).append(".\n");
+            if (v.balanceNote() != null) {
+                sb.append("    ").append(v.balanceNote()).append(".\n");
+            }
+        }
+        if (loads.totalCost() != null) {
+            sb.append("Crates and trips: ").append(money(loads.totalCost())).append("; lower bound ")
+                    .append(money(loads.totalLowerBound())).append(", gap ").append(percent(loads.totalGap()))
+                    .append(" %.\n");
         }
         return sb.toString();
     }
@@ -85,6 +95,16 @@ final class PackSummary {
     // groups (a narrow no-break space) show as '?' or worse in many terminals and trip up scripts.
     private static String money(double value) {
         return ShopFormat.money(value).replace(ShopFormat.GROUP, "");
+    }
+
+    /** "kingpin 9120 of 12000 kg, rear axles 17400 of 24000 kg" or "axle loads not checked". */
+    private static String axles(VehicleLoad v) {
+        if (v.axleLoadsKg() == null || v.axles() == null) {
+            return kitwright.report.LogisticsCsv.NOT_CHECKED;
+        }
+        return kitwright.report.LogisticsCsv.frontSupport(v) + " " + kg(v.axleLoadsKg().front()) + " of "
+                + kg(v.axles().maxFrontKg()) + " kg, rear axles " + kg(v.axleLoadsKg().rear()) + " of "
+                + kg(v.axles().maxRearKg()) + " kg";
     }
 
     private static String kg(double value) {
