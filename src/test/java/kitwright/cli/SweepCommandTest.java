@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 import kitwright.compare.OptionSummaries;
 import kitwright.compare.OptionSummary;
 import kitwright.io.KitFiles;
@@ -15,6 +16,8 @@ import kitwright.io.KitReader;
 import kitwright.io.PrettyJson;
 import kitwright.model.Kit;
 import kitwright.plan.PlanResult;
+import kitwright.report.Look;
+import kitwright.testing.PageLook;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -101,8 +104,13 @@ class SweepCommandTest {
             assertThat(kit.structures().stream().mapToInt(s -> s.count()).sum()).isEqualTo(10);
         }
         assertThat(Files.readString(out.resolve("sweep.csv"))).startsWith("\uFEFFmarks,kit,max_change_mm,");
-        assertThat(Files.readString(out.resolve("sweep.html"))).contains("re-solve each structure's geometry")
+        String html = Files.readString(out.resolve("sweep.html"));
+        assertThat(html).contains("re-solve each structure's geometry")
                 .contains("data-chart=\"trade-off\"").contains("class=\"histogram\"").doesNotContain("<script");
+        // the project's one look: the shared stylesheet, text at 4.5:1 or more (WCAG 2.1 AA), nothing from the network
+        assertThat(html).contains(Look.css());
+        assertThat(PageLook.lowContrastPairs(PageLook.styles(html), Set.of(), Set.of())).isEmpty();
+        PageLook.assertNoNetwork("sweep.html", html);
         assertThat(out.resolve("k02").resolve("plan")).doesNotExist();
     }
 

@@ -19,9 +19,9 @@ final class SweepCharts {
     private static final double RIGHT = 14;
     private static final double TOP = 14;
     private static final double BOTTOM = 38;
-    private static final String INK = "#1f2a36";
-    private static final String SOFT = "#4a5563";
-    private static final String RULE = "#e4e7ea";
+    private static final String INK = "#1d1f21";
+    private static final String SOFT = "#4f5359";
+    private static final String RULE = "#dfe1e3";
 
     private SweepCharts() {
     }
@@ -63,7 +63,7 @@ final class SweepCharts {
                 base += v;
             }
             if (r.status() == kitwright.model.Status.INFEASIBLE) {
-                svg.text(x + width / 2, y(0, top) - 4, "\u00d7", "text-anchor", "middle", "fill", "#a4461d",
+                svg.text(x + width / 2, y(0, top) - 4, "\u00d7", "text-anchor", "middle", "fill", "#8f3b1b",
                         "font-size", 12);
             }
             if (rows.size() <= 24 || i % 2 == 0) {
@@ -106,7 +106,7 @@ final class SweepCharts {
                         .append(Svg.number(LEFT + plot * r.maxChangeMm() / topX)).append(' ')
                         .append(Svg.number(y(r.totalCost(), topY))));
         if (front.length() > 0) {
-            svg.empty("path", "d", front.toString(), "fill", "none", "stroke", "#0d6b66", "stroke-width", 1.5,
+            svg.empty("path", "d", front.toString(), "fill", "none", "stroke", "#8f3b1b", "stroke-width", 1.5,
                     "stroke-dasharray", "4 3");
         }
         for (SweepRow r : rows) {
@@ -115,8 +115,8 @@ final class SweepCharts {
             }
             double x = LEFT + plot * r.maxChangeMm() / topX;
             double y = y(r.totalCost(), topY);
-            svg.open("circle", "cx", x, "cy", y, "r", r.pareto() ? 5 : 3.5, "fill", r.pareto() ? "#0d6b66" : "#fff",
-                    "stroke", r.pareto() ? "#0d6b66" : SOFT, "stroke-width", 1.2, "class",
+            svg.open("circle", "cx", x, "cy", y, "r", r.pareto() ? 5 : 3.5, "fill", r.pareto() ? "#8f3b1b" : "#fff",
+                    "stroke", r.pareto() ? "#8f3b1b" : SOFT, "stroke-width", 1.2, "class",
                     r.pareto() ? "pareto" : "dominated")
                     .element("title", r.kit() + ": largest change " + trim(r.maxChangeMm()) + " mm, total cost "
                             + fixed(r.totalCost(), 2) + (r.pareto() ? " (Pareto)" : ""))
@@ -151,7 +151,7 @@ final class SweepCharts {
             double x = left + plot * b / bins;
             double from = (-d + 2.0 * d * b / bins) / 10;
             double to = (-d + 2.0 * d * (b + 1) / bins) / 10;
-            svg.open("rect", "x", x + 0.5, "y", base - bh, "width", plot / bins - 1, "height", bh, "fill", "#5b8fb9")
+            svg.open("rect", "x", x + 0.5, "y", base - bh, "width", plot / bins - 1, "height", bh, "fill", "#3f5a72")
                     .element("title", counts[b] + " members changed by " + fixed(from, 2) + " to " + fixed(to, 2)
                             + " mm")
                     .close("rect");

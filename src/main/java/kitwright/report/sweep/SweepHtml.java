@@ -2,6 +2,7 @@ package kitwright.report.sweep;
 
 import com.github.mustachejava.DefaultMustacheFactory;
 import com.github.mustachejava.Mustache;
+import kitwright.report.Look;
 import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
@@ -42,6 +43,10 @@ public final class SweepHtml {
 
     record Page(String kitName, String description, int memberCount, int structureCount, int sectionCount,
                 int firstMarks, int lastMarks, List<Chart> charts, List<RowView> rows, List<Histogram> histograms) {
+        /** The shared stylesheet ({@link Look}), the report's look, inlined before the page's own rules. */
+        String look() {
+            return Look.css();
+        }
     }
 
     public static String render(Heading heading, List<SweepOption> options, List<SweepRow> rows)
@@ -55,20 +60,20 @@ public final class SweepHtml {
     static Page page(Heading h, List<SweepOption> options, List<SweepRow> rows) {
         List<Chart> charts = new ArrayList<>();
         List<SweepCharts.Series> cost = List.of(
-                new SweepCharts.Series("stock", "#3b6ea8", rows.stream().map(SweepRow::cost).toList()),
-                new SweepCharts.Series("crates", "#e8a33d", rows.stream().map(SweepRow::crateCost).toList()),
-                new SweepCharts.Series("trips", "#9cb8d9", rows.stream().map(SweepRow::tripCost).toList()));
+                new SweepCharts.Series("stock", "#15202b", rows.stream().map(SweepRow::cost).toList()),
+                new SweepCharts.Series("crates", "#3f5a72", rows.stream().map(SweepRow::crateCost).toList()),
+                new SweepCharts.Series("trips", "#7891a9", rows.stream().map(SweepRow::tripCost).toList()));
         charts.add(chart("total-cost", "Total cost against mark count", "Stock cost, crates and trips stacked.",
                 SweepCharts.bars(rows, cost, "", 0, "total cost against mark count"), cost));
         charts.add(chart("trade-off", "Total cost against largest change", "Filled and joined: the Pareto options"
                         + " (labelled with their mark count); open: dominated by one of them.",
                 SweepCharts.tradeOff(rows), List.of()));
-        List<SweepCharts.Series> offcut = List.of(new SweepCharts.Series("offcut", "#c0504d",
+        List<SweepCharts.Series> offcut = List.of(new SweepCharts.Series("offcut", "#8f3b1b",
                 rows.stream().map(r -> (Double) r.offcutPct()).toList()));
         charts.add(chart("offcut", "Offcut against mark count", "Offcut (scrap and remnants) in percent of the"
                 + " stock length cut.", SweepCharts.bars(rows, offcut, " %", 1, "offcut against mark count"),
                 offcut));
-        List<SweepCharts.Series> trucks = List.of(new SweepCharts.Series("vehicles", "#7a68a6",
+        List<SweepCharts.Series> trucks = List.of(new SweepCharts.Series("vehicles", "#5a4a6e",
                 rows.stream().map(r -> r.vehicles() == null ? null : r.vehicles().doubleValue()).toList()));
         charts.add(chart("vehicles", "Trucks against mark count", "Vehicles or containers loaded.",
                 SweepCharts.bars(rows, trucks, "", 0, "vehicles against mark count"), trucks));
