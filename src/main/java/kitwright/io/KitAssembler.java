@@ -34,19 +34,22 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
-        return marks(settings, new BarsReader.Rows(lines, true), structures, true, catalog, problems);
+        return marks(settings, new BarsReader.Rows(lines, true), structures, true, Set.of(), catalog, problems);
     }
 
     /**
      * As above; when {@code structuresReadable} is false, structures.csv has problems of its own (already
      * reported), so a blank quantity is not judged against its rows, which would blame bars.csv for them. When
      * bars.csv or one of its rows could not be read ({@code everyMarkRead} false, already reported), a structures.csv
-     * mark missing from the rows read is not reported: it may stand on the row that could not be read.
+     * mark missing from the rows read is not reported: it may stand on the row that could not be read. A
+     * structures.csv row whose mark is in {@code jointMarks} (joints.csv) counts joints, not bars: it sets no bar
+     * quantity.
      */
     static List<Bar> marks(KitSettings settings, BarsReader.Rows rows, List<Sourced<StructureCount>> structures,
-                           boolean structuresReadable, TubeCatalog catalog, Problems problems) {
+                           boolean structuresReadable, Set<String> jointMarks, TubeCatalog catalog,
+                           Problems problems) {
         List<Sourced<BarLine>> lines = rows.lines();
-        Map<String, Need> needs = needs(settings, rows, structures, problems);
+        Map<String, Need> needs = needs(settings, rows, structures, jointMarks, problems);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
             BarLine line = sourced.value();
@@ -85,22 +88,30 @@ final class KitAssembler {
         return bars;
     }
 
-    /** What the structures need of each mark; reports structure rows naming a mark bars.csv does not have. */
+    /**
+     * What the structures need of each mark; reports structure rows naming a mark neither bars.csv nor joints.csv
+     * has. Joint rows are skipped: joints are counted in joints.csv.
+     */
     private static Map<String, Need> needs(KitSettings settings, BarsReader.Rows rows,
-                                           List<Sourced<StructureCount>> structures, Problems problems) {
+                                           List<Sourced<StructureCount>> structures, Set<String> jointMarks,
+                                           Problems problems) {
         Set<String> marks = new LinkedHashSet<>();
         rows.lines().forEach(l -> marks.add(l.value().mark()));
         Map<String, Need> needs = new LinkedHashMap<>();
         for (Sourced<StructureCount> row : structures) {
             StructureCount count = row.value();
+            if (!marks.contains(count.mark()) && jointMarks.contains(count.mark())) {
+                continue; // a joint row: the structure's joints, shipped by pack --for
+            }
             if (!marks.contains(count.mark()) && !rows.everyMarkRead()) {
                 continue; // perhaps on a bars.csv row that could not be read (reported there)
             }
             if (!marks.contains(count.mark())) {
                 String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
                 String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";
-                problems.add(row.problem("mark", "mark " + count.mark() + " is not in bars.csv (" + hint
-                        + "expected a mark of bars.csv" + known + ")"));
+                String joints = jointMarks.isEmpty() ? "" : " or joints.csv";
+                problems.add(row.problem("mark", "mark " + count.mark() + " is not in bars.csv" + joints + " ("
+                        + hint + "expected a mark of bars.csv" + known + joints + ")"));
                 continue;
             }
             Need need = needs.get(count.mark());

@@ -5,9 +5,11 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import kitwright.model.Bar;
 import kitwright.model.CrateType;
 import kitwright.model.InputFiles;
@@ -77,7 +79,10 @@ public final class KitReader {
         Path jointsFile = kitDir.resolve(JOINTS);
         List<Joint> joints = present(jointsFile)
                 ? JointsReader.read(jointsFile, settings.jointBox(), problems) : List.of();
-        List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, catalog, problems);
+        Set<String> jointMarks = new LinkedHashSet<>();
+        joints.forEach(j -> jointMarks.add(j.mark()));
+        List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, jointMarks, catalog,
+                problems);
         kerfProblem(settings.kerfMm(), catalog).ifPresent(message -> problems.add(kitJsonFile,
                 lineOf(kitJsonFile, "\"kerfMm\""), "kerfMm", message));
         problems.throwIfAny();
