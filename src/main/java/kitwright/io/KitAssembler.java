@@ -34,7 +34,12 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
-        return marks(settings, new BarsReader.Rows(lines, true), structures, true, catalog, problems);
+        return marks(settings, new BarsReader.Rows(lines, true), structures, true, catalog, problems,
+                new TableNames(KitReader.BARS, KitReader.STRUCTURES));
+    }
+
+    /** How messages name the bars and structures tables: bars.csv and structures.csv, or sheets of kit.xlsx. */
+    record TableNames(String bars, String structures) {
     }
 
     /**
@@ -44,9 +49,9 @@ final class KitAssembler {
      * mark missing from the rows read is not reported: it may stand on the row that could not be read.
      */
     static List<Bar> marks(KitSettings settings, BarsReader.Rows rows, List<Sourced<StructureCount>> structures,
-                           boolean structuresReadable, TubeCatalog catalog, Problems problems) {
+                           boolean structuresReadable, TubeCatalog catalog, Problems problems, TableNames names) {
         List<Sourced<BarLine>> lines = rows.lines();
-        Map<String, Need> needs = needs(settings, rows, structures, problems);
+        Map<String, Need> needs = needs(settings, rows, structures, problems, names);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
             BarLine line = sourced.value();
@@ -66,13 +71,14 @@ final class KitAssembler {
             if (quantity == null && need != null) {
                 quantity = need.count;
             } else if (quantity == null && structuresReadable) {
-                String why = structures.isEmpty() ? "a whole number of bars; without structures.csv the quantity"
-                        + " must be given" : "a whole number of bars; structures.csv does not use mark " + line.mark();
+                String why = structures.isEmpty() ? "a whole number of bars; without " + names.structures()
+                        + " the quantity must be given" : "a whole number of bars; " + names.structures()
+                        + " does not use mark " + line.mark();
                 problems.add(sourced.problem("quantity", "the value is blank (expected " + why + ")"));
             } else if (need != null && quantity < need.count) {
                 problems.add(sourced.problem("quantity", "mark " + line.mark() + " has " + quantity + " bars but "
                         + need.who + " " + need.count + " (expected at least " + need.count
-                        + ", or a blank quantity to take it from structures.csv)"));
+                        + ", or a blank quantity to take it from " + names.structures() + ")"));
             }
             if (problems.count() == before && quantity != null) {
                 int required = structures.isEmpty() ? quantity : need == null ? 0 : need.count;
@@ -87,7 +93,8 @@ final class KitAssembler {
 
     /** What the structures need of each mark; reports structure rows naming a mark bars.csv does not have. */
     private static Map<String, Need> needs(KitSettings settings, BarsReader.Rows rows,
-                                           List<Sourced<StructureCount>> structures, Problems problems) {
+                                           List<Sourced<StructureCount>> structures, Problems problems,
+                                           TableNames names) {
         Set<String> marks = new LinkedHashSet<>();
         rows.lines().forEach(l -> marks.add(l.value().mark()));
         Map<String, Need> needs = new LinkedHashMap<>();
@@ -99,8 +106,8 @@ final class KitAssembler {
             if (!marks.contains(count.mark())) {
                 String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
                 String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";
-                problems.add(row.problem("mark", "mark " + count.mark() + " is not in bars.csv (" + hint
-                        + "expected a mark of bars.csv" + known + ")"));
+                problems.add(row.problem("mark", "mark " + count.mark() + " is not in " + names.bars() + " ("
+                        + hint + "expected a mark of " + names.bars() + known + ")"));
                 continue;
             }
             Need need = needs.get(count.mark());
