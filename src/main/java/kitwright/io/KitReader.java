@@ -24,7 +24,8 @@ import kitwright.model.VehicleType;
  * Reads and validates a whole kit: {@code kit.json} (optional), {@code bars.csv}, the optional
  * {@code structures.csv} and {@code joints.csv} (or, in their place, the sheets of {@code kit.xlsx}: see
  * {@link KitTables}), and the catalogs kit.json names or that lie beside the tube catalog (CSV files, or
- * {@code .xlsx} workbooks read from their first sheet). Every file is read and every problem collected before anything is thrown, so one run lists all that
+ * {@code .xlsx} workbooks read from their first sheet). Every file is read and every problem collected before
+ * anything is thrown, so one run lists all that
  * must be fixed.
  */
 public final class KitReader {

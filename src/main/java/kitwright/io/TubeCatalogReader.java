@@ -54,7 +54,8 @@ public final class TubeCatalogReader {
             return Optional.empty();
         }
         if (table.isEmpty()) {
-            problems.add(table.belowHeader("no stock under the header (expected one row per section and stock length)"));
+            problems.add(table.belowHeader("no stock under the header (expected one row per section and stock"
+                    + " length)"));
         }
         Map<String, Section> sections = new LinkedHashMap<>();
         Map<String, Integer> sectionLines = new HashMap<>();
