@@ -27,7 +27,7 @@ import picocli.CommandLine.Command;
             "or load securing; follow local codes and licensed professionals."
         },
         subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, PlanCommand.class, CutCommand.class,
-            NestCommand.class, PackCommand.class, CompareCommand.class})
+            NestCommand.class, PackCommand.class, CompareCommand.class, SweepCommand.class})
 public final class KitwrightCommand implements Runnable {
 
     @CommandLine.Spec
@@ -35,7 +35,7 @@ public final class KitwrightCommand implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "Missing command (expected one of check, plan, cut, nest, pack, compare).");
+        throw new CommandLine.ParameterException(spec.commandLine(), "Missing command (expected one of check, plan, cut, nest, pack, compare, sweep).");
     }
 
     /** Builds the command line with kitwright's exit codes and error handling. */

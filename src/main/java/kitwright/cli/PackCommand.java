@@ -49,7 +49,9 @@ import picocli.CommandLine.Spec;
             "",
             "With --out DIR: packing-lists.csv (per crate: type, marks and counts,",
             "bundles, boxes, gross mass), manifests.csv (per vehicle: crates, mass,",
-            "floor length used, centre of gravity from the front) and drawings/",
+            "floor length used, centre of gravity from the front, lateral centre,",
+            "axle loads against their limits), load-lists.csv (per crate per vehicle:",
+            "loading and unloading steps, outer size, gross mass) and drawings/",
             "(crate cross-sections and deck plans, SVG, to scale). The folder is",
             "written beside DIR and moved into place when complete.",
             "With --json FILE: {\"crates\": ..., \"loads\": ...} as in plan.json.",
@@ -174,7 +176,7 @@ public final class PackCommand implements Callable<Integer> {
                 + ": " + c.text()));
         if (out != null) {
             stdout.println("Wrote " + out.resolve(LogisticsCsv.PACKING_LISTS) + ", " + LogisticsCsv.MANIFESTS
-                    + " and drawings/");
+                    + ", " + LogisticsCsv.LOAD_LISTS + " and drawings/");
         }
         if (json != null) {
             stdout.println("Wrote " + json);
@@ -215,6 +217,7 @@ public final class PackCommand implements Callable<Integer> {
         try (OutputFolder folder = OutputFolder.create(out)) {
             folder.write(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(crates, bundles));
             folder.write(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(loads));
+            folder.write(LogisticsCsv.LOAD_LISTS, LogisticsCsv.loadLists(loads, crates));
             for (Crate c : crates.crates()) {
                 folder.write("drawings/crate-" + c.id() + ".svg", CrateSectionDrawing.draw("crate-" + c.id(), c)
                         + "\n");

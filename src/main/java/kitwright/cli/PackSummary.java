@@ -46,7 +46,7 @@ final class PackSummary {
         Map<String, Integer> byType = new TreeMap<>();
         crates.crates().forEach(c -> byType.merge(c.type(), 1, Integer::sum));
         sb.append("Crates: ").append(crates.crates().size()).append(byType.isEmpty() ? "" : " (" + counts(byType) + ")");
-        Double price = price(crates, catalog);
+        Double price = crates.price(catalog);
         if (price != null) {
             sb.append(", price ").append(money(price));
         }
@@ -76,7 +76,17 @@ final class PackSummary {
                     .append(" kg of ")
                     .append(kg(v.payloadKg())).append(" kg, floor ").append(mm(v.floorLengthMm()))
                     .append(" of ").append(mm(v.deckLengthMm())).append(" mm, centre of gravity ")
-                    .append(mm(v.centreOfGravityMm())).append(" mm from the front.\n");
+                    .append(mm(v.centreOfGravityMm())).append(" mm from the front, ")
+                    .append(mm(Math.abs(v.lateralCentreOfGravityMm()))).append(" mm off the centreline; ")
+                    .append(axles(v)).append(".\n");
+            if (v.balanceNote() != null) {
+                sb.append("    ").append(v.balanceNote()).append(".\n");
+            }
+        }
+        if (loads.totalCost() != null) {
+            sb.append("Crates and trips: ").append(money(loads.totalCost())).append("; lower bound ")
+                    .append(money(loads.totalLowerBound())).append(", gap ").append(percent(loads.totalGap()))
+                    .append(" %.\n");
         }
         return sb.toString();
     }
@@ -85,6 +95,16 @@ final class PackSummary {
     // groups (a narrow no-break space) show as '?' or worse in many terminals and trip up scripts.
     private static String money(double value) {
         return ShopFormat.money(value).replace(ShopFormat.GROUP, "");
+    }
+
+    /** "kingpin 9120 of 12000 kg, rear axles 17400 of 24000 kg" or "axle loads not checked". */
+    private static String axles(VehicleLoad v) {
+        if (v.axleLoadsKg() == null || v.axles() == null) {
+            return kitwright.report.LogisticsCsv.NOT_CHECKED;
+        }
+        return kitwright.report.LogisticsCsv.frontSupport(v) + " " + kg(v.axleLoadsKg().front()) + " of "
+                + kg(v.axles().maxFrontKg()) + " kg, rear axles " + kg(v.axleLoadsKg().rear()) + " of "
+                + kg(v.axles().maxRearKg()) + " kg";
     }
 
     private static String kg(double value) {
@@ -114,17 +134,5 @@ final class PackSummary {
         StringBuilder sb = new StringBuilder();
         counts.forEach((k, n) -> sb.append(sb.length() == 0 ? "" : ", ").append(k).append(" x ").append(n));
         return sb.toString();
-    }
-
-    private static Double price(CratePlan plan, List<CrateType> catalog) {
-        double sum = 0;
-        for (Crate c : plan.crates()) {
-            CrateType t = catalog.stream().filter(x -> x.name().equals(c.type())).findFirst().orElse(null);
-            if (t == null || t.price() == null) {
-                return null;
-            }
-            sum += t.price();
-        }
-        return sum;
     }
 }

@@ -20,6 +20,18 @@ final class CompareCharts {
     private static final int PADDING = 10;
     private static final int LABEL_MAX_CHARS = 24;
 
+    // Fills of the look (kitwright/style/look.css): each at least 3:1 against the paper (WCAG 2.1, SC 1.4.11
+    // non-text contrast), and the parts of a stacked bar at least 2:1 apart from each other in luminance, so that they
+    // separate in greyscale print; the legend names every fill.
+    static final String STOCK = "#15202b";
+    static final String CRATES = "#3f5a72";
+    static final String TRIPS = "#7891a9";
+    static final String SCRAP = "#8f3b1b";
+    static final String REMNANT = "#c0843a";
+    static final String BOUGHT = "#3f5b3a";
+    static final String KIT = "#7e9a6f";
+    static final String VEHICLES = "#5a4a6e";
+
     private CompareCharts() {
     }
 
@@ -113,25 +125,26 @@ final class CompareCharts {
     /** The four charts of the page: cost, waste, mass and vehicles. */
     static List<Spec> specs() {
         return List.of(
-                new Spec("cost", "Cost per option", "Stock cost with the trip cost stacked on it.",
+                new Spec("cost", "Cost per option", "Stock cost with the crate and trip costs stacked on it.",
                         List.of(new Series("cost", List.of(
-                                new Segment("stock", "#3b6ea8", OptionSummary::cost),
-                                new Segment("trips", "#9cb8d9", OptionSummary::tripCost)), "", 2))),
+                                new Segment("stock", STOCK, OptionSummary::cost),
+                                new Segment("crates", CRATES, OptionSummary::crateCost),
+                                new Segment("trips", TRIPS, OptionSummary::tripCost)), "", 2))),
                 new Spec("waste", "Waste per option", "Offcut in percent of the stock length cut: scrap and "
                         + "remnants that go back to the rack.",
                         List.of(new Series("offcut", List.of(
-                                new Segment("scrap", "#c0504d", o -> o.scrapPct()),
-                                new Segment("remnant", "#e8a33d", o -> o.remnantPct())), "%", 2,
+                                new Segment("scrap", SCRAP, o -> o.scrapPct()),
+                                new Segment("remnant", REMNANT, o -> o.remnantPct())), "%", 2,
                                 o -> o.offcutPct()))),
                 new Spec("mass", "Mass per option", "Mill stock bought (the base of embodied carbon) against "
                         + "the kit's bars and joints.",
                         List.of(new Series("bought", List.of(
-                                        new Segment("stock bought", "#4f8a4c", OptionSummary::boughtMassKg)), "kg", 0),
+                                        new Segment("stock bought", BOUGHT, OptionSummary::boughtMassKg)), "kg", 0),
                                 new Series("kit", List.of(
-                                        new Segment("kit", "#a7c99a", OptionSummary::kitMassKg)), "kg", 0))),
+                                        new Segment("kit", KIT, OptionSummary::kitMassKg)), "kg", 0))),
                 new Spec("vehicles", "Vehicles per option", "Vehicles or containers loaded.",
                         List.of(new Series("vehicles", List.of(
-                                new Segment("vehicles", "#7a68a6", o -> o.vehicles() == null ? null
+                                new Segment("vehicles", VEHICLES, o -> o.vehicles() == null ? null
                                         : o.vehicles().doubleValue())), "", 0))));
     }
 

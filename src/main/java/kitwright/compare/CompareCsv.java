@@ -19,7 +19,7 @@ public final class CompareCsv {
     public static final List<String> HEADER = List.of("kit", "marks", "bars", "members", "reuse_ratio",
             "stock_pieces", "stock_length_mm", "cost", "payable_cost", "offcut_pct", "scrap_pct", "remnant_pct",
             "kit_mass_kg", "bought_mass_kg", "used_stock_mass_kg", "co2e_kg", "bundles", "crates", "vehicles",
-            "trip_cost", "status");
+            "trip_cost", "crate_cost", "total_cost", "status", "status_reason");
 
     private CompareCsv() {
     }
@@ -54,7 +54,10 @@ public final class CompareCsv {
         cells.add(o.crates() == null ? "" : o.crates().toString());
         cells.add(o.vehicles() == null ? "" : o.vehicles().toString());
         cells.add(number(o.tripCost()));
+        cells.add(number(o.crateCost()));
+        cells.add(number(o.totalCost()));
         cells.add(o.status().name());
+        cells.add(o.statusReason() == null ? "" : o.statusReason());
         return cells;
     }
 

@@ -8,6 +8,7 @@ import java.io.Writer;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import kitwright.report.Look;
 import kitwright.report.ShopFormat;
 
 /**
@@ -22,7 +23,8 @@ public final class CompareHtml {
     private CompareHtml() {
     }
 
-    record OptionHead(String name, String status, String statusClass) {
+    /** @param reason which stages are not proven and by how much, or null */
+    record OptionHead(String name, String status, String statusClass, String reason) {
     }
 
     record CellView(String text, boolean best, String difference, String cssClass) {
@@ -33,6 +35,10 @@ public final class CompareHtml {
 
     record Page(int optionCount, List<OptionHead> options, List<RowView> rows, List<CompareCharts.Chart> charts,
                 List<String> cautions) {
+        /** The shared stylesheet ({@link Look}), the report's look, inlined before the page's own rules. */
+        String look() {
+            return Look.css();
+        }
     }
 
     public static void write(List<OptionSummary> options, Writer out) throws IOException {
@@ -48,7 +54,8 @@ public final class CompareHtml {
 
     static Page page(Comparison comparison) {
         List<OptionHead> heads = comparison.options().stream()
-                .map(o -> new OptionHead(o.kit(), o.status().name(), o.status().name().toLowerCase(Locale.ROOT)))
+                .map(o -> new OptionHead(o.kit(), o.status().name(),
+                        "status-" + o.status().name().toLowerCase(Locale.ROOT), o.statusReason()))
                 .toList();
         List<RowView> rows = new ArrayList<>();
         for (Comparison.Row row : comparison.rows()) {

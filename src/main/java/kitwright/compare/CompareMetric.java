@@ -5,7 +5,8 @@ import java.util.function.Function;
 /**
  * The compared figures, one row of the comparison each, in the order of {@code compare.json}. Each knows its
  * label, unit, the decimals it is shown with and which direction is better: lower for everything except the
- * reuse ratio; members (the structures served, a given) and the status are shown but not ranked.
+ * reuse ratio; members (the structures served, a given), the offcut and the remnant (remnants go back to the rack:
+ * stock with value, not waste; scrap is ranked) and the status are shown but not ranked.
  */
 public enum CompareMetric {
     MARKS("marks", "Marks (bar types)", "", 0, Direction.LOWER, s -> s.marks()),
@@ -15,9 +16,9 @@ public enum CompareMetric {
     STOCK_PIECES("stockPieces", "Stock pieces cut", "", 0, Direction.LOWER, s -> s.stockPieces()),
     STOCK_LENGTH("stockLengthMm", "Stock length cut", "m", 1, Direction.LOWER, s -> s.stockLengthMm() / 1000.0),
     COST("cost", "Stock cost", "", 2, Direction.LOWER, OptionSummary::cost),
-    OFFCUT("offcutPct", "Offcut (remnant + scrap)", "%", 2, Direction.LOWER, s -> s.offcutPct()),
+    OFFCUT("offcutPct", "Offcut (remnant + scrap)", "%", 2, Direction.NONE, s -> s.offcutPct()),
     SCRAP("scrapPct", "Scrap", "%", 2, Direction.LOWER, s -> s.scrapPct()),
-    REMNANT("remnantPct", "Remnant back to the rack", "%", 2, Direction.LOWER, s -> s.remnantPct()),
+    REMNANT("remnantPct", "Remnant back to the rack", "%", 2, Direction.NONE, s -> s.remnantPct()),
     KIT_MASS("kitMassKg", "Kit mass (bars with spares, and joints)", "kg", 1, Direction.LOWER,
             OptionSummary::kitMassKg),
     BOUGHT_MASS("boughtMassKg", "Stock mass bought", "kg", 1, Direction.LOWER, OptionSummary::boughtMassKg),
@@ -27,7 +28,9 @@ public enum CompareMetric {
     BUNDLES("bundles", "Nested bundles", "", 0, Direction.LOWER, OptionSummary::bundles),
     CRATES("crates", "Crates", "", 0, Direction.LOWER, OptionSummary::crates),
     VEHICLES("vehicles", "Vehicles", "", 0, Direction.LOWER, OptionSummary::vehicles),
-    TRIP_COST("tripCost", "Trip cost", "", 2, Direction.LOWER, OptionSummary::tripCost);
+    TRIP_COST("tripCost", "Trip cost", "", 2, Direction.LOWER, OptionSummary::tripCost),
+    CRATE_COST("crateCost", "Crate cost", "", 2, Direction.LOWER, OptionSummary::crateCost),
+    TOTAL_COST("totalCost", "Total cost (stock, crates, trips)", "", 2, Direction.LOWER, OptionSummary::totalCost);
 
     /** Which way a figure is better. */
     public enum Direction { LOWER, HIGHER, NONE }

@@ -8,8 +8,9 @@ package kitwright.compare;
  * @param crates   crates
  * @param vehicles vehicles or containers loaded
  * @param tripCost cost of those trips, in the vehicle catalog's currency
+ * @param crateCost price of the crates, in the crate catalog's currency
  */
-public record Logistics(Integer bundles, Integer crates, Integer vehicles, Double tripCost) {
+public record Logistics(Integer bundles, Integer crates, Integer vehicles, Double tripCost, Double crateCost) {
     /** No shipping figures known. */
-    public static final Logistics UNKNOWN = new Logistics(null, null, null, null);
+    public static final Logistics UNKNOWN = new Logistics(null, null, null, null, null);
 }

@@ -33,18 +33,26 @@ import kitwright.model.Status;
  * @param crates         crates
  * @param vehicles       vehicles or containers
  * @param tripCost       cost of the trips
+ * @param crateCost      price of the crates
+ * @param totalCost      stock cost + crate cost + trip cost, null when one of them is not known
  * @param status         the option's overall status: the worst of its stages
+ * @param statusReason   which stages are not proven and by how much ("crates 12.5 % above the bound"), null when
+ *                       every stage is OPTIMAL
+ * @param stages         each stage's status and gap
  */
 @JsonPropertyOrder({"kit", "marks", "bars", "members", "reuseRatio", "stockPieces", "stockLengthMm", "cost",
     "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg", "boughtMassKg", "usedStockMassKg",
     "co2eKg", "bundles", "crates", "vehicles",
-    "tripCost", "status"})
+    "tripCost", "crateCost", "totalCost", "status", "statusReason", "stages"})
 public record OptionSummary(String kit, int marks, int bars, Integer members, Double reuseRatio, int stockPieces,
                             double stockLengthMm, Double cost, Double payableCost, double offcutPct, double scrapPct,
                             double remnantPct,
                             Double kitMassKg, Double boughtMassKg, Double usedStockMassKg, Double co2eKg,
-                            Integer bundles, Integer crates, Integer vehicles, Double tripCost, Status status) {
+                            Integer bundles, Integer crates, Integer vehicles, Double tripCost, Double crateCost,
+                            Double totalCost, Status status, String statusReason,
+                            java.util.List<StageStatus> stages) {
     public OptionSummary {
+        stages = stages == null ? java.util.List.of() : java.util.List.copyOf(stages);
         Objects.requireNonNull(kit, "kit");
         Objects.requireNonNull(status, "status");
         if (marks < 0 || bars < 0 || (members != null && members < 0) || stockPieces < 0) {
@@ -52,11 +60,31 @@ public record OptionSummary(String kit, int marks, int bars, Integer members, Do
         }
     }
 
+    /** An option without crate cost, total or stages (fixtures of the figures before them). */
+    public OptionSummary(String kit, int marks, int bars, Integer members, Double reuseRatio, int stockPieces,
+                         double stockLengthMm, Double cost, Double payableCost, double offcutPct, double scrapPct,
+                         double remnantPct, Double kitMassKg, Double boughtMassKg, Double usedStockMassKg,
+                         Double co2eKg, Integer bundles, Integer crates, Integer vehicles, Double tripCost,
+                         Status status) {
+        this(kit, marks, bars, members, reuseRatio, stockPieces, stockLengthMm, cost, payableCost, offcutPct,
+                scrapPct, remnantPct, kitMassKg, boughtMassKg, usedStockMassKg, co2eKg, bundles, crates, vehicles,
+                tripCost, null, null, status, null, null);
+    }
+
     /**
      * The summary of an option from its kit metrics, its shipping figures and its stages' statuses, rounded for
      * reading: ratio to 0.001, lengths to 0.1 mm, money to 0.01, percentages to 0.01, masses and CO2e to 0.1 kg.
      */
     public static OptionSummary of(String kit, KitMetrics metrics, Logistics logistics, Collection<Status> statuses) {
+        return of(kit, metrics, logistics, statuses, java.util.List.of());
+    }
+
+    /** The same with each stage's status and gap; the reason names the stages that are not proven. */
+    public static OptionSummary of(String kit, KitMetrics metrics, Logistics logistics, Collection<Status> statuses,
+                                   java.util.List<StageStatus> stages) {
+        Double total = metrics.cost() == null || logistics.crateCost() == null || logistics.tripCost() == null ? null
+                : metrics.cost() + logistics.crateCost() + logistics.tripCost();
+        java.util.List<String> reasons = stages.stream().map(StageStatus::reason).filter(Objects::nonNull).toList();
         return new OptionSummary(kit, metrics.marks(), metrics.bars(), metrics.members(),
                 round(metrics.reuseRatio(), 3), metrics.stockPieces(), round(metrics.stockLengthMm(), 1),
                 round(metrics.cost(), 2), round(metrics.payableCost(), 2), round(metrics.offcutPct(), 2),
@@ -64,7 +92,8 @@ public record OptionSummary(String kit, int marks, int bars, Integer members, Do
                 round(metrics.remnantPct(), 2), round(metrics.kitMassKg(), 1), round(metrics.boughtMassKg(), 1),
                 round(metrics.usedStockMassKg(), 1), round(metrics.co2eKg(), 1), logistics.bundles(),
                 logistics.crates(), logistics.vehicles(),
-                round(logistics.tripCost(), 2), worst(statuses));
+                round(logistics.tripCost(), 2), round(logistics.crateCost(), 2), round(total, 2), worst(statuses),
+                reasons.isEmpty() ? null : String.join("; ", reasons), stages);
     }
 
     /** The worst of several statuses: INFEASIBLE before FEASIBLE before OPTIMAL; OPTIMAL for none. */

@@ -34,24 +34,27 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
-        return marks(settings, new BarsReader.Rows(lines, true), structures, true, catalog, problems,
-                new TableNames(KitReader.BARS, KitReader.STRUCTURES));
+        return marks(settings, new BarsReader.Rows(lines, true), structures, true, Set.of(), catalog, problems,
+                new TableNames(KitReader.BARS, KitReader.STRUCTURES, KitReader.JOINTS));
     }
 
-    /** How messages name the bars and structures tables: bars.csv and structures.csv, or sheets of kit.xlsx. */
-    record TableNames(String bars, String structures) {
+    /** How messages name the bars, structures and joints tables: the CSVs, or sheets of kit.xlsx. */
+    record TableNames(String bars, String structures, String joints) {
     }
 
     /**
      * As above; when {@code structuresReadable} is false, structures.csv has problems of its own (already
      * reported), so a blank quantity is not judged against its rows, which would blame bars.csv for them. When
      * bars.csv or one of its rows could not be read ({@code everyMarkRead} false, already reported), a structures.csv
-     * mark missing from the rows read is not reported: it may stand on the row that could not be read.
+     * mark missing from the rows read is not reported: it may stand on the row that could not be read. A
+     * structures.csv row whose mark is in {@code jointMarks} (joints.csv) counts joints, not bars: it sets no bar
+     * quantity.
      */
     static List<Bar> marks(KitSettings settings, BarsReader.Rows rows, List<Sourced<StructureCount>> structures,
-                           boolean structuresReadable, TubeCatalog catalog, Problems problems, TableNames names) {
+                           boolean structuresReadable, Set<String> jointMarks, TubeCatalog catalog,
+                           Problems problems, TableNames names) {
         List<Sourced<BarLine>> lines = rows.lines();
-        Map<String, Need> needs = needs(settings, rows, structures, problems, names);
+        Map<String, Need> needs = needs(settings, rows, structures, jointMarks, problems, names);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
             BarLine line = sourced.value();
@@ -91,23 +94,30 @@ final class KitAssembler {
         return bars;
     }
 
-    /** What the structures need of each mark; reports structure rows naming a mark bars.csv does not have. */
+    /**
+     * What the structures need of each mark; reports structure rows naming a mark neither bars.csv nor joints.csv
+     * has. Joint rows are skipped: joints are counted in joints.csv.
+     */
     private static Map<String, Need> needs(KitSettings settings, BarsReader.Rows rows,
-                                           List<Sourced<StructureCount>> structures, Problems problems,
-                                           TableNames names) {
+                                           List<Sourced<StructureCount>> structures, Set<String> jointMarks,
+                                           Problems problems, TableNames names) {
         Set<String> marks = new LinkedHashSet<>();
         rows.lines().forEach(l -> marks.add(l.value().mark()));
         Map<String, Need> needs = new LinkedHashMap<>();
         for (Sourced<StructureCount> row : structures) {
             StructureCount count = row.value();
+            if (!marks.contains(count.mark()) && jointMarks.contains(count.mark())) {
+                continue; // a joint row: the structure's joints, shipped by pack --for
+            }
             if (!marks.contains(count.mark()) && !rows.everyMarkRead()) {
                 continue; // perhaps on a bars.csv row that could not be read (reported there)
             }
             if (!marks.contains(count.mark())) {
                 String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
                 String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";
-                problems.add(row.problem("mark", "mark " + count.mark() + " is not in " + names.bars() + " ("
-                        + hint + "expected a mark of " + names.bars() + known + ")"));
+                String joints = jointMarks.isEmpty() ? "" : " or " + names.joints();
+                problems.add(row.problem("mark", "mark " + count.mark() + " is not in " + names.bars() + joints
+                        + " (" + hint + "expected a mark of " + names.bars() + known + joints + ")"));
                 continue;
             }
             Need need = needs.get(count.mark());

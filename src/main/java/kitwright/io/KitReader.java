@@ -5,9 +5,11 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import kitwright.model.Bar;
 import kitwright.model.CrateType;
 import kitwright.model.InputFiles;
@@ -83,8 +85,11 @@ public final class KitReader {
         boolean structuresReadable = problems.count() == beforeStructures;
         List<Joint> joints = tables.joints() != null
                 ? JointsReader.read(tables.joints(), settings.jointBox(), problems) : List.of();
-        List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, catalog, problems,
-                new KitAssembler.TableNames(tables.barsName(), tables.structuresName()));
+        Set<String> jointMarks = new LinkedHashSet<>();
+        joints.forEach(j -> jointMarks.add(j.mark()));
+        List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, jointMarks, catalog,
+                problems, new KitAssembler.TableNames(tables.barsName(), tables.structuresName(),
+                        tables.jointsName()));
         kerfProblem(settings.kerfMm(), catalog).ifPresent(message -> problems.add(kitJsonFile,
                 lineOf(kitJsonFile, "\"kerfMm\""), "kerfMm", message));
         problems.throwIfAny();
@@ -156,7 +161,7 @@ public final class KitReader {
     }
 
     /** The materials, or null when a defaulted file is absent or the file has problems (no material check). */
-    private static Map<String, Material> materials(Path file, boolean named, Problems problems) {
+    static Map<String, Material> materials(Path file, boolean named, Problems problems) {
         if (!named && !present(file)) {
             return null;
         }
@@ -166,7 +171,7 @@ public final class KitReader {
     }
 
     /** The tube catalog, or null when it is missing or has problems (section checks would mislead). */
-    private static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
+    static TubeCatalog catalog(Path file, boolean named, Map<String, Material> materials,
                                        Path materialsFile, Problems problems) {
         if (!present(file)) {
             String hint = named ? "check the path; kit.json paths are relative to the kit folder"

@@ -93,4 +93,9 @@ record KitTables(TableSource bars, TableSource structures, TableSource joints, P
         return workbook == null ? KitReader.STRUCTURES
                 : "the " + (structures == null ? "structures" : structures.sheet()) + " sheet";
     }
+
+    /** How messages name the joints table: joints.csv, or the joints sheet. */
+    String jointsName() {
+        return workbook == null ? KitReader.JOINTS : "the " + (joints == null ? "joints" : joints.sheet()) + " sheet";
+    }
 }

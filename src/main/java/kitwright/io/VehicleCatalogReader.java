@@ -5,17 +5,26 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import kitwright.model.AxleGeometry;
 import kitwright.model.VehicleType;
 
 /**
  * Reads a vehicle catalog: {@code vehicle,deck_length_mm,deck_width_mm,deck_height_mm,payload_kg,cost_per_trip,
  * source}, the load space and payload of each truck or container and where those figures come from.
+ *
+ * <p>Optional columns: the axle geometry {@code front_support_mm, rear_support_mm} (from the front of the deck: the
+ * front axle of a rigid truck, negative when ahead of the deck, or a semi-trailer's kingpin, at or behind the front;
+ * and the rear axle group's centre), {@code unladen_front_kg, unladen_rear_kg, max_front_kg, max_rear_kg} (all six
+ * together or none), {@code min_front_kg} (the least front load for steering, only with the geometry), and
+ * {@code door_height_mm}, a container's door opening height, which stacks stay below.
  */
 public final class VehicleCatalogReader {
     public static final CsvColumns COLUMNS = new CsvColumns(
             List.of("vehicle", "deck_length_mm", "deck_width_mm", "deck_height_mm", "payload_kg", "cost_per_trip",
                     "source"),
-            List.of());
+            List.of(VehicleColumns.FRONT_SUPPORT, VehicleColumns.REAR_SUPPORT, VehicleColumns.UNLADEN_FRONT,
+                    VehicleColumns.UNLADEN_REAR, VehicleColumns.MAX_FRONT, VehicleColumns.MAX_REAR,
+                    VehicleColumns.MIN_FRONT, VehicleColumns.DOOR_HEIGHT));
 
     private VehicleCatalogReader() {
     }
@@ -54,8 +63,11 @@ public final class VehicleCatalogReader {
                             + " (expected each vehicle type on one row only)");
                 }
             }
+            AxleGeometry axles = VehicleColumns.axles(row, length);
+            Double door = VehicleColumns.doorHeight(row, height);
             if (row.clean()) {
-                vehicles.add(new VehicleType(name, length, width, height, payload, cost, row.text("source")));
+                vehicles.add(new VehicleType(name, length, width, height, payload, cost, row.text("source"), axles,
+                        door));
             }
         }
         return vehicles;

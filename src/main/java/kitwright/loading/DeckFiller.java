@@ -30,7 +30,7 @@ final class DeckFiller {
 
     DeckLayout fill(int vehicleIndex, VehicleType vehicle, List<CrateClass> classes, int[] available) {
         List<CrateClass> offered = offer(vehicle, classes, available);
-        List<Stack> pending = stack(offered, vehicle.deckHeightMm());
+        List<Stack> pending = stack(offered, vehicle.loadHeightMm());
         pending.sort(Comparator.<Stack>comparingDouble(s -> -Math.max(s.base().lengthMm(), s.base().widthMm()))
                 .thenComparingDouble(s -> -s.base().footprint()).thenComparingDouble(s -> -s.mass()));
         int[] counts = new int[classes.size()];
@@ -39,6 +39,7 @@ final class DeckFiller {
         double mass = 0;
         double floor = 0;
         int stackId = 0;
+        int rowId = 0;
         while (!pending.isEmpty()) {
             Stack first = null;
             for (Stack s : pending) {
@@ -71,7 +72,8 @@ final class DeckFiller {
                 double z = 0;
                 for (int level = 0; level < p.stack().crates().size(); level++) {
                     CrateClass c = p.stack().crates().get(level);
-                    slots.add(new DeckLayout.Slot(c.index(), x + p.x(), p.y(), z, p.rotated(), stackId, level));
+                    slots.add(new DeckLayout.Slot(c.index(), x + p.x(), p.y(), z, p.rotated(), stackId, level,
+                            rowId));
                     counts[c.index()]++;
                     z += c.heightMm();
                 }
@@ -80,6 +82,7 @@ final class DeckFiller {
                 stackId++;
             }
             x += best.depth();
+            rowId++;
         }
         return new DeckLayout(vehicleIndex, counts, slots, mass, floor);
     }
@@ -95,7 +98,7 @@ final class DeckFiller {
     /** Whether a crate of this class can ride on the vehicle at all. */
     static boolean fitsVehicle(CrateClass c, VehicleType v) {
         return (fits(c, false, v.deckLengthMm(), v.deckWidthMm()) || fits(c, true, v.deckLengthMm(), v.deckWidthMm()))
-                && c.heightMm() <= v.deckHeightMm() + EPS && c.massKg() <= v.payloadKg() + PAYLOAD_TOLERANCE_KG;
+                && c.heightMm() <= v.loadHeightMm() + EPS && c.massKg() <= v.payloadKg() + PAYLOAD_TOLERANCE_KG;
     }
 
     private static List<CrateClass> offer(VehicleType v, List<CrateClass> classes, int[] available) {
@@ -104,7 +107,7 @@ final class DeckFiller {
                 .sorted(Comparator.<CrateClass>comparingDouble(c -> -c.footprint())
                         .thenComparingDouble(c -> -c.massKg()).thenComparingInt(CrateClass::index))
                 .toList();
-        double deckVolume = v.deckLengthMm() * v.deckWidthMm() * v.deckHeightMm();
+        double deckVolume = v.deckLengthMm() * v.deckWidthMm() * v.loadHeightMm();
         double volume = 0;
         double mass = 0;
         List<CrateClass> offered = new ArrayList<>();

@@ -15,8 +15,11 @@ import kitwright.packing.CoverPattern;
 record DeckLayout(int vehicleType, int[] counts, List<Slot> slots, double massKg, double floorLengthMm)
         implements CoverPattern {
 
-    /** One crate's place: its class, its outer box corner, orientation, and its stack and level (0 = floor). */
-    record Slot(int crateClass, double x, double y, double z, boolean rotated, int stack, int level) {
+    /**
+     * One crate's place: its class, its outer box corner, orientation, its stack and level (0 = floor), and its
+     * floor row (rows lie one behind the other from the front; each holds whole stacks).
+     */
+    record Slot(int crateClass, double x, double y, double z, boolean rotated, int stack, int level, int row) {
     }
 
     DeckLayout {

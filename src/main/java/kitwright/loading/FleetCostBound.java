@@ -53,7 +53,7 @@ final class FleetCostBound {
             }
             sets.add(set);
         }
-        double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::deckHeightMm).max().orElse(0);
+        double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::loadHeightMm).max().orElse(0);
         MPSolver solver = MPSolver.createSolver("GLOP");
         try {
             MPVariable[] y = new MPVariable[vehicles.size()];
@@ -88,7 +88,7 @@ final class FleetCostBound {
                     VehicleType t = vehicles.get(v);
                     byMass.setCoefficient(y[v], t.payloadKg());
                     byArea.setCoefficient(y[v], t.deckLengthMm() * t.deckWidthMm() / 1e6);
-                    byVolume.setCoefficient(y[v], t.deckLengthMm() * t.deckWidthMm() * t.deckHeightMm() / 1e9);
+                    byVolume.setCoefficient(y[v], t.deckLengthMm() * t.deckWidthMm() * t.loadHeightMm() / 1e9);
                 }
                 k++;
             }

@@ -26,8 +26,9 @@ import kitwright.packing.PatternCover;
  * linear relaxation, and {@link WholeVehicleBound}), else FEASIBLE with the gap;
  * FEASIBLE with the reason "stopped by the time limit" when the stage's deadline, not a work limit, cut a step
  * short; INFEASIBLE when a crate fits no vehicle type (the reason names it). Crates of types missing from the crate
- * catalog are treated as not stackable. Loads start at the front of the deck; the centre of gravity is reported,
- * not balanced, and axle loads and load securing (EN 12195-1) are not checked. Loads take the trip ids of the kit's
+ * catalog are treated as not stackable. Each load is then arranged for the road ({@link DeckArrangement}: joints
+ * near the doors, heaviest forward, rows centred across the deck, the load moved back where the axle limits ask;
+ * INFEASIBLE, naming the limit, when no place keeps them); load securing (EN 12195-1) is not checked. Loads take the trip ids of the kit's
  * {@link IdScheme} (TRIP-1, TRIP-2, ... unless a mark reads like them).
  */
 public final class RowLoadPlanner implements LoadPlanner {
@@ -115,7 +116,12 @@ public final class RowLoadPlanner implements LoadPlanner {
         }
         decks = downsize(decks, vehicles, cost, classes);
 
-        List<VehicleLoad> loads = realise(decks, vehicles, classes, members, ids);
+        List<VehicleLoad> loads;
+        try {
+            loads = realise(decks, vehicles, classes, members, ids);
+        } catch (AxleLimitException e) {
+            return LoadPlan.infeasible("axle limit: " + e.getMessage());
+        }
         double tripCost = VehicleChoice.total(decks, cost);
         double relaxation = FleetCostBound.compute(classes, vehicles, cost);
         double whole = WholeVehicleBound.compute(classes, vehicles, cost, deadline);
@@ -211,26 +217,35 @@ public final class RowLoadPlanner implements LoadPlanner {
         return result;
     }
 
+    /** The loads, each arranged for the road ({@link DeckArrangement}); throws with the limit none can keep. */
     private static List<VehicleLoad> realise(List<DeckLayout> decks, List<VehicleType> vehicles,
-                                             List<CrateClass> classes, List<List<Crate>> members, IdScheme ids) {
+                                             List<CrateClass> classes, List<List<Crate>> members, IdScheme ids)
+            throws AxleLimitException {
         int[] next = new int[classes.size()];
         List<VehicleLoad> loads = new ArrayList<>();
         for (DeckLayout d : decks) {
             VehicleType v = vehicles.get(d.vehicleType());
-            List<PlacedCrate> placed = new ArrayList<>();
-            double mass = 0;
-            double moment = 0;
+            List<DeckArrangement.Entry> entries = new ArrayList<>();
             for (DeckLayout.Slot s : d.slots()) {
                 CrateClass c = classes.get(s.crateClass());
-                Crate crate = members.get(c.index()).get(next[c.index()]++);
-                placed.add(new PlacedCrate(crate.id(), s.x(), s.y(), s.z(), s.rotated()));
-                mass += crate.grossKg();
-                moment += crate.grossKg() * (s.x() + c.alongDeck(s.rotated()) / 2);
+                entries.add(new DeckArrangement.Entry(members.get(c.index()).get(next[c.index()]++), c, s));
             }
-            double centre = mass > 0 ? moment / mass : 0;
-            loads.add(new VehicleLoad(ids.trip(loads.size() + 1), v.name(), v.deckLengthMm(), v.deckWidthMm(),
-                    v.deckHeightMm(), v.payloadKg(), mass, centre, placed, v.costPerTrip(), d.floorLengthMm()));
+            DeckArrangement.Arranged a = DeckArrangement.arrange(v, entries);
+            String id = ids.trip(loads.size() + 1);
+            if (a.failure() != null) {
+                throw new AxleLimitException(id + " (" + a.failure() + ")");
+            }
+            loads.add(new VehicleLoad(id, v.name(), v.deckLengthMm(), v.deckWidthMm(), v.deckHeightMm(),
+                    v.payloadKg(), a.massKg(), a.centreMm(), a.lateralMm(), a.balanceNote(), a.axleLoads(),
+                    a.crates(), v.costPerTrip(), a.floorLengthMm(), v.axles()));
         }
         return loads;
+    }
+
+    /** A load whose axle limits no place along the deck keeps. */
+    private static final class AxleLimitException extends Exception {
+        AxleLimitException(String message) {
+            super(message);
+        }
     }
 }

@@ -110,13 +110,16 @@ final class WholeVehicleBound {
      * same way on every machine; what is left of the loading stage's deadline is only a safety net.
      */
     static double compute(List<CrateClass> classes, List<VehicleType> vehicles, double[] cost, Deadline deadline) {
+        if (deadline.passed()) {
+            return Double.NaN; // the clock has stopped the stage: how far SCIP would get depends on the machine
+        }
         SolverLibraries.load();
         MPSolver solver = MPSolver.createSolver("SCIP");
         if (solver == null) {
             return Double.NaN;
         }
         try {
-            double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::deckHeightMm).max().orElse(0);
+            double maxDeckHeight = vehicles.stream().mapToDouble(VehicleType::loadHeightMm).max().orElse(0);
             boolean[] top = new boolean[classes.size()];
             boolean[] floor = new boolean[classes.size()];
             for (CrateClass c : classes) {
@@ -147,7 +150,7 @@ final class WholeVehicleBound {
                 MPConstraint mass = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "payload_" + v);
                 MPConstraint volume = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "volume_" + v);
                 mass.setCoefficient(y[v], -t.payloadKg());
-                volume.setCoefficient(y[v], -t.deckLengthMm() * t.deckWidthMm() * t.deckHeightMm() / 1e9);
+                volume.setCoefficient(y[v], -t.deckLengthMm() * t.deckWidthMm() * t.loadHeightMm() / 1e9);
                 for (CrateClass c : classes) {
                     mass.setCoefficient(x[c.index()][v], c.massKg());
                     volume.setCoefficient(x[c.index()][v], c.volume() / 1e9);

@@ -106,7 +106,7 @@ public final class KitMetricsCalculator {
         if (kit.structures().isEmpty()) {
             return null;
         }
-        return kit.structures().stream().mapToInt(StructureCount::count).sum();
+        return kit.barCounts().stream().mapToInt(StructureCount::count).sum();
     }
 
     /**

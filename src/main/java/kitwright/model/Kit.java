@@ -44,6 +44,11 @@ public record Kit(Path dir, KitSettings settings, List<Bar> bars, List<Structure
         return catalog.section(bar.section()).orElseThrow();
     }
 
+    /** The rows of structures.csv that count bars (joint rows left out), in file order. */
+    public List<StructureCount> barCounts() {
+        return structures.stream().filter(c -> bar(c.mark()).isPresent()).toList();
+    }
+
     public Optional<Bar> bar(String mark) {
         return bars.stream().filter(b -> b.mark().equals(mark)).findFirst();
     }

@@ -95,6 +95,9 @@ final class CrateLowerBounds {
     /** The model's optimum (its proven bound for whole crates); 0 or NaN when the solver proves nothing. */
     private static double priceRelaxation(List<ItemType> types, List<CrateType> crates, boolean whole,
                                           Deadline deadline) {
+        if (whole && deadline.passed()) {
+            return Double.NaN; // the clock has stopped the stage: how far SCIP would get depends on the machine
+        }
         SolverLibraries.load();
         double[] lengths = crates.stream().mapToDouble(CrateType::innerLengthMm).distinct().sorted().toArray();
         MPSolver solver = MPSolver.createSolver(whole ? "SCIP" : "GLOP");

@@ -3,6 +3,7 @@ package kitwright.packing;
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import java.util.List;
+import kitwright.model.CrateType;
 import kitwright.model.Status;
 
 /**
@@ -23,6 +24,19 @@ public record CratePlan(Status status, int lowerBound, List<Crate> crates,
         crates = List.copyOf(crates);
         boxes = List.copyOf(boxes);
         bounds = bounds == null ? CrateBounds.NONE : bounds;
+    }
+
+    /** The price of the crates at the catalog's prices, or null when a crate's type has no price. */
+    public Double price(List<CrateType> catalog) {
+        double sum = 0;
+        for (Crate c : crates) {
+            CrateType t = catalog.stream().filter(x -> x.name().equals(c.type())).findFirst().orElse(null);
+            if (t == null || t.price() == null) {
+                return null;
+            }
+            sum += t.price();
+        }
+        return sum;
     }
 
     /** A plan that cannot be made, with the reason. */

@@ -74,6 +74,19 @@ public final class LaneCratePacker implements CratePacker {
 
     @Override
     public CratePlan pack(List<Bundle> bundles, List<Joint> joints, List<CrateType> crates, JointBox jointBox) {
+        return pack(bundles, joints, crates, crates, jointBox);
+    }
+
+    /**
+     * Crates with the given crate types only, while the bounds and the status stay those of the whole catalog (so a
+     * plan of smaller crates, chosen to ride on smaller vehicles, is OPTIMAL only when no crate plan of the catalog
+     * costs less).
+     *
+     * @param usable the crate types the plan may use, a part of {@code catalog}
+     */
+    public CratePlan pack(List<Bundle> bundles, List<Joint> joints, List<CrateType> catalog, List<CrateType> usable,
+                          JointBox jointBox) {
+        List<CrateType> crates = usable;
         Deadline deadline = Deadline.in(limits.safetySeconds());
         IdScheme ids = this.ids != null ? this.ids : IdScheme.avoiding(marks(bundles, joints));
         List<JointBoxLoad> boxes;
@@ -84,7 +97,7 @@ public final class LaneCratePacker implements CratePacker {
         }
         ItemTypes items = ItemTypes.of(bundles, boxes);
         if (items.isEmpty()) {
-            return new CratePlan(Status.OPTIMAL, 0, List.of(), boxes, CrateLowerBounds.compute(List.of(), crates,
+            return new CratePlan(Status.OPTIMAL, 0, List.of(), boxes, CrateLowerBounds.compute(List.of(), catalog,
                     0, null), null);
         }
         if (crates.isEmpty()) {
@@ -94,7 +107,7 @@ public final class LaneCratePacker implements CratePacker {
         if (unfit != null) {
             return CratePlan.infeasible(unfit);
         }
-        boolean priced = crates.stream().allMatch(c -> c.price() != null);
+        boolean priced = catalog.stream().allMatch(c -> c.price() != null);
         double[] cost = crates.stream().mapToDouble(c -> priced ? c.price() : 1.0).toArray();
         PatternCover cover = new PatternCover(limits.deterministicTime(), deadline);
         List<CrateLayout> layouts = new CrateChoice(cover, limits.pricingRounds(), limits.maxFillings(), deadline)
@@ -108,7 +121,7 @@ public final class LaneCratePacker implements CratePacker {
         layouts = downsize(fewer, crates, cost, items.types());
         List<Crate> result = realise(layouts, crates, items, ids);
         Double price = priced ? layouts.stream().mapToDouble(l -> cost[l.crateType()]).sum() : null;
-        CrateBounds bounds = CrateLowerBounds.compute(items.types(), crates, result.size(), price, deadline);
+        CrateBounds bounds = CrateLowerBounds.compute(items.types(), catalog, result.size(), price, deadline);
         boolean optimal = result.size() <= bounds.crates()
                 && (price == null || price <= bounds.price() + 1e-6 * Math.max(1, price));
         // a step the deadline cut short makes the plan depend on the machine's speed: say so, as cutting does

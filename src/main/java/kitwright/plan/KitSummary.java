@@ -105,7 +105,7 @@ public record KitSummary(String kit, String description, int marks, int bars, In
         Integer members = null;
         Double reuseRatio = null;
         if (!kit.structures().isEmpty()) {
-            members = kit.structures().stream().mapToInt(StructureCount::count).sum();
+            members = kit.barCounts().stream().mapToInt(StructureCount::count).sum();
             reuseRatio = round((double) members / bars, 3);
         }
         double jointsMass = kitMass.jointsMassKg();
@@ -133,7 +133,7 @@ public record KitSummary(String kit, String description, int marks, int bars, In
 
     private static List<StructureMembers> structures(Kit kit) {
         Map<String, Integer> members = new LinkedHashMap<>();
-        for (StructureCount count : kit.structures()) {
+        for (StructureCount count : kit.barCounts()) {
             members.merge(count.structure(), count.count(), Integer::sum);
         }
         return members.entrySet().stream().map(e -> new StructureMembers(e.getKey(), e.getValue())).toList();

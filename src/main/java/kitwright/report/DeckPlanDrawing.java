@@ -36,7 +36,7 @@ public final class DeckPlanDrawing {
         }
         double scale = (WIDTH - LEFT - RIGHT) / load.deckLengthMm();
         double deckHeight = load.deckWidthMm() * scale;
-        double height = TOP + deckHeight + 70;
+        double height = TOP + deckHeight + 86;
         Svg svg = new Svg();
         svg.open("svg", "xmlns", "http://www.w3.org/2000/svg", "class", "deck-plan", "data-vehicle", load.id(),
                 "viewBox", "0 0 " + Svg.number(WIDTH) + " " + Svg.number(height), "role", "img",
@@ -58,6 +58,11 @@ public final class DeckPlanDrawing {
                 + Svg.number(TOP - 12) + " " + Svg.number(cog) + "," + Svg.number(TOP - 2), "fill", INK);
         svg.text(cog + 9, TOP - 4, "centre of gravity " + ShopFormat.mm(load.centreOfGravityMm()) + " mm from front",
                 "font-size", 11, "fill", INK, "paint-order", "stroke", "stroke", "#ffffff", "stroke-width", 3);
+        // the combined centre (along and across) as a circled cross; y grows downwards in the drawing as on the deck
+        double across = TOP + (load.deckWidthMm() / 2 + load.lateralCentreOfGravityMm()) * scale;
+        svg.empty("circle", "cx", Svg.number(cog), "cy", Svg.number(across), "r", 6, "fill", "none", "stroke", INK,
+                "stroke-width", 1.6, "data-lateral-mm", Svg.number(load.lateralCentreOfGravityMm()));
+        svg.line(cog - 9, across, cog + 9, across, "stroke", INK, "stroke-width", 1.2);
         svg.close("g");
         ruler(svg, load.deckLengthMm(), scale, TOP + deckHeight);
         svg.text(LEFT, TOP + deckHeight + 42, load.id() + " \u00B7 " + load.type() + " \u00B7 " + load.crates().size()
@@ -68,6 +73,8 @@ public final class DeckPlanDrawing {
         svg.text(LEFT, TOP + deckHeight + 58, "Deck " + ShopFormat.mm(load.deckLengthMm()) + " \u00D7 "
                 + ShopFormat.mm(load.deckWidthMm()) + " \u00D7 " + ShopFormat.mm(load.deckHeightMm())
                 + " mm. Labels list the crates of a stack from the bottom up.", "font-size", 11, "fill", INK);
+        svg.text(LEFT, TOP + deckHeight + 74, "Lateral centre " + AxleLoadText.lateral(load)
+                + " mm from the centreline · " + AxleLoadText.of(load), "font-size", 11, "fill", INK);
         svg.close("svg");
         return svg.toString();
     }

@@ -28,6 +28,10 @@ public final class HtmlReport {
     /** What the page template reads. */
     record Page(String kitName, String description, String date, String runningHeader, String pageRules,
                 List<Rendered> sections) {
+        /** The shared stylesheet ({@link Look}), inlined before the report's own rules. */
+        String look() {
+            return Look.css();
+        }
     }
 
     private HtmlReport() {

@@ -26,14 +26,23 @@ import org.apache.commons.csv.CSVPrinter;
  *   gross_kg,max_gross_kg} (marks as "A1 x 12; N90 x 40", tubes of the bundles and joints of the boxes; ids in
  *   number order, BDL-2 before BDL-10);</li>
  *   <li>{@code manifests.csv}, one row per vehicle: {@code vehicle,type,crates,crate_ids,mass_kg,payload_kg,
- *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip} (floor length from the front of the deck
- *   to the rear face of the last crate; centre of gravity from the front).</li>
+ *   floor_length_mm,deck_length_mm,centre_of_gravity_mm,cost_per_trip,lateral_centre_of_gravity_mm,front_load_kg,
+ *   max_front_kg,rear_load_kg,max_rear_kg,front_support} (floor length from the front of the deck to the rear face
+ *   of the last crate; centre of gravity from the front; lateral centre signed from the centreline, positive towards
+ *   growing y; front support "kingpin" on a semi-trailer, "front axle" on a rigid truck, "axle loads not checked"
+ *   with the axle columns blank when the catalog gives no geometry);</li>
+ *   <li>{@code load-lists.csv}, one row per crate per vehicle: {@code vehicle,loading_step,unloading_step,crate,
+ *   outer_length_mm,outer_width_mm,outer_height_mm,gross_kg} (steps from 1 on each vehicle; unloading runs from the
+ *   doors, the reverse of loading).</li>
  * </ul>
  * Pure functions returning the file's text.
  */
 public final class LogisticsCsv {
     public static final String PACKING_LISTS = "packing-lists.csv";
     public static final String MANIFESTS = "manifests.csv";
+    public static final String LOAD_LISTS = "load-lists.csv";
+    /** What the manifest says of a vehicle without axle geometry. */
+    public static final String NOT_CHECKED = "axle loads not checked";
 
     private LogisticsCsv() {
     }
@@ -61,12 +70,46 @@ public final class LogisticsCsv {
     public static String manifests(LoadPlan plan) {
         StringWriter out = new StringWriter();
         try (CSVPrinter csv = CsvFile.printer(out, List.of("vehicle", "type", "crates", "crate_ids", "mass_kg",
-                "payload_kg", "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"))) {
+                "payload_kg", "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip",
+                "lateral_centre_of_gravity_mm", "front_load_kg", "max_front_kg", "rear_load_kg", "max_rear_kg",
+                "front_support"))) {
             for (VehicleLoad v : plan.vehicles()) {
+                boolean checked = v.axleLoadsKg() != null && v.axles() != null;
                 csv.printRecord(SpreadsheetCell.row(v.id(), v.type(), v.crates().size(),
                         CrateContents.ids(v.crates().stream().map(PlacedCrate::ref).toList(), " "),
                         number(v.massKg(), 1), number(v.payloadKg(), 1), number(v.floorLengthMm(), 0),
-                        number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2)));
+                        number(v.deckLengthMm(), 0), number(v.centreOfGravityMm(), 0), number(v.costPerTrip(), 2),
+                        number(v.lateralCentreOfGravityMm(), 0),
+                        checked ? number(v.axleLoadsKg().front(), 0) : "",
+                        checked ? number(v.axles().maxFrontKg(), 0) : "",
+                        checked ? number(v.axleLoadsKg().rear(), 0) : "",
+                        checked ? number(v.axles().maxRearKg(), 0) : "",
+                        checked ? frontSupport(v) : NOT_CHECKED));
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        return out.toString();
+    }
+
+    /** "kingpin" on a semi-trailer (front support on the deck), else "front axle". */
+    public static String frontSupport(VehicleLoad v) {
+        return v.axles() != null && v.axles().kingpin() ? "kingpin" : "front axle";
+    }
+
+    /** One row per crate per vehicle, in loading order. */
+    public static String loadLists(LoadPlan plan, CratePlan crates) {
+        Map<String, Crate> byId = crates.crates().stream().collect(Collectors.toMap(Crate::id, Function.identity()));
+        StringWriter out = new StringWriter();
+        try (CSVPrinter csv = CsvFile.printer(out, List.of("vehicle", "loading_step", "unloading_step", "crate",
+                "outer_length_mm", "outer_width_mm", "outer_height_mm", "gross_kg"))) {
+            for (VehicleLoad v : plan.vehicles()) {
+                int n = v.crates().size();
+                for (int i = 0; i < n; i++) {
+                    Crate c = byId.get(v.crates().get(i).ref());
+                    csv.printRecord(SpreadsheetCell.row(v.id(), i + 1, n - i, c.id(), number(c.outerLengthMm(), 0),
+                            number(c.outerWidthMm(), 0), number(c.outerHeightMm(), 0), number(c.grossKg(), 1)));
+                }
             }
         } catch (IOException e) {
             throw new IllegalStateException(e);

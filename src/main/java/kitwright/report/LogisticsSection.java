@@ -44,7 +44,8 @@ public final class LogisticsSection {
     record HostCount(String swatch, String mark, String diameter, String count) {
     }
 
-    record TripRow(String id, String type, String crates, String mass, String floor, String centre, String cost) {
+    record TripRow(String id, String type, String crates, String mass, String floor, String centre, String cost,
+                   String lateral, String axles, String balanceNote) {
     }
 
     record TripDrawing(String id, String type, String svg) {
@@ -110,7 +111,8 @@ public final class LogisticsSection {
                 CrateContents.ids(v.crates().stream().map(p -> p.ref()).toList(), " "),
                 ShopFormat.kg(v.massKg()) + " / " + ShopFormat.kg(v.payloadKg()),
                 ShopFormat.mm(v.floorLengthMm()) + " / " + ShopFormat.mm(v.deckLengthMm()),
-                ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()))).toList();
+                ShopFormat.mm(v.centreOfGravityMm()), ShopFormat.money(v.costPerTrip()), AxleLoadText.lateral(v),
+                AxleLoadText.of(v), v.balanceNote())).toList();
         List<TripDrawing> tripDrawings = new ArrayList<>();
         for (VehicleLoad v : loads.vehicles()) {
             tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));

@@ -10,7 +10,7 @@ import kitwright.model.Kit;
 /**
  * One fill colour per mark, assigned in the kit's mark order so that a mark keeps its colour on every sheet and in
  * every drawing of a report (saw sheets, bundles, crate lanes). Colours are light enough for black labels to stay legible and for a greyscale print to show the labels
- * and hatching rather than dark blocks; the colour only helps the eye, every piece also carries its mark as text.
+ * rather than dark blocks; the colour only helps the eye, every piece also carries its mark as text.
  *
  * <p>The first twelve colours are hand-picked soft hues; further marks step round the colour wheel by the golden
  * angle (about 137.5 degrees), which keeps neighbouring marks apart however many there are.

@@ -56,6 +56,7 @@ public final class PlanFiles {
             files.put(LogisticsCsv.PACKING_LISTS, LogisticsCsv.packingLists(result.crates(),
                     result.nesting().plan().bundles()));
             files.put(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(result.loads()));
+            files.put(LogisticsCsv.LOAD_LISTS, LogisticsCsv.loadLists(result.loads(), result.crates()));
         }
         return files;
     }

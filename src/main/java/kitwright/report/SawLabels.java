@@ -9,8 +9,8 @@ import kitwright.report.SawLayout.Segment;
 /**
  * Where the labels of a saw drawing go. A piece wide enough carries its mark and length inside; a run of equal
  * pieces too narrow for that gets one label across the run ("12 × D4 · 275") when the run is wide enough, else a
- * callout above the stock piece with a bracket over the run; a single narrow piece or offcut gets a callout with a
- * leader. Callouts go into rows above the stock piece, each into the lowest row where it overlaps no other label
+ * callout above the stock piece with a bracket over the run; a single narrow piece or offcut, and each end trim
+ * ("trim 5"), gets a callout with a leader. Callouts go into rows above the stock piece, each into the lowest row where it overlaps no other label
  * (a greedy interval placement, left to right).
  *
  * @param inside   labels drawn on the stock piece
@@ -70,7 +70,10 @@ record SawLabels(List<Inside> inside, List<Callout> callouts, int rows) {
             double x = left + s.startMm() * scale;
             double w = s.lengthMm() * scale;
             int next = i + 1;
-            if (s.kind() == Kind.OFFCUT && textWidth(offcutText(pattern), FONT) + 10 > w) {
+            if (s.kind() == Kind.TRIM && s.lengthMm() > 0) {
+                double at = s.startMm() == 0 ? x : x + w;
+                pending.add(new Pending(at, at, "trim " + ShopFormat.sawMm(s.lengthMm()), false));
+            } else if (s.kind() == Kind.OFFCUT && textWidth(offcutText(pattern), FONT) + 10 > w) {
                 pending.add(new Pending(x + w / 2, x + w / 2, offcutText(pattern), false));
             } else if (s.kind() == Kind.PIECE) {
                 String length = ShopFormat.sawMm(s.lengthMm());
@@ -112,8 +115,10 @@ record SawLabels(List<Inside> inside, List<Callout> callouts, int rows) {
         return new SawLabels(inside, callouts, rowEnds.size());
     }
 
+    /** "remnant 534 mm, to rack" or "scrap 36 mm": what the offcut is and where it goes, in words. */
     static String offcutText(CutPattern pattern) {
-        return pattern.offcutKind() + " " + ShopFormat.sawMmUnit(pattern.offcutMm());
+        return pattern.offcutKind() + " " + ShopFormat.sawMmUnit(pattern.offcutMm())
+                + ("remnant".equals(pattern.offcutKind()) ? ", to rack" : "");
     }
 
     /** The piece at {@code from} and the equal pieces (same mark and length) right after it, kerfs between. */

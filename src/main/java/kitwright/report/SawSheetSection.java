@@ -43,14 +43,29 @@ final class SawSheetSection {
      *
      * @param ticks one box per stock piece to tick off as it is cut (empty above {@link #MAX_TICKS} pieces)
      */
-    record PatternCard(String id, String number, String section, String stock, String origin, String count, String svg,
-                       List<CutColumn> cutColumns, String offcut, String offcutClass, List<Integer> ticks,
-                       boolean tallyLine) {
+    record PatternCard(String id, String number, String section, String stock, String origin, String count,
+                       String pieces, String svg, List<CutColumn> cutColumns, List<StopChunk> stopChunks,
+                       String offcut, String offcutClass, List<Integer> ticks, boolean tallyLine) {
     }
 
     /** Cut rows shown side by side in columns of at most {@link #ROWS_PER_COLUMN}, so long patterns stay short. */
     record CutColumn(List<CutRow> rows) {
     }
+
+    /**
+     * A stop the operator sets, in saw order: the saw line's number, its distance from the stock piece's left end
+     * ({@link SawLayout.SawLine}) and what the cut frees.
+     */
+    record StopRow(String number, String stop, String frees) {
+    }
+
+    /**
+     * Stops laid out left to right as the saw lines lie in the drawing, at most {@link #STOPS_PER_ROW} to a table.
+     */
+    record StopChunk(List<StopRow> stops) {
+    }
+
+    static final int STOPS_PER_ROW = 14;
 
     static final int ROWS_PER_COLUMN = 6;
     static final int MAX_COLUMNS = 3;
@@ -136,7 +151,7 @@ final class SawSheetSection {
         return new SawSection("saw-" + index, plan.section(), description(kit, plan.section()), settings,
                 ReportFormat.status(plan), ReportFormat.statusClass(plan.status()),
                 plan.status() == Status.INFEASIBLE ? plan.reason() : null, legend(kit, plan, palette),
-                Swatches.key("saw-" + index + "-key"), List.copyOf(cards), totals, spares, "saw-sheet-" + index,
+                Swatches.key(), List.copyOf(cards), totals, spares, "saw-sheet-" + index,
                 HtmlReport.cssString(kit.name() + " \u00B7 saw sheet \u00B7 " + plan.section() + " \u00B7 " + date));
     }
 
@@ -156,19 +171,42 @@ final class SawSheetSection {
                 + p.count() + " times; cuts " + p.cuts().stream()
                 .map(c -> c.mark() + " " + ShopFormat.sawMmUnit(c.lengthMm())).collect(Collectors.joining(", "))
                 + "; " + offcut;
-        String svg = SawSheetDrawing.draw(id, title, p, plan.kerfMm(), plan.trimMm(), scale, palette);
-        List<CutRow> rows = cutRows(kit, SawLayout.of(p, plan.kerfMm(), plan.trimMm()).pieces());
-        List<CutColumn> columns = new ArrayList<>();
-        int columnCount = rows.size() <= ROWS_PER_COLUMN + 2 ? 1
-                : Math.min(MAX_COLUMNS, (rows.size() + ROWS_PER_COLUMN - 1) / ROWS_PER_COLUMN);
-        int perColumn = Math.max(1, (rows.size() + columnCount - 1) / columnCount);
-        for (int from = 0; from < rows.size(); from += perColumn) {
-            columns.add(new CutColumn(rows.subList(from, Math.min(rows.size(), from + perColumn))));
+        SawSheetDrawing.Tube tube = kit.catalog().section(plan.section())
+                .filter(s -> s.wallMm() > 0 && 2 * s.wallMm() <= s.outerDiameterMm())
+                .map(s -> new SawSheetDrawing.Tube(s.outerDiameterMm(), s.wallMm())).orElse(null);
+        String svg = SawSheetDrawing.draw(id, title, p, plan.kerfMm(), plan.trimMm(), scale, palette, tube);
+        SawLayout layout = SawLayout.of(p, plan.kerfMm(), plan.trimMm());
+        List<CutColumn> columns = columns(cutRows(kit, layout.pieces())).stream().map(CutColumn::new).toList();
+        List<StopRow> stopRows = layout.sawLines().stream().map(l -> new StopRow(String.valueOf(l.number()),
+                ShopFormat.sawMm(l.stopMm()), l.frees())).toList();
+        int chunks = Math.max(1, (stopRows.size() + STOPS_PER_ROW - 1) / STOPS_PER_ROW);
+        int perChunk = Math.max(1, (stopRows.size() + chunks - 1) / chunks);
+        List<StopChunk> stops = new ArrayList<>();
+        for (int from = 0; from < stopRows.size(); from += perChunk) {
+            stops.add(new StopChunk(List.copyOf(stopRows.subList(from, Math.min(stopRows.size(), from + perChunk)))));
         }
         List<Integer> ticks = p.count() > MAX_TICKS ? List.of()
                 : java.util.stream.IntStream.rangeClosed(1, p.count()).boxed().toList();
-        return new PatternCard(id, String.valueOf(number), plan.section(), stock, origin, "\u00D7\u2009" + p.count(), svg,
-                List.copyOf(columns), offcut, p.offcutMm() <= 0 ? "none" : p.offcutKind(), ticks, ticks.isEmpty());
+        return new PatternCard(id, String.valueOf(number), plan.section(), stock, origin, countText(p.count()),
+                ShopFormat.count(p.count()), svg, columns, stops, offcut,
+                p.offcutMm() <= 0 ? "none" : p.offcutKind(), ticks, ticks.isEmpty());
+    }
+
+    /** How many stock pieces to cut to a pattern, in words: "cut 12 stock pieces like this". */
+    static String countText(int count) {
+        return "cut " + ShopFormat.count(count) + " stock piece" + (count == 1 ? "" : "s") + " like this";
+    }
+
+    /** Rows in up to {@link #MAX_COLUMNS} columns of about {@link #ROWS_PER_COLUMN}, the first the longest. */
+    private static <T> List<List<T>> columns(List<T> rows) {
+        int columnCount = rows.size() <= ROWS_PER_COLUMN + 2 ? 1
+                : Math.min(MAX_COLUMNS, (rows.size() + ROWS_PER_COLUMN - 1) / ROWS_PER_COLUMN);
+        int perColumn = Math.max(1, (rows.size() + columnCount - 1) / columnCount);
+        List<List<T>> columns = new ArrayList<>();
+        for (int from = 0; from < rows.size(); from += perColumn) {
+            columns.add(List.copyOf(rows.subList(from, Math.min(rows.size(), from + perColumn))));
+        }
+        return List.copyOf(columns);
     }
 
     /** The cut list with runs of equal pieces on one line each. */

@@ -2,7 +2,7 @@ package kitwright.report;
 
 /**
  * Small SVG keys for the saw-sheet legend: a colour swatch per mark, and the symbols of the drawings (cut piece,
- * end trim, kerf with its saw-cut wedge, remnant hatched one way, scrap cross-hatched). Built with {@link Svg}.
+ * saw line, end trim, remnant, scrap, stop), each named in words. Built with {@link Svg}.
  */
 final class Swatches {
     private Swatches() {
@@ -17,41 +17,43 @@ final class Swatches {
     }
 
     /**
-     * The symbol key, one symbol per line.
-     *
-     * @param id prefix for the hatch patterns, unique in the report
+     * The symbol key, one symbol per line, each named in words: cut piece, saw line with its kerf-wide slot, end
+     * trim, remnant (plain tube with its bore dashed), scrap, and a stop measured from the left end.
      */
-    static String key(String id) {
+    static String key() {
         String ink = SawSheetDrawing.INK;
+        String line = SawSheetDrawing.LINE;
+        double row = 22;
         Svg svg = new Svg().open("svg", "xmlns", "http://www.w3.org/2000/svg", "class", "symbol-key",
-                "viewBox", "0 0 200 120", "width", 200, "height", 120, "role", "img", "aria-label",
-                "Key: cut piece, end trim, kerf and saw cut, remnant, scrap");
-        svg.open("defs");
-        svg.open("pattern", "id", id + "-remnant", "patternUnits", "userSpaceOnUse", "width", 7, "height", 7,
-                "patternTransform", "rotate(45)");
-        svg.rect(0, 0, 7, 7, "fill", "#ffffff").line(0, 0, 0, 7, "stroke", "#4a5563", "stroke-width", 1.6);
-        svg.close("pattern");
-        svg.open("pattern", "id", id + "-scrap", "patternUnits", "userSpaceOnUse", "width", 6, "height", 6,
-                "patternTransform", "rotate(45)");
-        svg.rect(0, 0, 6, 6, "fill", "#ffffff").line(0, 0, 0, 6, "stroke", "#4a5563", "stroke-width", 1.1)
-                .line(0, 0, 6, 0, "stroke", "#4a5563", "stroke-width", 1.1);
-        svg.close("pattern");
-        svg.close("defs");
-        double row = 24;
-        double x = 30;
-        svg.rect(2, 3, 22, 16, "fill", MarkPalette.colour(0), "stroke", ink, "stroke-width", 0.8);
-        svg.text(x, 15, "cut piece: mark and length", "font-size", 12, "fill", ink);
-        svg.rect(11, row + 3, 4, 16, "fill", "#59636e");
-        svg.text(x, row + 15, "end trim", "font-size", 12, "fill", ink);
-        svg.empty("path", "d", "M9 " + Svg.number(2 * row) + "L17 " + Svg.number(2 * row) + "L13 "
-                + Svg.number(2 * row + 6) + "Z", "fill", ink);
-        svg.rect(12.3, 2 * row + 7, 1.4, 14, "fill", ink);
-        svg.text(x, 2 * row + 15, "saw cut and kerf", "font-size", 12, "fill", ink);
-        svg.rect(2, 3 * row + 3, 22, 16, "fill", "url(#" + id + "-remnant)", "stroke", ink, "stroke-width", 0.8);
-        svg.text(x, 3 * row + 15, "remnant: back to the rack", "font-size", 12, "fill", ink);
-        svg.rect(2, 4 * row + 3, 22, 16, "fill", "url(#" + id + "-scrap)", "stroke", ink, "stroke-width", 0.8,
-                "stroke-dasharray", "3 2");
-        svg.text(x, 4 * row + 15, "scrap", "font-size", 12, "fill", ink);
+                "viewBox", "0 0 250 " + Svg.number(6 * row + 6), "width", 250, "height", Svg.number(6 * row + 6),
+                "role", "img", "aria-label", "Key: cut piece, saw line and kerf, end trim, remnant, scrap, stop");
+        double x = 36;
+        svg.rect(2, 3, 28, 14, "fill", MarkPalette.colour(0), "stroke", ink, "stroke-width", 1);
+        svg.text(x, 14, "cut piece: mark and length", "font-size", 11.5, "fill", ink);
+        double y = row;
+        svg.rect(2, y + 3, 28, 14, "fill", MarkPalette.colour(0), "stroke", ink, "stroke-width", 1);
+        svg.rect(15, y + 2.3, 2, 15.4, "fill", "#ffffff");
+        svg.line(16, y, 16, y + 20, "stroke", ink, "stroke-width", 0.8, "stroke-dasharray", "6 2 1.5 2");
+        svg.text(x, y + 14, "saw line, kerf wide", "font-size", 11.5, "fill", ink);
+        y += row;
+        svg.rect(2, y + 3, 28, 14, "fill", MarkPalette.colour(0), "stroke", ink, "stroke-width", 1);
+        svg.rect(2, y + 3, 4, 14, "fill", SawSheetDrawing.TRIM);
+        svg.text(x, y + 14, "end trim (\u201Ctrim 5\u201D)", "font-size", 11.5, "fill", ink);
+        y += row;
+        svg.rect(2, y + 3, 28, 14, "fill", "#ffffff", "stroke", ink, "stroke-width", 1);
+        svg.line(2, y + 6, 30, y + 6, "stroke", line, "stroke-width", 0.7, "stroke-dasharray", "6 3");
+        svg.line(2, y + 14, 30, y + 14, "stroke", line, "stroke-width", 0.7, "stroke-dasharray", "6 3");
+        svg.text(x, y + 14, "remnant: plain tube, to the rack", "font-size", 11.5, "fill", ink);
+        y += row;
+        svg.rect(2, y + 3, 28, 14, "fill", SawSheetDrawing.SCRAP, "stroke", ink, "stroke-width", 1);
+        svg.rect(3.5, y + 4.5, 25, 11, "fill", "none", "stroke", ink, "stroke-width", 0.8, "stroke-dasharray", "3 2");
+        svg.text(x, y + 14, "scrap: to the bin", "font-size", 11.5, "fill", ink);
+        y += row;
+        svg.empty("circle", "cx", 5, "cy", y + 5, "r", 2.4, "fill", "#ffffff", "stroke", ink, "stroke-width", 1);
+        svg.line(24, y + 1, 24, y + 7, "stroke", line, "stroke-width", 0.7);
+        svg.text(27.5, y + 9, "740", "font-size", 9, "fill", ink, "text-anchor", "end",
+                "transform", "rotate(-90 27.5 " + Svg.number(y + 9) + ")");
+        svg.text(x, y + 14, "stop: mm from the left end (\u25CB)", "font-size", 11.5, "fill", ink);
         return svg.close("svg").toString();
     }
 }

@@ -41,10 +41,10 @@ class CsvOutputsTest {
 
         assertThat(checkedCsvs(plan)).containsExactlyInAnyOrder("order.csv", "rack-pull.csv", "cut-list.csv",
                 "rack-after.csv",
-                "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv");
+                "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv", "load-lists.csv");
         assertThat(checkedCsvs(cut)).contains("order.csv", "rack-pull.csv", "cut-list.csv", "rack-after.csv");
         assertThat(checkedCsvs(nest)).contains("nests.csv", "assembly-order.csv");
-        assertThat(checkedCsvs(pack)).contains("packing-lists.csv", "manifests.csv");
+        assertThat(checkedCsvs(pack)).contains("packing-lists.csv", "manifests.csv", "load-lists.csv");
         assertThat(checkedCsvs(compare)).containsExactly("compare.csv");
     }
 

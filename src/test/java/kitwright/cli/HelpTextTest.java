@@ -29,12 +29,12 @@ class HelpTextTest {
             entry.append(line.strip()).append(' ');
         }
         entries.add(entry.toString());
-        assertThat(entries).hasSize(7);
+        assertThat(entries).hasSize(8);
         assertThat(entries).allSatisfy(e -> assertThat(e.strip()).endsWith("."));
     }
 
     @ParameterizedTest(name = "{0} --help")
-    @ValueSource(strings = {"check", "plan", "cut", "nest", "pack", "compare"})
+    @ValueSource(strings = {"check", "plan", "cut", "nest", "pack", "compare", "sweep"})
     @DisplayName("each command's help ends with a runnable example on a sample kit")
     void eachCommandHasAnExample(String command) {
         CliRun run = CliRun.of(command, "--help");

@@ -47,6 +47,7 @@ class PackCommandTest {
                 .matches("\\p{ASCII}*").containsPattern("centre of gravity \\d+(\\.\\d)? mm");
         assertThat(first.resolve("packing-lists.csv")).exists();
         assertThat(first.resolve("manifests.csv")).exists();
+        assertThat(first.resolve("load-lists.csv")).exists();
         assertThat(Files.list(first.resolve("drawings")).map(p -> p.getFileName().toString()).toList())
                 .anyMatch(n -> n.startsWith("crate-CRT-1")).anyMatch(n -> n.startsWith("deck-TRIP-1"));
         JsonNode json = new ObjectMapper().readTree(temp.resolve("first.json").toFile());
@@ -120,6 +121,28 @@ class PackCommandTest {
         assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("CRT-1,");
         assertThat(new ObjectMapper().readTree(json.toFile()).path("loads").path("status").asText())
                 .isEqualTo("INFEASIBLE");
+    }
+
+    @Test
+    @DisplayName("an axle limit no place along the deck keeps: exit 3 naming it, the packing lists still written")
+    void axleLimitNamed() throws Exception {
+        Path kit = temp.resolve("kit");
+        Files.createDirectories(kit);
+        Files.copy(Path.of("sample-kits/alu-kiosk/bars.csv"), kit.resolve("bars.csv"));
+        // an invented truck whose rear axle takes 1 kg above its unladen load
+        Files.writeString(kit.resolve("vehicles.csv"), "vehicle,deck_length_mm,deck_width_mm,deck_height_mm,"
+                + "payload_kg,cost_per_trip,source,front_support_mm,rear_support_mm,unladen_front_kg,unladen_rear_kg,"
+                + "max_front_kg,max_rear_kg\ntruck,6200,2450,2400,2800,420,invented,-1150,3450,2700,2000,3600,2001\n",
+                StandardCharsets.UTF_8);
+        Files.writeString(kit.resolve("kit.json"), "{\"stockCatalog\": \""
+                + Path.of("stock-catalogs/aluminium-tube.csv").toAbsolutePath() + "\", \"crateCatalog\": \""
+                + Path.of("stock-catalogs/crates.csv").toAbsolutePath() + "\", \"vehicleCatalog\": \"vehicles.csv\"}",
+                StandardCharsets.UTF_8);
+        Path out = temp.resolve("out");
+        Run run = run("pack", kit.toString(), "--out", out.toString());
+        assertThat(run.code()).as(run.out() + run.err()).isEqualTo(3);
+        assertThat(run.err()).contains("axle limit").contains("rear axle load").contains("2001 kg limit");
+        assertThat(Files.readString(out.resolve("packing-lists.csv"))).contains("CRT-1,");
     }
 
     @Test

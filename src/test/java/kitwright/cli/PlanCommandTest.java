@@ -25,7 +25,8 @@ class PlanCommandTest {
         assertThat(run.err()).contains("plan: cutting", "plan: nesting", "plan: crating and loading");
         assertThat(KitFiles.entries(out)).containsExactlyInAnyOrder(OutputFolder.MARKER, PlanCommand.SUMMARY_JSON,
                 "report.html", "plan.json", "order.csv", "rack-pull.csv", "cut-list.csv", "rack-after.csv",
-                "labels.html", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv", "plan.xlsx",
+                "labels.html", "nests.csv", "assembly-order.csv", "packing-lists.csv", "manifests.csv", "load-lists.csv",
+                "plan.xlsx",
                 "timing.json");
         assertThat(run.out()).contains("Open " + out.resolve("report.html"));
         assertThat(run.out().split("Kit cinema-6", -1)).as("the kit named once, at the top").hasSize(2);

@@ -16,7 +16,8 @@ import org.junit.jupiter.api.Test;
 class CompareWritersTest {
     private static final List<String> KEYS = List.of("kit", "marks", "bars", "members", "reuseRatio", "stockPieces",
             "stockLengthMm", "cost", "payableCost", "offcutPct", "scrapPct", "remnantPct", "kitMassKg",
-            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "status");
+            "boughtMassKg", "usedStockMassKg", "co2eKg", "bundles", "crates", "vehicles", "tripCost", "crateCost",
+            "totalCost", "status", "statusReason", "stages");
 
     @Test
     void jsonHasExactlyTheIssueKeysInOrder() throws Exception {
@@ -53,7 +54,8 @@ class CompareWritersTest {
         CompareCsv.write(CompareFixtures.three(), out);
         List<CSVRecord> records = CsvOutput.records(out.toString());
         // compare.csv names the compare.json keys in snake_case
-        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream()
+        // every key but the stages (a list: compare.csv gives them as status_reason)
+        assertThat(out.toString()).startsWith("\uFEFF" + KEYS.stream().filter(k -> !k.equals("stages"))
                 .map(k -> k.replaceAll("([A-Z])", "_$1").toLowerCase(java.util.Locale.ROOT))
                 .collect(java.util.stream.Collectors.joining(",")) + "\r\n");
         assertThat(records).hasSize(3);
@@ -89,14 +91,18 @@ class CompareWritersTest {
         assertThat(count(html, "<th scope=\"col\" class=\"option\">")).isEqualTo(3);
         String cost = rowOf(html, "cost");
         assertThat(cellsOf(cost)).hasSize(3);
-        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4\u202F800.00<span class=\"badge best\">best");
-        assertThat(cellsOf(cost).get(0)).contains("+400.00 (+8.3 %)").doesNotContain("badge");
+        assertThat(cellsOf(cost).get(1)).startsWith("<td class=\"best\">4\u202F800.00<span class=\"best-mark\">best");
+        assertThat(cellsOf(cost).get(0)).contains("+400.00 (+8.3 %)").doesNotContain("best-mark");
         assertThat(cellsOf(cost).get(2)).contains("+300.50 (+6.3 %)");
         String reuse = rowOf(html, "reuseRatio");
-        assertThat(cellsOf(reuse).get(0)).contains("badge best");
+        assertThat(cellsOf(reuse).get(0)).contains("best-mark");
         assertThat(cellsOf(reuse).get(2)).contains("\u22120.70 (\u221228.0 %)");
-        assertThat(cellsOf(rowOf(html, "offcutPct")).get(0)).contains("+6.50 points");
-        assertThat(cellsOf(rowOf(html, "members"))).allSatisfy(c -> assertThat(c).doesNotContain("badge"));
+        assertThat(cellsOf(rowOf(html, "scrapPct")).get(0)).contains("+2.60 points");
+        // remnants go back to the rack as stock with value: neither they nor the offcut holding them are ranked
+        for (String key : List.of("offcutPct", "remnantPct")) {
+            assertThat(cellsOf(rowOf(html, key))).allSatisfy(c -> assertThat(c).doesNotContain("best-mark"));
+        }
+        assertThat(cellsOf(rowOf(html, "members"))).allSatisfy(c -> assertThat(c).doesNotContain("best-mark"));
         assertThat(count(html, "<svg class=\"chart\"")).isEqualTo(4);
         for (String chart : List.of("cost", "waste", "mass", "vehicles")) {
             assertThat(html).contains("<svg class=\"chart\" data-metric=\"" + chart + "\"");

@@ -82,7 +82,7 @@ class ComparisonTest {
     void summaryRoundsForReadingAndTakesTheWorstStatus() {
         KitMetrics metrics = new KitMetrics(6, 300, 750, 2.5, 80, 78, 480123.456, 468000, 5200.004, 5100.006,
                 9.87654, 3.33333, 6.54321, 1500.06, 1700.04, 1750.04, 2635.06, List.of());
-        OptionSummary s = OptionSummary.of("k", metrics, new Logistics(40, 4, 2, 1800.005),
+        OptionSummary s = OptionSummary.of("k", metrics, new Logistics(40, 4, 2, 1800.005, null),
                 List.of(Status.OPTIMAL, Status.FEASIBLE, Status.OPTIMAL));
         assertThat(s.stockLengthMm()).isEqualTo(480123.5);
         assertThat(s.cost()).isEqualTo(5200.0);
@@ -93,6 +93,14 @@ class ComparisonTest {
         assertThat(s.status()).isEqualTo(Status.FEASIBLE);
         assertThat(OptionSummary.worst(List.of(Status.FEASIBLE, Status.INFEASIBLE))).isEqualTo(Status.INFEASIBLE);
         assertThat(OptionSummary.worst(List.of())).isEqualTo(Status.OPTIMAL);
+        assertThat(s.totalCost()).as("no crate price, no total").isNull();
+        OptionSummary priced = OptionSummary.of("k", metrics, new Logistics(40, 4, 2, 1800.005, 420.0),
+                List.of(Status.FEASIBLE), List.of(new StageStatus("crates", Status.FEASIBLE, 0.125),
+                        new StageStatus("loads", Status.OPTIMAL, 0.0)));
+        // 5200.004 + 420 + 1800.005 = 7420.009, to the cent
+        assertThat(priced.totalCost()).isEqualTo(7420.01);
+        assertThat(priced.crateCost()).isEqualTo(420.0);
+        assertThat(priced.statusReason()).isEqualTo("crates 12.5 % above the bound");
         assertThat(OptionSummary.of("k", metrics, Logistics.UNKNOWN, List.of()).vehicles()).isNull();
     }
 }

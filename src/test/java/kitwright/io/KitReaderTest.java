@@ -33,6 +33,33 @@ class KitReaderTest {
     }
 
     @Test
+    void jointRowsCountJointsAndSetNoBarQuantity(@TempDir Path dir) throws Exception {
+        KitFiles.kit(dir, "mark,section,length_mm,quantity\nA1,CHS 48.3x3.2,2400,\nB1,CHS 33.7x2.6,1200,\n");
+        KitFiles.write(dir, "joints.csv", "mark,diameter_mm,mass_kg,quantity\nN1,90,1.5,20\n");
+        KitFiles.write(dir, "structures.csv", STRUCTURES + "pavilion,N1,9\nstage,N1,14\n");
+
+        Kit kit = KitReader.read(dir);
+
+        assertThat(kit.bar("A1").orElseThrow().quantity()).isEqualTo(12);
+        assertThat(kit.bar("B1").orElseThrow().quantity()).isEqualTo(6);
+        assertThat(kit.bar("N1")).isEmpty();
+        assertThat(kit.structures()).hasSize(6);
+        assertThat(kit.barCounts()).hasSize(4).noneMatch(c -> c.mark().equals("N1"));
+    }
+
+    @Test
+    void aStructureMarkInNeitherBarsNorJointsIsAnError(@TempDir Path dir) {
+        KitFiles.kit(dir, "mark,section,length_mm,quantity\nA1,CHS 48.3x3.2,2400,\n");
+        KitFiles.write(dir, "joints.csv", "mark,diameter_mm,mass_kg,quantity\nN1,90,1.5,20\n");
+        KitFiles.write(dir, "structures.csv", "structure,mark,count\npavilion,A1,12\npavilion,N2,3\n");
+
+        assertThatThrownBy(() -> KitReader.read(dir))
+                .isInstanceOfSatisfying(InvalidInputException.class, e -> assertThat(e.problems())
+                        .singleElement().asString().contains("structures.csv:3: mark: mark N2 is not in bars.csv"
+                                + " or joints.csv"));
+    }
+
+    @Test
     void quantityIsTheSumWhenStructuresStandTogether(@TempDir Path dir) throws Exception {
         KitFiles.kit(dir, "mark,section,length_mm,quantity\nA1,CHS 48.3x3.2,2400,\nB1,CHS 33.7x2.6,1200,\n");
         KitFiles.write(dir, "structures.csv", STRUCTURES);

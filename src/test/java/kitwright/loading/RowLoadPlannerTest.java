@@ -104,14 +104,15 @@ class RowLoadPlannerTest {
     }
 
     @Test
-    @DisplayName("JSON contract of plan.json -> loads: exactly the issue's keys, in order")
+    @DisplayName("JSON contract of plan.json -> loads: exactly the issues' keys, in order (lateral centre; no axle"
+            + " loads without geometry; the total only from the joint choice, Shipping)")
     void jsonKeys() {
         CrateType small = crateType("c", 1000, 800, 800, true, 2000);
         JsonNode json = new ObjectMapper().valueToTree(load(plan(small, 3, 500), List.of(small), List.of(SEMI)));
         assertThat(names(json)).containsExactly("status", "lowerBound", "vehicles");
         JsonNode vehicle = json.get("vehicles").get(0);
         assertThat(names(vehicle)).containsExactly("id", "type", "deckLengthMm", "deckWidthMm", "deckHeightMm",
-                "payloadKg", "massKg", "centreOfGravityMm", "crates");
+                "payloadKg", "massKg", "centreOfGravityMm", "lateralCentreOfGravityMm", "crates");
         assertThat(names(vehicle.get("crates").get(0))).containsExactly("ref", "xMm", "yMm", "zMm", "rotated");
     }
 

@@ -41,7 +41,7 @@ class PlannerTest {
     private static final List<String> FOLDER_EXTRAS = List.of("timing.json", OutputFolder.MARKER);
     private static final List<String> CHAIN_FILES = List.of("report.html", "plan.json", "summary.json", "order.csv",
             "rack-pull.csv", "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "labels.html",
-            "packing-lists.csv", "manifests.csv", "plan.xlsx");
+            "packing-lists.csv", "manifests.csv", "load-lists.csv", "plan.xlsx");
 
     static Stream<Path> sampleKits() throws Exception {
         try (Stream<Path> kits = Files.list(Path.of("sample-kits"))) {

@@ -76,5 +76,17 @@ class LogisticsCsvTest {
         assertThat(manifest.stream().mapToInt(r -> Integer.parseInt(r.get("crates"))).sum())
                 .isEqualTo(crates.crates().size());
         assertThat(Double.parseDouble(manifest.get(0).get("mass_kg"))).isLessThanOrEqualTo(2800);
+        assertThat(manifest.get(0).get("front_support")).isEqualTo("axle loads not checked");
+
+        String loadLists = LogisticsCsv.loadLists(loads, crates);
+        assertThat(loadLists).startsWith("\uFEFFvehicle,loading_step,unloading_step,crate,outer_length_mm,"
+                + "outer_width_mm,outer_height_mm,gross_kg\r\n");
+        List<CSVRecord> steps = read(loadLists);
+        assertThat(steps).hasSize(crates.crates().size());
+        int n = loads.vehicles().get(0).crates().size();
+        assertThat(steps.get(0).get("loading_step")).isEqualTo("1");
+        assertThat(steps.get(0).get("unloading_step")).isEqualTo(String.valueOf(n));
+        assertThat(steps.stream().map(r -> r.get("crate")).collect(java.util.stream.Collectors.toSet()))
+                .hasSize(crates.crates().size());
     }
 }

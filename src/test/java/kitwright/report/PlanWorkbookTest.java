@@ -52,7 +52,7 @@ class PlanWorkbookTest {
             List<String> sheets = new ArrayList<>();
             workbook.forEach(s -> sheets.add(s.getSheetName()));
             assertThat(sheets).containsExactlyElementsOf(csvs.stream().map(n -> n.replace(".csv", "")).toList());
-            assertThat(sheets).startsWith("order", "rack-pull", "cut-list").contains("packing-lists", "manifests");
+            assertThat(sheets).startsWith("order", "rack-pull", "cut-list").contains("packing-lists", "manifests", "load-lists");
             for (String csv : csvs) {
                 numbers += compare(workbook.getSheet(csv.replace(".csv", "")), files.get(csv));
             }

@@ -59,7 +59,7 @@ class SawLabelsTest {
                 named += l.second() != null ? 1 : Integer.parseInt(l.first().split(" ")[0]);
             }
             for (SawLabels.Callout c : labels.callouts()) {
-                if (!c.text().startsWith("remnant") && !c.text().startsWith("scrap")) {
+                if (!c.text().startsWith("remnant") && !c.text().startsWith("scrap") && !c.text().startsWith("trim")) {
                     named += c.toX() > c.fromX() ? Integer.parseInt(c.text().split(" ")[0]) : 1;
                 }
             }
@@ -67,6 +67,10 @@ class SawLabelsTest {
             for (Cut cut : pattern.cuts()) {
                 assertThat(all).contains(cut.mark()).contains(ShopFormat.mm(cut.lengthMm()));
             }
+            // both end trims are named in words, at the two ends
+            assertThat(labels.callouts()).filteredOn(c -> c.text().equals("trim 5"))
+                    .extracting(SawLabels.Callout::fromX).as("trim callouts in pattern %d", n)
+                    .containsExactly(SawSheetDrawing.LEFT, SawSheetDrawing.LEFT + pattern.stockLengthMm() * scale);
             String offcutText = SawLabels.offcutText(pattern);
             boolean offcutInside = pattern.offcutMm() * scale >= SawLabels.textWidth(offcutText, SawLabels.FONT) + 10;
             if (pattern.offcutMm() > 0 && !offcutInside) {
@@ -102,6 +106,7 @@ class SawLabelsTest {
         SawLayout layout = SawLayout.of(p, 2, 5);
         SawLabels labels = SawLabels.of(layout, p, SPAN / 12000, SawSheetDrawing.LEFT, SawSheetDrawing.WIDTH);
         assertThat(labels.inside()).extracting(SawLabels.Inside::first).containsExactly("30 \u00D7 D4 \u00B7 275");
-        assertThat(labels.callouts()).isEmpty();
+        // nothing but the two end trims is called out
+        assertThat(labels.callouts()).extracting(SawLabels.Callout::text).containsExactly("trim 5", "trim 5");
     }
 }

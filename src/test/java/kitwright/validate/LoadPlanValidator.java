@@ -24,7 +24,14 @@ import kitwright.packing.CratePlan;
  *   <li>a crate off the floor stands fully on one crate whose top is at its bottom, and that crate is stackable;</li>
  *   <li>the mass resting on each crate (every crate above it whose footprint overlaps it) is within its top
  *   load;</li>
- *   <li>the lower bound does not exceed the trip cost.</li>
+ *   <li>the lateral centre of gravity is the mass-weighted mean of the footprint centres across the deck, as an
+ *   offset from the centreline; beyond 10 % of the deck width the vehicle says why;</li>
+ *   <li>with axle geometry in the catalog, the front (or kingpin) and rear loads are the unladen loads plus each
+ *   crate's share by moments about the other support, and within the limits (and above the least front load);
+ *   without it, no axle loads are claimed;</li>
+ *   <li>stacks stay below the door opening; the crates are listed in an order they can be loaded in: every crate
+ *   after the crates it stands on;</li>
+ *   <li>the lower bound does not exceed the trip cost; the total's bound does not exceed the total.</li>
  * </ul>
  * Throws AssertionError listing every violation found.
  */
@@ -74,6 +81,19 @@ public final class LoadPlanValidator {
         if (plan.lowerBound() > objective + 1e-6 * Math.max(1, objective)) {
             errors.add("lower bound " + plan.lowerBound() + " exceeds the trip cost " + objective);
         }
+        if (plan.totalCost() != null && plan.totalLowerBound() > plan.totalCost() + 1e-6 * plan.totalCost()) {
+            errors.add("total lower bound " + plan.totalLowerBound() + " exceeds the total " + plan.totalCost());
+        }
+        if (plan.totalCost() != null && costed) {
+            double price = 0;
+            for (Crate c : crates.crates()) {
+                CrateType t = crateCatalog.stream().filter(x -> x.name().equals(c.type())).findFirst().orElse(null);
+                price += t == null || t.price() == null ? 0 : t.price();
+            }
+            if (Math.abs(price + cost - plan.totalCost()) > 1e-6 * Math.max(1, plan.totalCost())) {
+                errors.add("total " + plan.totalCost() + " is not crate price " + price + " plus trips " + cost);
+            }
+        }
         fail(errors);
     }
 
@@ -101,7 +121,7 @@ public final class LoadPlanValidator {
             mass += c.grossKg();
             moment += c.grossKg() * (b.x0 + b.x1) / 2;
             if (b.x0 < -EPS || b.y0 < -EPS || b.z0 < -EPS || b.x1 > type.deckLengthMm() + EPS
-                    || b.y1 > type.deckWidthMm() + EPS || b.z1 > type.deckHeightMm() + EPS) {
+                    || b.y1 > type.deckWidthMm() + EPS || b.z1 > loadHeight(type) + EPS) {
                 errors.add(load.id() + ": crate " + p.ref() + " is outside the deck");
             }
         }
@@ -113,6 +133,18 @@ public final class LoadPlanValidator {
         }
         if (mass > 0 && Math.abs(moment / mass - load.centreOfGravityMm()) > 1e-3) {
             errors.add(load.id() + ": centre of gravity " + load.centreOfGravityMm() + " should be " + moment / mass);
+        }
+        BalanceCheck.check(load, type, boxes.stream().map(b -> new double[] {b.x0, b.y0, b.x1, b.y1, b.mass})
+                .toList(), errors);
+        for (int i = 0; i < boxes.size(); i++) {
+            Box a = boxes.get(i);
+            for (int j = i + 1; j < boxes.size(); j++) {
+                Box b = boxes.get(j);
+                if (a.overlapsFootprint(b) && Math.abs(b.z1 - a.z0) <= EPS) {
+                    errors.add(load.id() + ": crate " + a.ref + " is listed for loading before " + b.ref
+                            + ", which it stands on");
+                }
+            }
         }
         for (int i = 0; i < boxes.size(); i++) {
             Box a = boxes.get(i);
@@ -140,6 +172,11 @@ public final class LoadPlanValidator {
                 errors.add(load.id() + ": crate " + a.ref + " does not stand fully on one crate below");
             }
         }
+    }
+
+    /** The height stacks may reach: the deck, or the door opening when lower (read here, not from the model). */
+    private static double loadHeight(VehicleType type) {
+        return type.doorHeightMm() == null ? type.deckHeightMm() : Math.min(type.deckHeightMm(), type.doorHeightMm());
     }
 
     private static void fail(List<String> errors) {

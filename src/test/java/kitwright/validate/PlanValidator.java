@@ -67,6 +67,7 @@ public final class PlanValidator {
             files.put(LogisticsCsv.PACKING_LISTS,
                     LogisticsCsv.packingLists(result.crates(), result.nesting().plan().bundles()));
             files.put(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(result.loads()));
+            files.put(LogisticsCsv.LOAD_LISTS, LogisticsCsv.loadLists(result.loads(), result.crates()));
         }
         validate(result, files);
     }
@@ -118,6 +119,39 @@ public final class PlanValidator {
         if (files.containsKey(LogisticsCsv.MANIFESTS)) {
             manifests(crates, loads, files.get(LogisticsCsv.MANIFESTS));
         }
+        if (files.containsKey(LogisticsCsv.LOAD_LISTS)) {
+            loadLists(crates, loads, files.get(LogisticsCsv.LOAD_LISTS));
+        }
+    }
+
+    /**
+     * One row per crate per vehicle, in the vehicle's loading order (which {@link LoadPlanValidator} checks can be
+     * loaded): steps 1..n, unloading n..1, outer size and gross mass as in the crate plan.
+     */
+    private static void loadLists(CratePlan crates, LoadPlan loads, String csv) {
+        Map<String, Crate> byId = new HashMap<>();
+        crates.crates().forEach(c -> byId.put(c.id(), c));
+        List<CSVRecord> rows = read(csv, List.of("vehicle", "loading_step", "unloading_step", "crate",
+                "outer_length_mm", "outer_width_mm", "outer_height_mm", "gross_kg"));
+        int k = 0;
+        for (VehicleLoad v : loads.vehicles()) {
+            int n = v.crates().size();
+            for (int i = 0; i < n; i++, k++) {
+                check(k < rows.size(), "load list row for " + v.crates().get(i).ref() + " on " + v.id());
+                CSVRecord row = rows.get(k);
+                Crate c = byId.get(v.crates().get(i).ref());
+                String at = "load list of " + v.id() + ", row " + (i + 1) + ": ";
+                check(row.get("vehicle").equals(v.id()) && row.get("crate").equals(c.id()), at + "vehicle and crate");
+                check(Integer.parseInt(row.get("loading_step")) == i + 1
+                        && Integer.parseInt(row.get("unloading_step")) == n - i, at + "steps");
+                check(Math.abs(Double.parseDouble(row.get("outer_length_mm")) - c.outerLengthMm()) <= 0.5
+                        && Math.abs(Double.parseDouble(row.get("outer_width_mm")) - c.outerWidthMm()) <= 0.5
+                        && Math.abs(Double.parseDouble(row.get("outer_height_mm")) - c.outerHeightMm()) <= 0.5,
+                        at + "outer size");
+                check(Math.abs(Double.parseDouble(row.get("gross_kg")) - c.grossKg()) <= KG, at + "gross mass");
+            }
+        }
+        check(rows.size() == k, "one load list row per crate per vehicle");
     }
 
     /** Cut pieces (mark and length, times the pattern count) against the tubes of all bundles, as multisets. */
@@ -223,7 +257,9 @@ public final class PlanValidator {
         Map<String, Crate> byId = new HashMap<>();
         crates.crates().forEach(c -> byId.put(c.id(), c));
         List<CSVRecord> rows = read(csv, List.of("vehicle", "type", "crates", "crate_ids", "mass_kg", "payload_kg",
-                "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip"));
+                "floor_length_mm", "deck_length_mm", "centre_of_gravity_mm", "cost_per_trip",
+                "lateral_centre_of_gravity_mm", "front_load_kg", "max_front_kg", "rear_load_kg", "max_rear_kg",
+                "front_support"));
         check(rows.size() == loads.vehicles().size(), "one manifest line per vehicle");
         for (int i = 0; i < rows.size(); i++) {
             CSVRecord row = rows.get(i);
@@ -238,6 +274,19 @@ public final class PlanValidator {
             check(Math.abs(Double.parseDouble(row.get("mass_kg")) - mass) <= KG, at + "mass " + row.get("mass_kg")
                     + " kg, its crates weigh " + mass);
             check(mass <= Double.parseDouble(row.get("payload_kg")) + KG, at + "within the payload");
+            check(Math.abs(Double.parseDouble(row.get("lateral_centre_of_gravity_mm"))
+                    - v.lateralCentreOfGravityMm()) <= 0.5, at + "lateral centre");
+            if (v.axleLoadsKg() == null) {
+                check(row.get("front_support").equals(LogisticsCsv.NOT_CHECKED) && row.get("front_load_kg").isEmpty(),
+                        at + "axle loads not checked");
+            } else {
+                double front = Double.parseDouble(row.get("front_load_kg"));
+                double rear = Double.parseDouble(row.get("rear_load_kg"));
+                check(Math.abs(front - v.axleLoadsKg().front()) <= 0.5 && Math.abs(rear - v.axleLoadsKg().rear())
+                        <= 0.5, at + "axle loads");
+                check(front <= Double.parseDouble(row.get("max_front_kg")) + 0.5
+                        && rear <= Double.parseDouble(row.get("max_rear_kg")) + 0.5, at + "axle loads within limits");
+            }
         }
     }
 
