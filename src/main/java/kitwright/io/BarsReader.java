@@ -49,14 +49,19 @@ public final class BarsReader {
 
     /** Reads a bars file, adding problems; returns every row that names a mark and whether every mark was read. */
     public static Rows readRows(Path file, Problems problems) {
+        return readRows(TableSource.of(file), problems);
+    }
+
+    /** Reads bars.csv or the bars sheet of kit.xlsx, adding problems, as {@link #readRows(Path, Problems)}. */
+    public static Rows readRows(TableSource source, Problems problems) {
         List<Sourced<BarLine>> bars = new ArrayList<>();
-        CsvTable table = CsvTable.read(file, COLUMNS, "the kit's bars", problems).orElse(null);
+        CsvTable table = CsvTable.read(source, COLUMNS, "the kit's bars", problems).orElse(null);
         if (table == null) {
             return new Rows(bars, false);
         }
         boolean everyMarkRead = table.everyRowRead();
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no bars under the header (expected one row per mark)");
+            problems.add(table.belowHeader("no bars under the header (expected one row per mark)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         Map<String, Sourced<String>> byCase = new HashMap<>(); // marks in lower case: A1 and a1 read alike
@@ -80,14 +85,14 @@ public final class BarsReader {
             }
             Integer earlier = firstLine.putIfAbsent(mark, row.line());
             if (earlier != null) {
-                row.problem("mark", "mark " + mark + " is already on line " + earlier
+                row.problem("mark", "mark " + mark + " is already on " + row.at(earlier)
                         + " (expected each mark on one row only)");
                 continue;
             }
             Sourced<String> alike = byCase.putIfAbsent(mark.toLowerCase(Locale.ROOT), row.sourced(mark));
             if (alike != null) {
-                row.problem("mark", "mark " + mark + " differs from mark " + alike.value() + " on line "
-                        + alike.line() + " only in letter case, which a saw sheet or label does not tell apart"
+                row.problem("mark", "mark " + mark + " differs from mark " + alike.value() + " on "
+                        + row.at(alike.line()) + " only in letter case, which a saw sheet or label does not tell apart"
                         + " (expected marks that differ in more than letter case)");
                 continue;
             }

@@ -39,7 +39,7 @@ public final class CrateCatalogReader {
             return crates;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no crates under the header (expected one row per crate type)");
+            problems.add(table.belowHeader("no crates under the header (expected one row per crate type)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -79,7 +79,7 @@ public final class CrateCatalogReader {
             if (name != null) {
                 Integer earlier = firstLine.putIfAbsent(name, row.line());
                 if (earlier != null) {
-                    row.problem("crate", "crate " + name + " is already on line " + earlier
+                    row.problem("crate", "crate " + name + " is already on " + row.at(earlier)
                             + " (expected each crate type on one row only)");
                 }
             }

@@ -17,6 +17,7 @@ public final class CsvRow {
     private static final Pattern DECIMAL_COMMA = Pattern.compile("[+-]?\\d+,\\d+");
 
     private final Path file;
+    private final String sheet;
     private final int line;
     private final Map<String, String> values;
     private final Problems problems;
@@ -30,7 +31,13 @@ public final class CsvRow {
 
     /** A row whose numbers are written with a decimal comma ({@code 1200,5}) when {@code decimalComma}. */
     CsvRow(Path file, int line, Map<String, String> values, Problems problems, boolean decimalComma) {
+        this(file, null, line, values, problems, decimalComma);
+    }
+
+    /** A row of a sheet of a workbook ({@code sheet} null for a CSV file), {@code line} its row number. */
+    CsvRow(Path file, String sheet, int line, Map<String, String> values, Problems problems, boolean decimalComma) {
         this.file = file;
+        this.sheet = sheet;
         this.line = line;
         this.values = Map.copyOf(values);
         this.problems = problems;
@@ -46,9 +53,19 @@ public final class CsvRow {
         return file;
     }
 
-    /** The line the row starts on; the header is line 1. */
+    /** The sheet of the workbook the row is on, or null for a CSV file. */
+    public String sheet() {
+        return sheet;
+    }
+
+    /** The line the row starts on; the header is line 1 (in a sheet, the spreadsheet's row number). */
     public int line() {
         return line;
+    }
+
+    /** Another line of the same table as messages name it: "line 3" in a CSV file, "row 3" in a sheet. */
+    public String at(int otherLine) {
+        return (sheet == null ? "line " : "row ") + otherLine;
     }
 
     /** True when no value of this row has been found wrong so far. */
@@ -59,12 +76,12 @@ public final class CsvRow {
     /** Reports a problem on this row. */
     public void problem(String column, String message) {
         problemCount++;
-        problems.add(file, line, column, message);
+        problems.add(file, sheet, line, column, message);
     }
 
     /** A row-located value, for checks that run after reading. */
     public <T> Sourced<T> sourced(T value) {
-        return new Sourced<>(value, file, line);
+        return new Sourced<>(value, file, sheet, line);
     }
 
     /** The trimmed text of a column, empty when blank or when the file has no such column. */

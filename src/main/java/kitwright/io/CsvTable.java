@@ -25,13 +25,14 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
 /**
- * One CSV file read whole and checked against its known columns: UTF-8 (a byte-order mark is accepted), header on
- * line 1 with names matched after trimming, in any letter case. Files as spreadsheets save them in either
+ * One CSV file, or one sheet of an .xlsx workbook ({@link WorkbookSheet}), read whole and checked against its
+ * known columns: UTF-8 (a byte-order mark is accepted), header on line 1 with names matched after trimming, in any
+ * letter case. Files as spreadsheets save them in either
  * convention read alike: comma-separated with decimal points, or, as European spreadsheet programs save CSV,
- * semicolon-separated with decimal commas ({@link CsvDialect} tells which from the file; a file that mixes them is
- * refused with the line that shows it). Rows come with the line they start
- * on (the header is line 1); blank rows are skipped. Every problem goes to a {@link Problems}; a file whose header
- * cannot be used yields no table.
+ * semicolon-separated with decimal commas ({@link CsvDialect} tells which from the file, unless kit.json states it;
+ * a file that mixes them is refused with the line that shows it). Rows come with the line they start
+ * on (the header is line 1; in a sheet, the spreadsheet's row number); blank rows are skipped. Every problem goes
+ * to a {@link Problems}; a file whose header cannot be used yields no table.
  */
 public final class CsvTable {
     private static final CSVFormat FORMAT = CSVFormat.RFC4180.builder()
@@ -39,18 +40,39 @@ public final class CsvTable {
 
     private static final Pattern START_LINE = Pattern.compile("\\(startline (\\d+)\\)");
 
+    /** One row as text: the line (or row of a sheet) it starts on, its values, false when a cell was refused. */
+    record Line(int line, List<String> values, boolean readable) {
+        Line {
+            values = List.copyOf(values);
+        }
+    }
+
     private final Path file;
+    private final String sheet;
+    private final int headerLine;
     private final List<CsvRow> rows;
     private final int dataRows;
 
-    private CsvTable(Path file, List<CsvRow> rows, int dataRows) {
+    private CsvTable(Path file, String sheet, int headerLine, List<CsvRow> rows, int dataRows) {
         this.file = file;
+        this.sheet = sheet;
+        this.headerLine = headerLine;
         this.rows = List.copyOf(rows);
         this.dataRows = dataRows;
     }
 
     public Path file() {
         return file;
+    }
+
+    /** The sheet of a workbook the table was read from, as the workbook spells it; null for a CSV file. */
+    public String sheet() {
+        return sheet;
+    }
+
+    /** A problem with the table as a whole, placed on the line under the header (where rows should be). */
+    public Problem belowHeader(String message) {
+        return new Problem(file, sheet, headerLine + 1, "", message);
     }
 
     /** The rows that have one value per column (others are reported and left out). */
@@ -74,6 +96,26 @@ public final class CsvTable {
      * @param what what the file holds, for messages ("the kit's bars")
      */
     public static Optional<CsvTable> read(Path file, CsvColumns columns, String what, Problems problems) {
+        return read(TableSource.of(file), columns, what, problems);
+    }
+
+    /**
+     * Reads a CSV file or a sheet of a workbook, or reports why it cannot be read.
+     *
+     * @param what what the table holds, for messages ("the kit's bars")
+     */
+    public static Optional<CsvTable> read(TableSource source, CsvColumns columns, String what, Problems problems) {
+        Path file = source.file();
+        if (source.workbook()) {
+            return WorkbookSheet.read(file, source.sheet(), what, columns, problems).flatMap(sheet -> {
+                if (sheet.lines().isEmpty()) {
+                    problems.add(file, sheet.sheet(), 1, "", "the sheet is empty (expected a header row: "
+                            + columns.header().replace(',', ' ') + ", one name per cell)");
+                    return Optional.empty();
+                }
+                return table(file, sheet.sheet(), sheet.lines(), columns, false, problems);
+            });
+        }
         byte[] bytes;
         try {
             bytes = InputBytes.read(file);
@@ -101,7 +143,7 @@ public final class CsvTable {
             problems.add(file, 1, "", "the file is empty (expected a header line: " + columns.header() + ")");
             return Optional.empty();
         }
-        return parse(file, text.get(), columns, problems);
+        return parse(file, text.get(), columns, source.convention(), problems);
     }
 
     private static Optional<String> decode(Path file, byte[] bytes, Problems problems) {
@@ -119,9 +161,10 @@ public final class CsvTable {
         return Optional.of(text.startsWith("\uFEFF") ? text.substring(1) : text);
     }
 
-    private static Optional<CsvTable> parse(Path file, String text, CsvColumns columns, Problems problems) {
+    private static Optional<CsvTable> parse(Path file, String text, CsvColumns columns, CsvConvention stated,
+                                            Problems problems) {
         int[] lineStarts = lineStarts(text);
-        Optional<Character> separator = CsvDialect.separator(file, text, columns, problems);
+        Optional<Character> separator = CsvDialect.separator(file, text, columns, stated, problems);
         if (separator.isEmpty()) {
             return Optional.empty();
         }
@@ -136,28 +179,40 @@ public final class CsvTable {
                     + describe(e) + " (expected comma-separated values; close every opening quote)");
             return Optional.empty();
         }
-        Optional<Boolean> decimalComma = separator.get() == ';' ? CsvDialect.decimalComma(file,
-                records.subList(1, records.size()), r -> lineOf(lineStarts, start(text, r)), problems)
-                : Optional.of(false);
+        List<Line> lines = records.stream().map(r -> new Line(lineOf(lineStarts, start(text, r)), r.toList(), true))
+                .toList();
+        Optional<Boolean> decimalComma = CsvDialect.decimalComma(file, separator.get(), lines, stated, problems);
         if (decimalComma.isEmpty()) {
             return Optional.empty();
         }
-        CSVRecord headerRecord = records.get(0);
-        int headerLine = lineOf(lineStarts, start(text, headerRecord));
-        Optional<List<String>> header = header(file, headerLine, headerRecord, columns, problems);
+        return table(file, null, lines, columns, decimalComma.get(), problems);
+    }
+
+    /** The table of a file's (or sheet's) lines: the first is the header, blank ones are skipped. */
+    private static Optional<CsvTable> table(Path file, String sheet, List<Line> lines, CsvColumns columns,
+                                            boolean decimalComma, Problems problems) {
+        Line headerRecord = lines.get(0);
+        int headerLine = headerRecord.line();
+        if (!headerRecord.readable()) {
+            return Optional.empty(); // its cell was reported
+        }
+        Optional<List<String>> header = header(file, sheet, headerLine, headerRecord.values(), columns, problems);
         if (header.isEmpty()) {
             return Optional.empty();
         }
         List<CsvRow> rows = new ArrayList<>();
         int dataRows = 0;
-        for (CSVRecord record : records.subList(1, records.size())) {
-            int line = lineOf(lineStarts, start(text, record));
-            if (record.stream().allMatch(String::isBlank)) {
+        for (Line record : lines.subList(1, lines.size())) {
+            int line = record.line();
+            if (record.values().stream().allMatch(String::isBlank) && record.readable()) {
                 continue;
             }
             dataRows++;
-            if (record.size() > header.get().size()) {
-                problems.add(file, line, "", "the row has " + record.size() + " values but the header has "
+            if (!record.readable()) {
+                continue; // a cell of the sheet was refused and reported
+            }
+            if (sheet == null && record.values().size() > header.get().size()) {
+                problems.add(file, line, "", "the row has " + record.values().size() + " values but the header has "
                         + header.get().size() + " columns (expected one value per column; quote a value that"
                         + " contains a comma)");
                 continue;
@@ -165,27 +220,27 @@ public final class CsvTable {
             // A short row reads its missing trailing values as blank, as hand-written files often leave them out.
             Map<String, String> values = new LinkedHashMap<>();
             boolean unnamed = false;
-            for (int i = 0; i < record.size(); i++) {
-                String name = header.get().get(i);
-                String value = record.get(i).trim();
+            for (int i = 0; i < record.values().size(); i++) {
+                String name = i < header.get().size() ? header.get().get(i) : "";
+                String value = record.values().get(i).trim();
                 if (name.isEmpty() && !value.isEmpty() && !unnamed) {
                     unnamed = true;
-                    problems.add(file, line, "", "the value '" + value + "' stands in a column without a name"
-                            + " (expected a header name for every column that holds values)");
+                    problems.add(file, sheet, line, "", "the value '" + value + "' stands in a column without a"
+                            + " name (expected a header name for every column that holds values)");
                 }
                 values.put(name, value);
             }
             if (unnamed) {
                 continue;
             }
-            rows.add(new CsvRow(file, line, values, problems, decimalComma.get()));
+            rows.add(new CsvRow(file, sheet, line, values, problems, decimalComma));
         }
-        return Optional.of(new CsvTable(file, rows, dataRows));
+        return Optional.of(new CsvTable(file, sheet, headerLine, rows, dataRows));
     }
 
     /** Checks the header: separator, duplicates, unknown (with the nearest known name) and missing columns. */
-    private static Optional<List<String>> header(Path file, int line, CSVRecord record, CsvColumns columns,
-                                                 Problems problems) {
+    private static Optional<List<String>> header(Path file, String sheet, int line, List<String> record,
+                                                 CsvColumns columns, Problems problems) {
         // Header names in any letter case stand for the known column of that name ("Length_MM" is length_mm).
         List<String> names = record.stream().map(String::trim).map(columns::canonical).toList();
         int before = problems.count();
@@ -196,19 +251,19 @@ public final class CsvTable {
                 continue; // spreadsheets add unnamed empty columns; values under them are reported per row
             }
             if (!seen.add(name)) {
-                problems.add(file, line, name, "the column appears twice (expected each column once)");
+                problems.add(file, sheet, line, name, "the column appears twice (expected each column once)");
             } else if (!columns.knows(name)) {
                 List<String> unused = columns.all().stream().filter(c -> !names.contains(c)).toList();
                 Optional<String> near = NearestName.of(name, unused);
                 near.ifPresent(suggested::add);
                 String hint = near.map(n -> "did you mean " + n + "? ").orElse("");
-                problems.add(file, line, name, "unknown column (" + hint
+                problems.add(file, sheet, line, name, "unknown column (" + hint
                         + "known columns: " + columns.describe() + ")");
             }
         }
         for (String required : columns.required()) {
             if (!names.contains(required) && !suggested.contains(required)) {
-                problems.add(file, line, required, "the column is missing (expected the header "
+                problems.add(file, sheet, line, required, "the column is missing (expected the header "
                         + columns.header() + ")");
             }
         }

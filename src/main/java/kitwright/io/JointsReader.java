@@ -35,13 +35,18 @@ public final class JointsReader {
      * joint wider than the box's smallest side, or heavier than its mass limit, can travel in no box.
      */
     public static List<Joint> read(Path file, JointBox box, Problems problems) {
+        return read(TableSource.of(file), box, problems);
+    }
+
+    /** Reads joints.csv or the joints sheet of kit.xlsx, adding problems, as above. */
+    public static List<Joint> read(TableSource source, JointBox box, Problems problems) {
         List<Joint> joints = new ArrayList<>();
-        CsvTable table = CsvTable.read(file, COLUMNS, "the kit's joints", problems).orElse(null);
+        CsvTable table = CsvTable.read(source, COLUMNS, "the kit's joints", problems).orElse(null);
         if (table == null) {
             return joints;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no joints under the header (expected one row per joint type)");
+            problems.add(table.belowHeader("no joints under the header (expected one row per joint type)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -53,7 +58,7 @@ public final class JointsReader {
             if (mark != null) {
                 Integer earlier = firstLine.putIfAbsent(mark, row.line());
                 if (earlier != null) {
-                    row.problem("mark", "joint mark " + mark + " is already on line " + earlier
+                    row.problem("mark", "joint mark " + mark + " is already on " + row.at(earlier)
                             + " (expected each joint mark on one row only)");
                 }
             }

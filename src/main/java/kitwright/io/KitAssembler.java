@@ -34,7 +34,12 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, List<Sourced<BarLine>> lines, List<Sourced<StructureCount>> structures,
                            TubeCatalog catalog, Problems problems) {
-        return marks(settings, new BarsReader.Rows(lines, true), structures, true, Set.of(), catalog, problems);
+        return marks(settings, new BarsReader.Rows(lines, true), structures, true, Set.of(), catalog, problems,
+                new TableNames(KitReader.BARS, KitReader.STRUCTURES, KitReader.JOINTS));
+    }
+
+    /** How messages name the bars, structures and joints tables: the CSVs, or sheets of kit.xlsx. */
+    record TableNames(String bars, String structures, String joints) {
     }
 
     /**
@@ -47,9 +52,9 @@ final class KitAssembler {
      */
     static List<Bar> marks(KitSettings settings, BarsReader.Rows rows, List<Sourced<StructureCount>> structures,
                            boolean structuresReadable, Set<String> jointMarks, TubeCatalog catalog,
-                           Problems problems) {
+                           Problems problems, TableNames names) {
         List<Sourced<BarLine>> lines = rows.lines();
-        Map<String, Need> needs = needs(settings, rows, structures, jointMarks, problems);
+        Map<String, Need> needs = needs(settings, rows, structures, jointMarks, problems, names);
         List<Bar> bars = new ArrayList<>();
         for (Sourced<BarLine> sourced : lines) {
             BarLine line = sourced.value();
@@ -69,13 +74,14 @@ final class KitAssembler {
             if (quantity == null && need != null) {
                 quantity = need.count;
             } else if (quantity == null && structuresReadable) {
-                String why = structures.isEmpty() ? "a whole number of bars; without structures.csv the quantity"
-                        + " must be given" : "a whole number of bars; structures.csv does not use mark " + line.mark();
+                String why = structures.isEmpty() ? "a whole number of bars; without " + names.structures()
+                        + " the quantity must be given" : "a whole number of bars; " + names.structures()
+                        + " does not use mark " + line.mark();
                 problems.add(sourced.problem("quantity", "the value is blank (expected " + why + ")"));
             } else if (need != null && quantity < need.count) {
                 problems.add(sourced.problem("quantity", "mark " + line.mark() + " has " + quantity + " bars but "
                         + need.who + " " + need.count + " (expected at least " + need.count
-                        + ", or a blank quantity to take it from structures.csv)"));
+                        + ", or a blank quantity to take it from " + names.structures() + ")"));
             }
             if (problems.count() == before && quantity != null) {
                 int required = structures.isEmpty() ? quantity : need == null ? 0 : need.count;
@@ -94,7 +100,7 @@ final class KitAssembler {
      */
     private static Map<String, Need> needs(KitSettings settings, BarsReader.Rows rows,
                                            List<Sourced<StructureCount>> structures, Set<String> jointMarks,
-                                           Problems problems) {
+                                           Problems problems, TableNames names) {
         Set<String> marks = new LinkedHashSet<>();
         rows.lines().forEach(l -> marks.add(l.value().mark()));
         Map<String, Need> needs = new LinkedHashMap<>();
@@ -109,9 +115,9 @@ final class KitAssembler {
             if (!marks.contains(count.mark())) {
                 String hint = NearestName.of(count.mark(), marks).map(n -> "did you mean " + n + "? ").orElse("");
                 String known = marks.size() <= 30 ? ": " + String.join(", ", marks) : "";
-                String joints = jointMarks.isEmpty() ? "" : " or joints.csv";
-                problems.add(row.problem("mark", "mark " + count.mark() + " is not in bars.csv" + joints + " ("
-                        + hint + "expected a mark of bars.csv" + known + joints + ")"));
+                String joints = jointMarks.isEmpty() ? "" : " or " + names.joints();
+                problems.add(row.problem("mark", "mark " + count.mark() + " is not in " + names.bars() + joints
+                        + " (" + hint + "expected a mark of " + names.bars() + known + joints + ")"));
                 continue;
             }
             Need need = needs.get(count.mark());

@@ -11,9 +11,13 @@ import kitwright.model.KitSettings;
  * @param materials      the materials file kit.json names, or null
  * @param crateCatalog   the crate catalog kit.json names, or null
  * @param vehicleCatalog the vehicle catalog kit.json names, or null
+ * @param csv            the delimiter and decimal sign kit.json states for bars.csv, structures.csv and joints.csv
  */
 public record KitJson(KitSettings settings, Path stockCatalog, Path materials, Path crateCatalog,
-                      Path vehicleCatalog) {
+                      Path vehicleCatalog, CsvConvention csv) {
+    public KitJson {
+        csv = csv == null ? CsvConvention.DETECTED : csv;
+    }
 
     /** The materials file: the named one, or {@code materials.csv} beside the tube catalog. */
     public Path materialsFile() {

@@ -33,10 +33,11 @@ public final class KitJsonReader {
     public static final List<String> KEYS = List.of("name", "description", "stockCatalog", "materials",
             "crateCatalog", "vehicleCatalog", "kerfMm", "trimMm", "minRemnantMm", "timeLimitSeconds",
             "structuresStandTogether", "endDeductionMm", "nestTolerance", "nestClearanceMm", "nestEndAllowanceMm",
-            "maxBundleMassKg", "jointBox", "spares", "miscutAllowance");
+            "maxBundleMassKg", "jointBox", "spares", "miscutAllowance", "csv");
     static final List<String> JOINT_BOX_KEYS = List.of("lengthMm", "widthMm", "heightMm", "maxMassKg");
     static final List<String> SPARES_KEYS = List.of("lossRatePerCycle", "cycles", "serviceLevel");
     static final List<String> MISCUT_ALLOWANCE_KEYS = List.of("piecesPerMark", "percent");
+    static final List<String> CSV_KEYS = List.of("delimiter", "decimalSign");
 
     private static final ObjectMapper MAPPER = JsonMapper.builder()
             .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
@@ -49,7 +50,7 @@ public final class KitJsonReader {
     /** The settings of a kit folder without kit.json: all defaults, named after the folder. */
     public static KitJson defaults(Path kitDir) {
         return new KitJson(KitSettings.defaults(folderName(kitDir)), kitDir.resolve("stock.csv").normalize(),
-                null, null, null);
+                null, null, null, CsvConvention.DETECTED);
     }
 
     /** Reads a kit.json on its own; throws with every problem found. */
@@ -147,7 +148,7 @@ public final class KitJsonReader {
         KitSettings settings = new KitSettings(name, description, kerf, trim, minRemnant, timeLimit, together,
                 endDeduction, tolerance, clearance, endAllowance, maxBundle, jointBox, spares,
                 miscutAllowance(json, root));
-        return new KitJson(settings, stock, materials, crates, vehicles);
+        return new KitJson(settings, stock, materials, crates, vehicles, csv(json, root));
     }
 
     private static JointBox jointBox(KitJsonValues json, JsonNode root) {
@@ -201,6 +202,41 @@ public final class KitJsonReader {
         double percent = json.number(allowance, prefix, "percent", 0, true, 100,
                 "a share of each mark's quantity in percent, from 0 to 100").orElse(0.0);
         return new MiscutAllowance(pieces, percent);
+    }
+
+    /**
+     * The delimiter and decimal sign stated for the kit's own CSV files; a wrong part is reported and detected.
+     * A decimal comma in a file separated by commas would need every number quoted, which spreadsheets never
+     * save, so that pair is refused.
+     */
+    private static CsvConvention csv(KitJsonValues json, JsonNode root) {
+        JsonNode csv = json.object(root, "csv", "an object {delimiter, decimalSign}, e.g. {\"delimiter\": \";\","
+                + " \"decimalSign\": \",\"}");
+        if (csv == null) {
+            return CsvConvention.DETECTED;
+        }
+        String prefix = "csv.";
+        json.unknownKeys(csv, prefix, CSV_KEYS);
+        Character delimiter = sign(json, csv, "delimiter", ",;", "\",\" or \";\", the character between columns");
+        Character decimal = sign(json, csv, "decimalSign", ".,", "\".\" or \",\", the sign before decimals");
+        if (delimiter != null && decimal != null && delimiter == ',' && decimal == ',') {
+            json.report(prefix, "decimalSign", "a decimal comma in a file separated by ',' (expected \".\" with the"
+                    + " delimiter \",\", or the delimiter \";\" with \",\", as spreadsheets save CSV)");
+            decimal = null;
+        }
+        return new CsvConvention(delimiter, decimal);
+    }
+
+    private static Character sign(KitJsonValues json, JsonNode csv, String key, String allowed, String expected) {
+        Optional<String> text = json.text(csv, "csv.", key, expected);
+        if (text.isEmpty()) {
+            return null;
+        }
+        if (text.get().length() != 1 || allowed.indexOf(text.get().charAt(0)) < 0) {
+            json.report("csv.", key, "'" + text.get() + "' is not one of them (expected " + expected + ")");
+            return null;
+        }
+        return text.get().charAt(0);
     }
 
     /** Records the line of every key, as a JSON pointer (e.g. {@code /jointBox/lengthMm}). */

@@ -24,8 +24,10 @@ import kitwright.model.VehicleType;
 
 /**
  * Reads and validates a whole kit: {@code kit.json} (optional), {@code bars.csv}, the optional
- * {@code structures.csv} and {@code joints.csv}, and the catalogs kit.json names or that lie beside the tube
- * catalog. Every file is read and every problem collected before anything is thrown, so one run lists all that
+ * {@code structures.csv} and {@code joints.csv} (or, in their place, the sheets of {@code kit.xlsx}: see
+ * {@link KitTables}), and the catalogs kit.json names or that lie beside the tube catalog (CSV files, or
+ * {@code .xlsx} workbooks read from their first sheet). Every file is read and every problem collected before
+ * anything is thrown, so one run lists all that
  * must be fixed.
  */
 public final class KitReader {
@@ -33,6 +35,8 @@ public final class KitReader {
     public static final String BARS = "bars.csv";
     public static final String STRUCTURES = "structures.csv";
     public static final String JOINTS = "joints.csv";
+    /** The kit's tables as one workbook, with the sheets bars, structures and joints. */
+    public static final String WORKBOOK = "kit.xlsx";
 
     private KitReader() {
     }
@@ -70,19 +74,22 @@ public final class KitReader {
         if (kitJson.vehicleCatalog() != null || present(kitJson.vehicleCatalogFile())) {
             vehicles = VehicleCatalogReader.read(kitJson.vehicleCatalogFile(), problems);
         }
-        BarsReader.Rows lines = BarsReader.readRows(kitDir.resolve(BARS), problems);
-        Path structuresFile = kitDir.resolve(STRUCTURES);
+        KitTables tables = KitTables.of(kitDir, kitJson.csv(), problems).orElse(null);
+        if (tables == null) {
+            problems.throwIfAny(); // without knowing where the bars are, the kit cannot be judged
+        }
+        BarsReader.Rows lines = BarsReader.readRows(tables.bars(), problems);
         int beforeStructures = problems.count();
-        List<Sourced<StructureCount>> structures = present(structuresFile)
-                ? StructuresReader.read(structuresFile, problems) : List.of();
+        List<Sourced<StructureCount>> structures = tables.structures() != null
+                ? StructuresReader.read(tables.structures(), problems) : List.of();
         boolean structuresReadable = problems.count() == beforeStructures;
-        Path jointsFile = kitDir.resolve(JOINTS);
-        List<Joint> joints = present(jointsFile)
-                ? JointsReader.read(jointsFile, settings.jointBox(), problems) : List.of();
+        List<Joint> joints = tables.joints() != null
+                ? JointsReader.read(tables.joints(), settings.jointBox(), problems) : List.of();
         Set<String> jointMarks = new LinkedHashSet<>();
         joints.forEach(j -> jointMarks.add(j.mark()));
         List<Bar> bars = KitAssembler.marks(settings, lines, structures, structuresReadable, jointMarks, catalog,
-                problems);
+                problems, new KitAssembler.TableNames(tables.barsName(), tables.structuresName(),
+                        tables.jointsName()));
         kerfProblem(settings.kerfMm(), catalog).ifPresent(message -> problems.add(kitJsonFile,
                 lineOf(kitJsonFile, "\"kerfMm\""), "kerfMm", message));
         problems.throwIfAny();
@@ -90,7 +97,8 @@ public final class KitReader {
                 materials == null ? Map.of() : materials, crates, vehicles, new InputFiles(
                         materials == null ? null : kitJson.materialsFile(),
                         crates.isEmpty() ? null : kitJson.crateCatalogFile(),
-                        vehicles.isEmpty() ? null : kitJson.vehicleCatalogFile()));
+                        vehicles.isEmpty() ? null : kitJson.vehicleCatalogFile(), tables.workbook(),
+                        tables.sheets()));
     }
 
     /**

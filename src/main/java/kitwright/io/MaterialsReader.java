@@ -34,7 +34,7 @@ public final class MaterialsReader {
             return materials;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no materials under the header (expected one row per material)");
+            problems.add(table.belowHeader("no materials under the header (expected one row per material)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -46,7 +46,7 @@ public final class MaterialsReader {
             if (name != null) {
                 Integer earlier = firstLine.putIfAbsent(name, row.line());
                 if (earlier != null) {
-                    row.problem("material", "material " + name + " is already on line " + earlier
+                    row.problem("material", "material " + name + " is already on " + row.at(earlier)
                             + " (expected each material on one row only)");
                 }
             }

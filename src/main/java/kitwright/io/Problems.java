@@ -22,6 +22,11 @@ public final class Problems {
         found.add(new Problem(file, line, column, message));
     }
 
+    /** A problem on a row of a sheet of a workbook ({@code sheet} null for a text file). */
+    public void add(Path file, String sheet, int line, String column, String message) {
+        found.add(new Problem(file, sheet, line, column, message));
+    }
+
     public int count() {
         return found.size();
     }
@@ -35,13 +40,18 @@ public final class Problems {
      * that a clerk can work down each file once.
      */
     public List<Problem> list() {
-        Map<Path, Integer> fileOrder = new HashMap<>();
+        Map<List<Object>, Integer> fileOrder = new HashMap<>();
         for (Problem problem : found) {
-            fileOrder.putIfAbsent(problem.file(), fileOrder.size());
+            fileOrder.putIfAbsent(place(problem), fileOrder.size());
         }
         List<Problem> sorted = new ArrayList<>(found);
-        sorted.sort(Comparator.comparing((Problem p) -> fileOrder.get(p.file())).thenComparingInt(Problem::line));
+        sorted.sort(Comparator.comparing((Problem p) -> fileOrder.get(place(p))).thenComparingInt(Problem::line));
         return List.copyOf(sorted);
+    }
+
+    /** The file and sheet of a problem: the sheets of one workbook are grouped like files. */
+    private static List<Object> place(Problem problem) {
+        return java.util.Arrays.asList(problem.file(), problem.sheet());
     }
 
     /** Throws one exception carrying every problem, when there is any. */

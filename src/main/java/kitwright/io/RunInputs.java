@@ -26,7 +26,8 @@ public record RunInputs(List<Path> paths) {
     /** A kit folder, the files in it kitwright reads, and the catalogs its kit.json names or defaults to. */
     public static RunInputs ofKit(Path kitDir) {
         List<Path> paths = new ArrayList<>(List.of(kitDir, kitDir.resolve(KitReader.KIT_JSON),
-                kitDir.resolve(KitReader.BARS), kitDir.resolve(KitReader.STRUCTURES), kitDir.resolve(KitReader.JOINTS)));
+                kitDir.resolve(KitReader.BARS), kitDir.resolve(KitReader.STRUCTURES), kitDir.resolve(KitReader.JOINTS),
+                kitDir.resolve(KitReader.WORKBOOK)));
         KitJson json = KitJsonReader.defaults(kitDir);
         Path kitJson = kitDir.resolve(KitReader.KIT_JSON);
         if (Files.exists(kitJson)) {

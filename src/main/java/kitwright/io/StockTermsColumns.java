@@ -85,7 +85,7 @@ final class StockTermsColumns {
             return true;
         }
         row.problem("currency", section + " is priced in " + shown(terms.currency()) + " here but in "
-                + shown(first) + " on line " + currencyLine.get(section) + " (expected one currency for every row"
+                + shown(first) + " on " + row.at(currencyLine.get(section)) + " (expected one currency for every row"
                 + " of a section: the plan adds the prices of a section's stock lengths, mill and rack)");
         return false;
     }

@@ -27,13 +27,18 @@ public final class StructuresReader {
 
     /** Reads a structures file, adding problems; returns the rows that could be read. */
     public static List<Sourced<StructureCount>> read(Path file, Problems problems) {
+        return read(TableSource.of(file), problems);
+    }
+
+    /** Reads structures.csv or the structures sheet of kit.xlsx, adding problems. */
+    public static List<Sourced<StructureCount>> read(TableSource source, Problems problems) {
         List<Sourced<StructureCount>> counts = new ArrayList<>();
-        CsvTable table = CsvTable.read(file, COLUMNS, "the bars each structure uses", problems).orElse(null);
+        CsvTable table = CsvTable.read(source, COLUMNS, "the bars each structure uses", problems).orElse(null);
         if (table == null) {
             return counts;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no rows under the header (expected one row per structure and mark)");
+            problems.add(table.belowHeader("no rows under the header (expected one row per structure and mark)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -49,8 +54,8 @@ public final class StructuresReader {
             }
             Integer earlier = firstLine.putIfAbsent(structure + "\u0000" + mark, row.line());
             if (earlier != null) {
-                row.problem("mark", "structure " + structure + " already lists mark " + mark + " on line "
-                        + earlier + " (expected one row per structure and mark)");
+                row.problem("mark", "structure " + structure + " already lists mark " + mark + " on "
+                        + row.at(earlier) + " (expected one row per structure and mark)");
                 continue;
             }
             counts.add(row.sourced(new StructureCount(structure, mark, count)));

@@ -54,7 +54,8 @@ public final class TubeCatalogReader {
             return Optional.empty();
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no stock under the header (expected one row per section and stock length)");
+            problems.add(table.belowHeader("no stock under the header (expected one row per section and stock"
+                    + " length)"));
         }
         Map<String, Section> sections = new LinkedHashMap<>();
         Map<String, Integer> sectionLines = new HashMap<>();
@@ -96,7 +97,7 @@ public final class TubeCatalogReader {
             Integer earlier = stockLines.putIfAbsent(key, row.line());
             if (earlier != null) {
                 row.problem("length_mm", section.name() + " " + Figures.plain(length) + " mm " + origin.code()
-                        + " is already on line " + earlier + " (expected one row per section, stock length and"
+                        + " is already on " + row.at(earlier) + " (expected one row per section, stock length and"
                         + " origin; add up the available pieces instead)");
                 continue;
             }
@@ -174,7 +175,7 @@ public final class TubeCatalogReader {
         }
         for (String column : differ) {
             row.problem(column, first.name() + " has " + column + " '" + row.text(column) + "' here but '"
-                    + valueOf(first, column) + "' on line " + firstLine + " (expected the same material, sizes"
+                    + valueOf(first, column) + "' on " + row.at(firstLine) + " (expected the same material, sizes"
                     + " and tolerances on every row of a section)");
         }
         return differ.isEmpty();

@@ -45,7 +45,7 @@ public final class VehicleCatalogReader {
             return vehicles;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no vehicles under the header (expected one row per vehicle type)");
+            problems.add(table.belowHeader("no vehicles under the header (expected one row per vehicle type)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -59,7 +59,7 @@ public final class VehicleCatalogReader {
             if (name != null) {
                 Integer earlier = firstLine.putIfAbsent(name, row.line());
                 if (earlier != null) {
-                    row.problem("vehicle", "vehicle " + name + " is already on line " + earlier
+                    row.problem("vehicle", "vehicle " + name + " is already on " + row.at(earlier)
                             + " (expected each vehicle type on one row only)");
                 }
             }

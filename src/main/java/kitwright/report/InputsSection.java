@@ -47,6 +47,10 @@ final class InputsSection {
         if (kit.dir() != null) {
             settings.add(new Setting("Kit folder", folderName(kit.dir())));
         }
+        if (kit.files().workbook() != null) {
+            settings.add(new Setting("Kit tables", file(kit.dir(), kit.files().workbook()) + ", sheets "
+                    + String.join(", ", kit.files().sheets())));
+        }
         settings.add(new Setting("kitwright", KitwrightVersion.current()));
         settings.add(new Setting("Tube catalog", file(kit.dir(), kit.catalog().file())));
         settings.add(new Setting("Materials catalog", catalog(kit.dir(), kit.files().materials(),
