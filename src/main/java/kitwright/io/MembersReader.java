@@ -37,7 +37,7 @@ public final class MembersReader {
             return members;
         }
         if (table.isEmpty()) {
-            problems.add(file, 2, "", "no members under the header (expected one row per member of a structure)");
+            problems.add(table.belowHeader("no members under the header (expected one row per member of a structure)"));
         }
         Map<String, Integer> firstLine = new HashMap<>();
         for (CsvRow row : table.rows()) {
@@ -63,8 +63,8 @@ public final class MembersReader {
             if (structure != null && member != null) {
                 Integer earlier = firstLine.putIfAbsent(structure + "\u0000" + member, row.line());
                 if (earlier != null) {
-                    row.problem("member", "structure " + structure + " already has member " + member + " on line "
-                            + earlier + " (expected each member id once within its structure)");
+                    row.problem("member", "structure " + structure + " already has member " + member + " on "
+                            + row.at(earlier) + " (expected each member id once within its structure)");
                 }
             }
             if (row.clean() && structure != null && member != null && section != null && length != null) {
