@@ -1,6 +1,7 @@
 package kitwright.io;
 
 import java.nio.file.Path;
+import java.util.List;
 import kitwright.model.KitSettings;
 
 /**
@@ -12,11 +13,20 @@ import kitwright.model.KitSettings;
  * @param crateCatalog   the crate catalog kit.json names, or null
  * @param vehicleCatalog the vehicle catalog kit.json names, or null
  * @param csv            the delimiter and decimal sign kit.json states for bars.csv, structures.csv and joints.csv
+ * @param tour           the names of {@code tour} with the kit.json line of each (the names are also in
+ *                       {@code settings.tour()}), so that a name structures.csv lacks is reported on its line
  */
 public record KitJson(KitSettings settings, Path stockCatalog, Path materials, Path crateCatalog,
-                      Path vehicleCatalog, CsvConvention csv) {
+                      Path vehicleCatalog, CsvConvention csv, List<Sourced<String>> tour) {
     public KitJson {
         csv = csv == null ? CsvConvention.DETECTED : csv;
+        tour = tour == null ? List.of() : List.copyOf(tour);
+    }
+
+    /** Settings without a tour. */
+    public KitJson(KitSettings settings, Path stockCatalog, Path materials, Path crateCatalog, Path vehicleCatalog,
+                   CsvConvention csv) {
+        this(settings, stockCatalog, materials, crateCatalog, vehicleCatalog, csv, List.of());
     }
 
     /** The materials file: the named one, or {@code materials.csv} beside the tube catalog. */

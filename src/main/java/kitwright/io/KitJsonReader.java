@@ -33,7 +33,7 @@ public final class KitJsonReader {
     public static final List<String> KEYS = List.of("name", "description", "stockCatalog", "materials",
             "crateCatalog", "vehicleCatalog", "kerfMm", "trimMm", "minRemnantMm", "timeLimitSeconds",
             "structuresStandTogether", "endDeductionMm", "nestTolerance", "nestClearanceMm", "nestEndAllowanceMm",
-            "maxBundleMassKg", "jointBox", "spares", "miscutAllowance", "csv");
+            "maxBundleMassKg", "jointBox", "spares", "miscutAllowance", "csv", "tour");
     static final List<String> JOINT_BOX_KEYS = List.of("lengthMm", "widthMm", "heightMm", "maxMassKg");
     static final List<String> SPARES_KEYS = List.of("lossRatePerCycle", "cycles", "serviceLevel");
     static final List<String> MISCUT_ALLOWANCE_KEYS = List.of("piecesPerMark", "percent");
@@ -145,10 +145,11 @@ public final class KitJsonReader {
                 "a mass in kilograms above 0, or leave the key out for no limit").orElse(null);
         JointBox jointBox = jointBox(json, root);
         SparesPolicy spares = spares(json, root);
+        List<Sourced<String>> tour = json.tour(root);
         KitSettings settings = new KitSettings(name, description, kerf, trim, minRemnant, timeLimit, together,
                 endDeduction, tolerance, clearance, endAllowance, maxBundle, jointBox, spares,
-                miscutAllowance(json, root));
-        return new KitJson(settings, stock, materials, crates, vehicles, csv(json, root));
+                miscutAllowance(json, root), tour.stream().map(Sourced::value).toList());
+        return new KitJson(settings, stock, materials, crates, vehicles, csv(json, root), tour);
     }
 
     private static JointBox jointBox(KitJsonValues json, JsonNode root) {
@@ -239,11 +240,15 @@ public final class KitJsonReader {
         return text.get().charAt(0);
     }
 
-    /** Records the line of every key, as a JSON pointer (e.g. {@code /jointBox/lengthMm}). */
+    /**
+     * Records the line of every key, as a JSON pointer (e.g. {@code /jointBox/lengthMm}), and of every value in a
+     * list (e.g. {@code /tour/2}), so that one wrong entry of a long list is reported on its own line.
+     */
     private static void collectKeyLines(byte[] bytes, Map<String, Integer> lines) throws IOException {
         try (JsonParser parser = MAPPER.getFactory().createParser(bytes)) {
             for (JsonToken token = parser.nextToken(); token != null; token = parser.nextToken()) {
-                if (token == JsonToken.FIELD_NAME) {
+                boolean listEntry = parser.getParsingContext().inArray() && token != JsonToken.END_ARRAY;
+                if (token == JsonToken.FIELD_NAME || listEntry) {
                     lines.putIfAbsent(parser.getParsingContext().pathAsPointer().toString(),
                             parser.currentTokenLocation().getLineNr());
                 }

@@ -162,6 +162,46 @@ final class KitJsonValues {
         return tolerance;
     }
 
+    /**
+     * The structures of {@code tour} in building order, each with its line: a non-empty list of structure names
+     * (text). A wrong entry is reported on its line and left out; whether structures.csv has the names is checked
+     * with the kit. Empty when the key is absent or wrong.
+     */
+    List<Sourced<String>> tour(JsonNode root) {
+        String expected = "a list of the structures of structures.csv in the order they are built, e.g."
+                + " [\"screen-frame\", \"ticket-canopy\"]";
+        JsonNode value = value(root, "tour");
+        if (value == null) {
+            return List.of();
+        }
+        if (!value.isArray()) {
+            report("", "tour", "the value is " + kind(value) + " (expected " + expected + ")");
+            return List.of();
+        }
+        if (value.isEmpty()) {
+            report("", "tour", "the list is empty (expected " + expected + ", or leave the key out)");
+            return List.of();
+        }
+        if (value.size() > Limits.MAX_TOUR_LEGS) {
+            report("", "tour", "the list names " + value.size() + " structures, above the limit of "
+                    + Limits.MAX_TOUR_LEGS + " (expected " + expected + ")");
+            return List.of();
+        }
+        List<Sourced<String>> tour = new java.util.ArrayList<>();
+        for (int i = 0; i < value.size(); i++) {
+            JsonNode entry = value.get(i);
+            int line = lineOf("/tour/" + i);
+            if (!entry.isTextual() || entry.asText().isBlank()) {
+                String what = entry.isTextual() ? "blank text" : kind(entry);
+                problems.add(file, line, "tour", "entry " + (i + 1) + " is " + what + " (expected the name of a"
+                        + " structure of structures.csv, in double quotes)");
+                continue;
+            }
+            tour.add(new Sourced<>(entry.asText(), file, line));
+        }
+        return tour.size() == value.size() ? tour : List.of();
+    }
+
     /** A nested object, or null when not given (or not an object, which is reported). */
     JsonNode object(JsonNode root, String key, String expected) {
         JsonNode value = value(root, key);

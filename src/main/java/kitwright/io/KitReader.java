@@ -83,6 +83,8 @@ public final class KitReader {
         List<Sourced<StructureCount>> structures = tables.structures() != null
                 ? StructuresReader.read(tables.structures(), problems) : List.of();
         boolean structuresReadable = problems.count() == beforeStructures;
+        TourCheck.check(kitJson.tour(), tables.structuresName(), tables.structures() != null, structuresReadable,
+                structures, problems);
         List<Joint> joints = tables.joints() != null
                 ? JointsReader.read(tables.joints(), settings.jointBox(), problems) : List.of();
         Set<String> jointMarks = new LinkedHashSet<>();

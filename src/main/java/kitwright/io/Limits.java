@@ -17,6 +17,11 @@ public final class Limits {
      * a mark's bar-cycles (bars x cycles, at most {@link #MAX_COUNT} x this) within an {@code int}.
      */
     public static final int MAX_CYCLES = 10_000;
+    /**
+     * Most structures in a kit.json {@code tour}: 1,000 builds, one leg each and a report section per leg. Plan
+     * time grows with the distinct structures, not the legs, but the report and files grow with every leg.
+     */
+    public static final int MAX_TOUR_LEGS = 1_000;
     /** Largest other number: prices, masses, densities, costs, seconds. */
     public static final double MAX_NUMBER = 1e9;
     /** Largest input file, in bytes (64 MiB); also stops a device such as /dev/zero from being read forever. */

@@ -1,5 +1,7 @@
 package kitwright.model;
 
+import java.util.List;
+
 /**
  * Settings of a kit from {@code kit.json}, with the documented defaults. Catalog paths are resolved by the reader
  * and live on {@link Kit}; this record holds the planning parameters only.
@@ -17,12 +19,14 @@ package kitwright.model;
  * @param jointBox                the box joints travel in
  * @param spares                  service-life spares policy, or null for none
  * @param miscutAllowance         extra pieces per mark for saw errors [none]
+ * @param tour                    the structures in the order they are built, one leg each; a structure may come
+ *                                back (rebuilt at a later venue) [empty: no tour]
  */
 public record KitSettings(String name, String description, double kerfMm, double trimMm, double minRemnantMm,
                           double timeLimitSeconds, boolean structuresStandTogether, double endDeductionMm,
                           NestTolerance nestTolerance, double nestClearanceMm, double nestEndAllowanceMm,
                           Double maxBundleMassKg, JointBox jointBox, SparesPolicy spares,
-                          MiscutAllowance miscutAllowance) {
+                          MiscutAllowance miscutAllowance, List<String> tour) {
 
     public static final double DEFAULT_KERF_MM = 2.0;
     public static final double DEFAULT_TRIM_MM = 5.0;
@@ -36,6 +40,18 @@ public record KitSettings(String name, String description, double kerfMm, double
         nestTolerance = nestTolerance == null ? NestTolerance.WORST_CASE : nestTolerance;
         jointBox = jointBox == null ? JointBox.DEFAULT : jointBox;
         miscutAllowance = miscutAllowance == null ? MiscutAllowance.NONE : miscutAllowance;
+        tour = tour == null ? List.of() : List.copyOf(tour);
+    }
+
+    /** Settings without a tour. */
+    public KitSettings(String name, String description, double kerfMm, double trimMm, double minRemnantMm,
+                       double timeLimitSeconds, boolean structuresStandTogether, double endDeductionMm,
+                       NestTolerance nestTolerance, double nestClearanceMm, double nestEndAllowanceMm,
+                       Double maxBundleMassKg, JointBox jointBox, SparesPolicy spares,
+                       MiscutAllowance miscutAllowance) {
+        this(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds, structuresStandTogether,
+                endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm, maxBundleMassKg, jointBox, spares,
+                miscutAllowance, List.of());
     }
 
     /** Settings without a miscut allowance. */
@@ -58,36 +74,42 @@ public record KitSettings(String name, String description, double kerfMm, double
     public KitSettings withKerfMm(double value) {
         return new KitSettings(name, description, value, trimMm, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, miscutAllowance);
+                maxBundleMassKg, jointBox, spares, miscutAllowance, tour);
     }
 
     public KitSettings withTrimMm(double value) {
         return new KitSettings(name, description, kerfMm, value, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, miscutAllowance);
+                maxBundleMassKg, jointBox, spares, miscutAllowance, tour);
     }
 
     public KitSettings withMinRemnantMm(double value) {
         return new KitSettings(name, description, kerfMm, trimMm, value, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, miscutAllowance);
+                maxBundleMassKg, jointBox, spares, miscutAllowance, tour);
     }
 
     public KitSettings withTimeLimitSeconds(double value) {
         return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, value,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, miscutAllowance);
+                maxBundleMassKg, jointBox, spares, miscutAllowance, tour);
     }
 
     public KitSettings withNestTolerance(NestTolerance value) {
         return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, value, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, miscutAllowance);
+                maxBundleMassKg, jointBox, spares, miscutAllowance, tour);
     }
 
     public KitSettings withMiscutAllowance(MiscutAllowance value) {
         return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds,
                 structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
-                maxBundleMassKg, jointBox, spares, value);
+                maxBundleMassKg, jointBox, spares, value, tour);
+    }
+
+    public KitSettings withTour(List<String> value) {
+        return new KitSettings(name, description, kerfMm, trimMm, minRemnantMm, timeLimitSeconds,
+                structuresStandTogether, endDeductionMm, nestTolerance, nestClearanceMm, nestEndAllowanceMm,
+                maxBundleMassKg, jointBox, spares, miscutAllowance, value);
     }
 }
