@@ -24,7 +24,8 @@ final class OptionPlanners {
     static OptionPlanner pipeline(Consumer<String> progress) {
         return kitDir -> {
             Kit kit = KitReader.read(kitDir);
-            return OptionSummaries.of(Planner.run(kit, Planner.Options.DEFAULT, stages(kitDir, progress)));
+            return OptionSummaries.of(Planner.run(kit, Planner.Options.DEFAULT.withoutTourLegs(),
+                    stages(kitDir, progress)));
         };
     }
 

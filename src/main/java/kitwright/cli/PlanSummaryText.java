@@ -30,6 +30,9 @@ final class PlanSummaryText {
         } else {
             sb.append("Crates and trucks: not planned (no crate or vehicle catalog).").append(System.lineSeparator());
         }
+        if (result.tour() != null) {
+            sb.append(TourText.format(result.tour()));
+        }
         sb.append(System.lineSeparator()).append("Material and logistics planning only: no structural, lifting or"
                 + " load-securing check. Follow local codes and licensed professionals.").append(System.lineSeparator());
         return sb.toString();

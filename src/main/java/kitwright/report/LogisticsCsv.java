@@ -47,24 +47,28 @@ public final class LogisticsCsv {
     private LogisticsCsv() {
     }
 
+    /** The columns of {@code packing-lists.csv}. */
+    public static final List<String> PACKING_LIST_COLUMNS = List.of("crate", "type", "marks", "bundles", "bundle_ids",
+            "boxes", "box_ids", "gross_kg", "max_gross_kg");
+
     public static String packingLists(CratePlan plan, Iterable<Bundle> bundles) {
+        return CsvFile.text(PACKING_LIST_COLUMNS, packingListRows(plan, bundles));
+    }
+
+    /** The rows of {@link #packingLists}, cells as text, under {@link #PACKING_LIST_COLUMNS}. */
+    public static List<List<String>> packingListRows(CratePlan plan, Iterable<Bundle> bundles) {
         Map<String, Bundle> byId = new java.util.HashMap<>();
         bundles.forEach(b -> byId.put(b.id(), b));
         Map<String, JointBoxLoad> boxes = plan.boxes().stream()
                 .collect(Collectors.toMap(JointBoxLoad::id, Function.identity()));
-        StringWriter out = new StringWriter();
-        try (CSVPrinter csv = CsvFile.printer(out, List.of("crate", "type", "marks", "bundles", "bundle_ids", "boxes",
-                "box_ids", "gross_kg", "max_gross_kg"))) {
-            for (Crate c : plan.crates()) {
-                csv.printRecord(SpreadsheetCell.row(c.id(), c.type(),
-                        CrateContents.plainText(CrateContents.marks(c, byId, boxes)), c.items(ItemKind.BUNDLE).size(),
-                        CrateContents.refs(c, ItemKind.BUNDLE), c.items(ItemKind.BOX).size(),
-                        CrateContents.refs(c, ItemKind.BOX), number(c.grossKg(), 1), number(c.maxGrossKg(), 1)));
-            }
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
+        List<List<String>> rows = new java.util.ArrayList<>();
+        for (Crate c : plan.crates()) {
+            rows.add(List.of(c.id(), c.type(), CrateContents.plainText(CrateContents.marks(c, byId, boxes)),
+                    String.valueOf(c.items(ItemKind.BUNDLE).size()), CrateContents.refs(c, ItemKind.BUNDLE),
+                    String.valueOf(c.items(ItemKind.BOX).size()), CrateContents.refs(c, ItemKind.BOX),
+                    number(c.grossKg(), 1), number(c.maxGrossKg(), 1)));
         }
-        return out.toString();
+        return rows;
     }
 
     public static String manifests(LoadPlan plan) {
@@ -97,28 +101,33 @@ public final class LogisticsCsv {
         return v.axles() != null && v.axles().kingpin() ? "kingpin" : "front axle";
     }
 
+    /** The columns of {@code load-lists.csv}. */
+    public static final List<String> LOAD_LIST_COLUMNS = List.of("vehicle", "loading_step", "unloading_step", "crate",
+            "outer_length_mm", "outer_width_mm", "outer_height_mm", "gross_kg");
+
     /** One row per crate per vehicle, in loading order. */
     public static String loadLists(LoadPlan plan, CratePlan crates) {
+        return CsvFile.text(LOAD_LIST_COLUMNS, loadListRows(plan, crates));
+    }
+
+    /** The rows of {@link #loadLists}, cells as text, under {@link #LOAD_LIST_COLUMNS}. */
+    public static List<List<String>> loadListRows(LoadPlan plan, CratePlan crates) {
         Map<String, Crate> byId = crates.crates().stream().collect(Collectors.toMap(Crate::id, Function.identity()));
-        StringWriter out = new StringWriter();
-        try (CSVPrinter csv = CsvFile.printer(out, List.of("vehicle", "loading_step", "unloading_step", "crate",
-                "outer_length_mm", "outer_width_mm", "outer_height_mm", "gross_kg"))) {
-            for (VehicleLoad v : plan.vehicles()) {
-                int n = v.crates().size();
-                for (int i = 0; i < n; i++) {
-                    Crate c = byId.get(v.crates().get(i).ref());
-                    csv.printRecord(SpreadsheetCell.row(v.id(), i + 1, n - i, c.id(), number(c.outerLengthMm(), 0),
-                            number(c.outerWidthMm(), 0), number(c.outerHeightMm(), 0), number(c.grossKg(), 1)));
-                }
+        List<List<String>> rows = new java.util.ArrayList<>();
+        for (VehicleLoad v : plan.vehicles()) {
+            int n = v.crates().size();
+            for (int i = 0; i < n; i++) {
+                Crate c = byId.get(v.crates().get(i).ref());
+                rows.add(List.of(v.id(), String.valueOf(i + 1), String.valueOf(n - i), c.id(),
+                        number(c.outerLengthMm(), 0), number(c.outerWidthMm(), 0), number(c.outerHeightMm(), 0),
+                        number(c.grossKg(), 1)));
             }
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
         }
-        return out.toString();
+        return rows;
     }
 
     /** Plain decimal, rounded half up to {@code places}, without trailing zeros: 1234.50 gives "1234.5". */
-    static String number(double value, int places) {
+    public static String number(double value, int places) {
         BigDecimal d = BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_UP).stripTrailingZeros();
         if (d.signum() == 0) {
             return "0";

@@ -72,6 +72,15 @@ public final class LogisticsSection {
      */
     public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
                                    List<CrateType> catalog, Map<String, String> fillByMark) {
+        return of(crates, loads, bundles, catalog, fillByMark, "");
+    }
+
+    /**
+     * The block with its drawings' ids prefixed by {@code drawingPrefix} (letters, digits and '-'), so that several
+     * blocks (a tour's legs, whose crate and trip ids start again from 1) can stand on one page.
+     */
+    public static ReportSection of(CratePlan crates, LoadPlan loads, Iterable<Bundle> bundles,
+                                   List<CrateType> catalog, Map<String, String> fillByMark, String drawingPrefix) {
         Map<String, Bundle> byId = new java.util.HashMap<>();
         bundles.forEach(b -> byId.put(b.id(), b));
         Map<String, String> laneFills = new java.util.HashMap<>();
@@ -104,7 +113,8 @@ public final class LogisticsSection {
                 group.get(0).type(), group.size() == 1 ? null
                         : CrateContents.ids(group.stream().skip(1).map(Crate::id).toList(), ", "),
                 hosts(group.get(0), byId, fillByMark),
-                CrateSectionDrawing.draw("crate-" + group.get(0).id(), group.get(0), laneFills))).toList();
+                CrateSectionDrawing.draw(drawingPrefix + "crate-" + group.get(0).id(), group.get(0),
+                        laneFills))).toList();
         Map<String, Crate> crateById = crates.crates().stream()
                 .collect(Collectors.toMap(Crate::id, Function.identity()));
         List<TripRow> trips = loads.vehicles().stream().map(v -> new TripRow(v.id(), v.type(),
@@ -115,7 +125,8 @@ public final class LogisticsSection {
                 AxleLoadText.of(v), v.balanceNote())).toList();
         List<TripDrawing> tripDrawings = new ArrayList<>();
         for (VehicleLoad v : loads.vehicles()) {
-            tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw("deck-" + v.id(), v, crateById)));
+            tripDrawings.add(new TripDrawing(v.id(), v.type(), DeckPlanDrawing.draw(drawingPrefix + "deck-" + v.id(), v,
+                    crateById)));
         }
         View view = new View(figures, status(crates.status(), crates.bounds().gap()), statusClass(crates.status()),
                 reason(crates.status(), crates.reason()), status(loads.status(), loads.bounds().gap()),

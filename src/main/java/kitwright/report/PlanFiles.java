@@ -13,6 +13,10 @@ import kitwright.report.cutting.RackAfterCsv;
 import kitwright.report.cutting.RackPullCsv;
 import kitwright.report.labels.LabelSet;
 import kitwright.report.labels.LabelsHtml;
+import kitwright.report.tour.LegSection;
+import kitwright.report.tour.LegsCsv;
+import kitwright.report.tour.LegsJson;
+import kitwright.report.tour.TourSection;
 
 /**
  * The files of a plan folder, as text by file name, in a fixed order: a pure function of the plan and the report
@@ -58,6 +62,9 @@ public final class PlanFiles {
             files.put(LogisticsCsv.MANIFESTS, LogisticsCsv.manifests(result.loads()));
             files.put(LogisticsCsv.LOAD_LISTS, LogisticsCsv.loadLists(result.loads(), result.crates()));
         }
+        if (result.tour() != null) {
+            files.putAll(LegsCsv.files(result.tour()));
+        }
         return files;
     }
 
@@ -71,6 +78,9 @@ public final class PlanFiles {
         root.put("nesting", result.nesting().plan());
         root.put("crates", result.crates());
         root.put("loads", result.loads());
+        if (result.tour() != null) {
+            root.put("legs", LegsJson.of(result.tour())); // issue 14: absent without a tour
+        }
         // Issue 7: service-life spares (null without a policy in kit.json) and the kit's figures.
         root.put("spares", PlanFiguresJson.spares(result.spares()));
         root.put("figures", PlanFiguresJson.figures(result.figures()));
@@ -85,10 +95,19 @@ public final class PlanFiles {
             builder.section(LogisticsSection.of(result.crates(), result.loads(), result.nesting().plan().bundles(),
                     result.kit().crates(), MarkPalette.of(result.kit()).fills()));
             LogisticsCautions.all().forEach(c -> builder.caution(c.heading(), c.text()));
+            if (result.tour() != null) {
+                builder.section(TourSection.of(result.tour()));
+                result.tour().legs().forEach(leg -> builder.section(LegSection.of(leg, result.kit().crates(),
+                        MarkPalette.of(result.kit()).fills())));
+            }
         } else {
             builder.caution("Crates and trucks not planned", "The kit has no crate or vehicle catalog, so"
                     + " crating and loading were skipped. Add crates.csv and vehicles.csv beside the tube catalog"
                     + " or name them in kit.json.");
+            if (!result.kit().settings().tour().isEmpty()) {
+                builder.caution("Tour legs not planned", "kit.json has a tour, but without a crate and a vehicle"
+                        + " catalog its legs cannot be crated and loaded.");
+            }
         }
         builder.section(KitFiguresSection.of(result.kit(), result.figures(), result.spares()));
         return builder.build();
