@@ -43,6 +43,24 @@ class PlannerTest {
             "rack-pull.csv", "cut-list.csv", "rack-after.csv", "nests.csv", "assembly-order.csv", "labels.html",
             "packing-lists.csv", "manifests.csv", "load-lists.csv", "plan.xlsx");
 
+    /** The files of {@link #CHAIN_FILES}, with the tour's leg files before plan.xlsx when the kit has a tour. */
+    static List<String> chainFiles(Kit kit) {
+        List<String> files = new java.util.ArrayList<>(CHAIN_FILES);
+        if (!kit.settings().tour().isEmpty()) {
+            files.addAll(files.size() - 1, List.of("legs.csv", "leg-packing-lists.csv", "leg-load-lists.csv"));
+        }
+        return files;
+    }
+
+    /** The stages timed: the chain's, and the tour's legs when the kit has a tour. */
+    static List<String> stages(Kit kit) {
+        List<String> stages = new java.util.ArrayList<>(Planner.STAGES);
+        if (!kit.settings().tour().isEmpty()) {
+            stages.add(Planner.TOUR_STAGE);
+        }
+        return stages;
+    }
+
     static Stream<Path> sampleKits() throws Exception {
         try (Stream<Path> kits = Files.list(Path.of("sample-kits"))) {
             return kits.filter(p -> Files.exists(p.resolve("bars.csv"))).sorted().toList().stream();
@@ -73,12 +91,17 @@ class PlannerTest {
         assertThat(result.crates().lowerBound()).isLessThanOrEqualTo(result.crates().crates().size());
         assertThat(result.loads().status()).isIn(Status.OPTIMAL, Status.FEASIBLE);
         assertThat(result.loads().lowerBound()).isLessThanOrEqualTo(result.loads().tripCost() + 1e-9);
-        assertThat(PlanFiles.written(result, DATE).keySet()).containsExactlyElementsOf(CHAIN_FILES);
-        assertThat(result.stageSeconds().keySet()).containsExactlyElementsOf(Planner.STAGES);
+        assertThat(PlanFiles.written(result, DATE).keySet()).containsExactlyElementsOf(chainFiles(kit));
+        assertThat(result.stageSeconds().keySet()).containsExactlyElementsOf(stages(kit));
 
         JsonNode plan = PrettyJson.mapper().readTree(files.get("plan.json"));
-        assertThat(KitFiles.listOf(plan.fieldNames())).containsExactly("kit", "date", "summary", "cutting", "nesting",
-                "crates", "loads", "spares", "figures");
+        List<String> keys = new java.util.ArrayList<>(List.of("kit", "date", "summary", "cutting", "nesting",
+                "crates", "loads", "spares", "figures"));
+        if (result.tour() != null) {
+            keys.add(keys.indexOf("loads") + 1, "legs");
+            assertThat(plan.get("legs")).hasSize(kit.settings().tour().size() + 1);
+        }
+        assertThat(KitFiles.listOf(plan.fieldNames())).containsExactlyElementsOf(keys);
         assertThat(plan.get("date").asText()).isEqualTo("2026-12-01");
         assertThat(plan.get("nesting").get("bundles")).hasSize(nesting.bundles().size());
         assertThat(plan.get("loads").get("vehicles")).hasSize(result.loads().vehicles().size());
@@ -96,18 +119,20 @@ class PlannerTest {
 
         assertThat(one.exitCode()).as(one.err()).isEqualTo(ExitCode.OK.code());
         assertThat(two.exitCode()).as(two.err()).isEqualTo(ExitCode.OK.code());
-        Set<String> expected = new LinkedHashSet<>(CHAIN_FILES);
+        Kit kit = KitReader.read(Path.of("sample-kits", "cinema-12"));
+        assertThat(kit.settings().tour()).as("the sample tours its structures").isNotEmpty();
+        Set<String> expected = new LinkedHashSet<>(chainFiles(kit));
         expected.addAll(FOLDER_EXTRAS);
         assertThat(KitFiles.entries(first)).containsExactlyInAnyOrderElementsOf(expected);
         assertThat(KitFiles.entries(second)).containsExactlyInAnyOrderElementsOf(expected);
-        for (String name : CHAIN_FILES) {
+        for (String name : chainFiles(kit)) {
             byte[] a = Files.readAllBytes(first.resolve(name));
             byte[] b = Files.readAllBytes(second.resolve(name));
             assertThat(a).as(name + " is not empty").isNotEmpty();
             assertThat(b).as(name + " the same in both runs").isEqualTo(a);
         }
         JsonNode timing = PrettyJson.mapper().readTree(first.resolve("timing.json").toFile());
-        assertThat(KitFiles.listOf(timing.get("stageSeconds").fieldNames())).containsExactlyElementsOf(Planner.STAGES);
+        assertThat(KitFiles.listOf(timing.get("stageSeconds").fieldNames())).containsExactlyElementsOf(stages(kit));
         assertThat(Files.readString(first.resolve("report.html"), StandardCharsets.UTF_8))
                 .contains("2026-12-01").doesNotContain("<script");
     }

@@ -89,6 +89,9 @@ public final class PlanValidator {
                 "a nesting reason exactly when the nesting is INFEASIBLE");
         cutPiecesAreTubes(result);
         idsReadLikeNoMark(result);
+        if (result.tour() != null) {
+            TourValidator.validate(kit, result.tour());
+        }
         if (!result.logisticsPlanned()) {
             check(result.crates() == null && result.loads() == null, "crates and loads planned together or not");
             check(kit.crates().isEmpty() || kit.vehicles().isEmpty(), "logistics skipped only without a catalog");

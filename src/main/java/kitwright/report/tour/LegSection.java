@@ -24,7 +24,8 @@ public final class LegSection {
     record Figure(String label, String value, String note) {
     }
 
-    record Step(String vehicle, String type, String step, String crate, String crateType, String gross,
+    /** One crate of a vehicle in loading order; the trip and vehicle are shown on the vehicle's first row. */
+    record Step(String trip, String vehicle, String type, String step, String crate, String crateType, String gross,
                 String unloading) {
     }
 
@@ -58,23 +59,24 @@ public final class LegSection {
                 + " above).";
         String assumption = TourSection.assumption(leg);
         List<Figure> figures = new ArrayList<>();
-        figures.add(new Figure("Crates", planned ? ShopFormat.count(s.crates().crates().size()) : ShopFormat.UNKNOWN,
-                "cost " + TourSection.money(planned ? s.crateCost() : null)));
-        figures.add(new Figure("Trips", planned ? ShopFormat.count(s.loads().vehicles().size()) : ShopFormat.UNKNOWN,
-                "cost " + TourSection.money(planned ? s.tripCost() : null)));
+        int crates = s.crates().crates().size();
+        int trips = s.loads().vehicles().size();
         figures.add(new Figure("Crates and trips", TourSection.money(s.loads().totalCost()),
                 "proven lower bound " + TourSection.money(s.loads().totalLowerBound())));
-        figures.add(new Figure("Gross mass", planned ? ShopFormat.kg(LegFigures.grossKg(s)) + " kg"
-                : ShopFormat.UNKNOWN, ShopFormat.count(s.crates().boxes().size()) + " joint boxes"));
+        figures.add(new Figure("Crate cost", TourSection.money(planned ? s.crateCost() : null),
+                ShopFormat.count(crates) + (crates == 1 ? " crate, " : " crates, ")
+                        + (planned ? ShopFormat.kg(LegFigures.grossKg(s)) : ShopFormat.UNKNOWN) + " kg gross"));
+        figures.add(new Figure("Trip cost", TourSection.money(planned ? s.tripCost() : null),
+                ShopFormat.count(trips) + (trips == 1 ? " trip" : " trips")));
         List<Step> steps = new ArrayList<>();
         if (planned) {
-            Map<String, Crate> crates = new java.util.HashMap<>();
-            s.crates().crates().forEach(c -> crates.put(c.id(), c));
+            Map<String, Crate> byId = new java.util.HashMap<>();
+            s.crates().crates().forEach(c -> byId.put(c.id(), c));
             for (var v : s.loads().vehicles()) {
                 int n = v.crates().size();
                 for (int i = 0; i < n; i++) {
-                    Crate c = crates.get(v.crates().get(i).ref());
-                    steps.add(new Step(i == 0 ? v.id() : "", i == 0 ? v.type() : "", String.valueOf(i + 1), c.id(),
+                    Crate c = byId.get(v.crates().get(i).ref());
+                    steps.add(new Step(v.id(), i == 0 ? v.id() : "", i == 0 ? v.type() : "", String.valueOf(i + 1), c.id(),
                             c.type(), ShopFormat.kg(c.grossKg()), String.valueOf(n - i)));
                 }
             }
