@@ -41,6 +41,8 @@ import picocli.CommandLine.Spec;
             "  nests.csv          which tube goes inside which; assembly-order.csv, innermost first",
             "  packing-lists.csv  per crate: marks and counts, bundles, boxes, gross mass",
             "  manifests.csv      per vehicle: crates, mass, floor length, centre of gravity",
+            "  legs.csv           with a kit.json tour: one row per leg, its crates, trips and costs;",
+            "                     leg-packing-lists.csv and leg-load-lists.csv every leg's lists",
             "  plan.xlsx          every CSV above as one workbook, a sheet per CSV named as the file",
             "  plan.json          every stage as data; summary.json the kit summary",
             "  timing.json        seconds per stage (the only file that changes between identical runs)",
