@@ -79,7 +79,7 @@ public final class PlanFiles {
         root.put("crates", result.crates());
         root.put("loads", result.loads());
         if (result.tour() != null) {
-            root.put("legs", LegsJson.of(result.tour())); // issue 14: absent without a tour
+            root.put("legs", LegsJson.of(result.tour())); // absent, not empty, without a tour
         }
         // Issue 7: service-life spares (null without a policy in kit.json) and the kit's figures.
         root.put("spares", PlanFiguresJson.spares(result.spares()));
