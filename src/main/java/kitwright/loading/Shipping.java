@@ -78,6 +78,8 @@ public final class Shipping {
         double bestTotal = total(best, catalog);
         List<Integer> all = indices(catalog.size());
         List<List<Integer>> tried = new ArrayList<>();
+        // each family's bound (by its crate types), solved once for the candidates' checks and the total's bound
+        java.util.Map<List<Integer>, Double> families = new java.util.HashMap<>();
         tried.add(all);
         for (VehicleType v : setting.vehicles()) {
             List<Integer> part = new ArrayList<>();
@@ -90,7 +92,8 @@ public final class Shipping {
                 continue;
             }
             tried.add(part);
-            double partBound = ShippingCostBound.compute(demand, catalog, part, setting.vehicles(), deadline);
+            double partBound = ShippingCostBound.compute(demand, catalog, part, setting.vehicles(), deadline,
+                    Integer.MAX_VALUE, families);
             if (partBound >= bestTotal - 1e-6 * bestTotal) {
                 continue;
             }
@@ -111,7 +114,8 @@ public final class Shipping {
                 bestTotal = total;
             }
         }
-        double bound = ShippingCostBound.compute(demand, catalog, all, setting.vehicles(), deadline);
+        double bound = ShippingCostBound.compute(demand, catalog, all, setting.vehicles(), deadline,
+                Integer.MAX_VALUE, families);
         return new Shipment(best.crates(), best.loads().withTotal(bestTotal, bound));
     }
 

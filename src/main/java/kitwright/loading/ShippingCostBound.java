@@ -32,14 +32,15 @@ import kitwright.packing.CratingDemand;
  *            for every vehicle type v:
  *              sum_t (w_tv + tare_t x_tv)           &lt;= payload_v z_v        (gross mass)
  *              sum_t outerVolume_t x_tv               &lt;= deck volume_v z_v   (to the load height)
- *              sum_{t not stackable} footprint_t x_tv &lt;= deck area_v z_v
+ *              the floor, stacking and top-load rows of {@link #stacking}
  * </pre>
  * Proof that every plan of family S is feasible for it: take y, x, z as its counts and w as its contents. An item
  * longer than l_(k-1) lies lengthwise in a crate at least as long inside, so in a type with L_t &gt;= l_k; the items
  * in a crate take no more than its inner volume (their solid volumes) and its net capacity. A vehicle's crates
  * weigh at most its payload and fill at most its volume up to the load height. A crate that is not stackable carries
  * nothing, so it tops a stack whose base covers at least its footprint (crates stand only fully on a crate below);
- * the stacks' bases do not overlap, so those footprints sum to at most the deck area. Hence the plan's total is at
+ * the stacks' bases do not overlap, so those footprints sum to at most the deck area; the rest of the stacking rows
+ * is proved at {@link #stacking}. Hence the plan's total is at
  * least the program's optimum, which is at least SCIP's proven bound, which is at least the least over the families.
  * Families whose crate types cannot hold some bundle (longer than every type of S) are empty and skipped.
  *
@@ -60,11 +61,32 @@ final class ShippingCostBound {
     /** The bound over every plan whose crate types are all among {@code usable} (indices into the catalog). */
     static double compute(CratingDemand demand, List<CrateType> crates, List<Integer> usable,
                           List<VehicleType> vehicles, Deadline deadline) {
+        return compute(demand, crates, usable, vehicles, deadline, Integer.MAX_VALUE);
+    }
+
+    /**
+     * The bound over every such plan of at most {@code maxCrates} crates (sum_t y_t &lt;= maxCrates added to each
+     * family); +infinity when the programme proves that no such plan exists.
+     */
+    static double compute(CratingDemand demand, List<CrateType> crates, List<Integer> usable,
+                          List<VehicleType> vehicles, Deadline deadline, int maxCrates) {
+        return compute(demand, crates, usable, vehicles, deadline, maxCrates, new java.util.HashMap<>());
+    }
+
+    /**
+     * As above, each family's bound taken from {@code known} when there (keyed by its crate types, for the same
+     * demand, catalogs and crate limit) and put there when solved, so that the calls of one shipment solve each
+     * family once.
+     */
+    static double compute(CratingDemand demand, List<CrateType> crates, List<Integer> usable,
+                          List<VehicleType> vehicles, Deadline deadline, int maxCrates,
+                          java.util.Map<List<Integer>, Double> known) {
         if (demand.isEmpty()) {
             return 0;
         }
         if (usable.size() > MAX_FAMILY_TYPES) {
-            return family(demand, crates, usable, false, vehicles, deadline);
+            return known.computeIfAbsent(List.copyOf(usable),
+                    k -> family(demand, crates, k, false, vehicles, deadline, maxCrates));
         }
         double least = Double.POSITIVE_INFINITY;
         for (int mask = 1; mask < (1 << usable.size()); mask++) {
@@ -74,14 +96,15 @@ final class ShippingCostBound {
                     set.add(usable.get(i));
                 }
             }
-            least = Math.min(least, family(demand, crates, set, true, vehicles, deadline));
+            least = Math.min(least, known.computeIfAbsent(List.copyOf(set),
+                    k -> family(demand, crates, k, true, vehicles, deadline, maxCrates)));
         }
         return least;
     }
 
     /** The family's bound; +infinity when no plan of it exists; 0 when the solver proves nothing. */
     private static double family(CratingDemand demand, List<CrateType> crates, List<Integer> set, boolean eachOnce,
-                                 List<VehicleType> vehicles, Deadline deadline) {
+                                 List<VehicleType> vehicles, Deadline deadline, int maxCrates) {
         double longestInside = set.stream().mapToDouble(t -> crates.get(t).innerLengthMm()).max().orElse(0);
         if (demand.items().stream().anyMatch(i -> i.bundle() && i.lengthMm() > longestInside + 1e-6)) {
             return Double.POSITIVE_INFINITY;
@@ -128,23 +151,28 @@ final class ShippingCostBound {
                 }
             }
             lengthClasses(solver, demand, crates, set, y, w);
+            if (maxCrates < Integer.MAX_VALUE) {
+                // sum_t y_t <= maxCrates
+                MPConstraint count = solver.makeConstraint(Double.NEGATIVE_INFINITY, maxCrates, "crate_count");
+                for (MPVariable crateCount : y) {
+                    count.setCoefficient(crateCount, 1);
+                }
+            }
             for (int v = 0; v < m; v++) {
                 VehicleType t = vehicles.get(v);
                 MPConstraint gross = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "payload_" + v);
                 MPConstraint volume = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "volume_" + v);
-                MPConstraint floor = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "floor_" + v);
                 gross.setCoefficient(z[v], -(t.payloadKg() + DeckFiller.PAYLOAD_TOLERANCE_KG));
                 volume.setCoefficient(z[v], -t.deckLengthMm() * t.deckWidthMm() * t.loadHeightMm() / M3);
-                floor.setCoefficient(z[v], -t.deckLengthMm() * t.deckWidthMm() / M2);
                 for (int i = 0; i < n; i++) {
                     CrateType c = crates.get(set.get(i));
                     gross.setCoefficient(w[i][v], 1);
                     gross.setCoefficient(x[i][v], c.tareKg());
                     volume.setCoefficient(x[i][v], c.outerLengthMm() * c.outerWidthMm() * c.outerHeightMm() / M3);
-                    if (!c.stackable()) {
-                        floor.setCoefficient(x[i][v], c.outerLengthMm() * c.outerWidthMm() / M2);
-                    }
                 }
+            }
+            for (int v = 0; v < m; v++) {
+                stacking(solver, crates, set, vehicles.get(v), v, x, w, z[v]);
             }
             solver.setSolverSpecificParametersAsString("limits/nodes = " + MAX_NODES + "\n");
             solver.setTimeLimit((long) Math.ceil(deadline.remainingSeconds() * 1000));
@@ -188,6 +216,111 @@ final class ShippingCostBound {
             }
             previous = lengths[k];
         }
+    }
+
+    /**
+     * What the stacking rules imply for the crates of the family on vehicle type v. A crate stands on the floor or
+     * directly on one stackable crate at least as long and as wide (either way round, to be safe), within the load
+     * height together, and within the top load of every crate below. So the x_tv crates split into f_tv on the floor
+     * (integer) and u_tv on another crate, and their contents' mass w_tv into wf + wu:
+     * <pre>
+     *   x_tv = f_tv + u_tv;   w_tv - wu_tv &lt;= net_t f_tv;   wu_tv &lt;= min(net_t, topMax_t - tare_t) u_tv
+     *   u_tv = 0 where no type of the family can carry t (topMax_t: the largest top load of those that can)
+     *   sum_t (tare_t u_tv + wu_tv) &lt;= sum_{o stackable} topLoad_o x_ov      (each upper crate weighs on the one
+     *                                                                       below it, within its top load)
+     *   floor crates:          sum_t footprint_t f_tv &lt;= deck area z_v;   f_tv &lt;= sideBySide_tv z_v;   lanes of f
+     *   not stackable crates:  the same with x_tv (each tops its own stack, so they never overlap seen from above)
+     * </pre>
+     * sideBySide is the grid count for equal rectangles of fixed orientation ({@link StackingRules#sideBySide});
+     * the lanes are those of crates that fit one way only ({@link FloorLanes}).
+     */
+    private static void stacking(MPSolver solver, List<CrateType> crates, List<Integer> set, VehicleType vehicle,
+                                 int v, MPVariable[][] x, MPVariable[][] w, MPVariable trips) {
+        int n = set.size();
+        List<CrateClass> classes = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            CrateType c = crates.get(set.get(i));
+            classes.add(new CrateClass(i, c.outerLengthMm(), c.outerWidthMm(), c.outerHeightMm(), c.tareKg(),
+                    c.stackable(), c.maxTopLoadKg(), 2));
+        }
+        MPVariable[] onFloor = new MPVariable[n];
+        MPConstraint carried = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "v" + v + "_top_load");
+        for (int i = 0; i < n; i++) {
+            CrateType c = crates.get(set.get(i));
+            boolean rides = rides(c, vehicle);
+            double topMax = Double.NEGATIVE_INFINITY;
+            for (CrateClass o : classes) {
+                if (o.stackable() && carries(o, classes.get(i), vehicle.loadHeightMm())) {
+                    topMax = Math.max(topMax, o.maxTopLoadKg());
+                }
+            }
+            double net = Math.max(0, c.maxGrossKg() - c.tareKg());
+            boolean up = rides && topMax >= c.tareKg() - EPS;
+            onFloor[i] = solver.makeIntVar(0, rides ? Double.POSITIVE_INFINITY : 0, "floor_" + i + "_" + v);
+            MPVariable upper = solver.makeNumVar(0, up ? Double.POSITIVE_INFINITY : 0, "upper_" + i + "_" + v);
+            MPVariable upperMass = solver.makeNumVar(0, up ? Double.POSITIVE_INFINITY : 0, "upper_mass_" + i + "_" + v);
+            // x_tv = f_tv + u_tv
+            MPConstraint split = solver.makeConstraint(0, 0, "split_" + i + "_" + v);
+            split.setCoefficient(x[i][v], 1);
+            split.setCoefficient(onFloor[i], -1);
+            split.setCoefficient(upper, -1);
+            // w_tv - wu_tv <= net_t f_tv
+            MPConstraint floorMass = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "floor_mass_" + i + "_" + v);
+            floorMass.setCoefficient(w[i][v], 1);
+            floorMass.setCoefficient(upperMass, -1);
+            floorMass.setCoefficient(onFloor[i], -net);
+            // wu_tv <= min(net_t, topMax_t - tare_t) u_tv
+            MPConstraint upperNet = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "upper_net_" + i + "_" + v);
+            upperNet.setCoefficient(upperMass, 1);
+            upperNet.setCoefficient(upper, -(up ? Math.max(0, Math.min(net, topMax - c.tareKg())) : 0));
+            carried.setCoefficient(upper, c.tareKg());
+            carried.setCoefficient(upperMass, 1);
+            if (c.stackable()) {
+                carried.setCoefficient(x[i][v], -c.maxTopLoadKg());
+            }
+        }
+        MPVariable[] all = new MPVariable[n];
+        for (int i = 0; i < n; i++) {
+            all[i] = x[i][v];
+        }
+        List<CrateClass> tops = classes.stream().filter(c -> !c.stackable()).toList();
+        apart(solver, classes, onFloor, vehicle, trips, "v" + v + "_floor_");
+        apart(solver, tops, all, vehicle, trips, "v" + v + "_tops_");
+    }
+
+    /** Whether {@code lower} may carry {@code upper} by size and height, either way round. */
+    private static boolean carries(CrateClass lower, CrateClass upper, double loadHeight) {
+        boolean straight = upper.lengthMm() <= lower.lengthMm() + EPS && upper.widthMm() <= lower.widthMm() + EPS;
+        boolean turned = upper.widthMm() <= lower.lengthMm() + EPS && upper.lengthMm() <= lower.widthMm() + EPS;
+        return (straight || turned) && upper.heightMm() + lower.heightMm() <= loadHeight + EPS;
+    }
+
+    /**
+     * Crates of the given classes that never overlap seen from above, count[c.index()] of them on the z vehicles:
+     * footprints within the deck area, at most sideBySide of a class per vehicle, and their lanes.
+     */
+    private static void apart(MPSolver solver, List<CrateClass> group, MPVariable[] count, VehicleType vehicle,
+                              MPVariable trips, String name) {
+        List<CrateClass> riding = group.stream().filter(c -> DeckFiller.fitsVehicle(c, vehicle)).toList();
+        if (riding.isEmpty()) {
+            return;
+        }
+        MPConstraint area = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, name + "area");
+        area.setCoefficient(trips, -vehicle.deckLengthMm() * vehicle.deckWidthMm() / M2);
+        double narrowest = Double.POSITIVE_INFINITY;
+        for (CrateClass c : riding) {
+            area.setCoefficient(count[c.index()], c.footprint() / M2);
+            MPConstraint side = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, name + "side_" + c.index());
+            side.setCoefficient(count[c.index()], 1);
+            side.setCoefficient(trips, -StackingRules.sideBySide(c, vehicle));
+            if (StackingRules.fixedOrientation(c, vehicle)) {
+                narrowest = Math.min(narrowest, c.acrossDeck(StackingRules.turned(c, vehicle)));
+            }
+        }
+        List<CrateClass> fixed = riding.stream().filter(c -> StackingRules.fixedOrientation(c, vehicle)).toList();
+        MPVariable[] onV = fixed.stream().map(c -> count[c.index()]).toArray(MPVariable[]::new);
+        FloorLanes.add(solver, fixed, onV, vehicle, Math.floor(vehicle.deckWidthMm() / narrowest + 1e-9), trips,
+                name);
     }
 
     /** Whether one crate of the type, empty, can ride on the vehicle at all. */

@@ -31,45 +31,19 @@ import kitwright.natives.SolverLibraries;
 final class WholeVehicleBound {
     /** Deterministic work limit: SCIP branch-and-bound nodes (the sample kits need 0 or 1). */
     private static final int MAX_NODES = 10_000;
-    private static final int MAX_LANE_PATTERNS = 2000;
     /** The lambdas of the payload cuts ({@link #massCuts}). */
     private static final double[] LAMBDAS = {0.5, 0.4, 0.3, 0.2, 0.1};
 
     private WholeVehicleBound() {
     }
 
-    /**
-     * The lanes of fixed-orientation crates of one set on vehicle type v as patterns ({@link LanePatterns}):
-     * sum_q z_q <= k y_v and x_cv <= sum_q a_cq z_q. Skipped when there are too many patterns.
-     */
+    /** The lanes of the fixed-orientation crates of one set on vehicle type v ({@link FloorLanes}). */
     private static void lanePatterns(MPSolver solver, List<CrateClass> classes, boolean[] set, VehicleType t, int v,
                                      double k, MPVariable[][] x, MPVariable y) {
         List<CrateClass> fixed = classes.stream().filter(c -> set[c.index()] && StackingRules.fixedOrientation(c, t)
                 && DeckFiller.fitsVehicle(c, t)).toList();
-        if (fixed.isEmpty()) {
-            return;
-        }
-        double[] lengths = fixed.stream().mapToDouble(c -> c.alongDeck(StackingRules.turned(c, t))).toArray();
-        List<int[]> patterns = LanePatterns.maximal(lengths, t.deckLengthMm(), MAX_LANE_PATTERNS);
-        if (patterns == null) {
-            return;
-        }
-        MPConstraint lanes = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "lane_count_" + v);
-        lanes.setCoefficient(y, -k);
-        MPConstraint[] covers = new MPConstraint[fixed.size()];
-        for (int i = 0; i < fixed.size(); i++) {
-            covers[i] = solver.makeConstraint(Double.NEGATIVE_INFINITY, 0, "lane_cover_" + v + "_" + i);
-            covers[i].setCoefficient(x[fixed.get(i).index()][v], 1);
-        }
-        for (int q = 0; q < patterns.size(); q++) {
-            MPVariable z = solver.makeNumVar(0, Double.POSITIVE_INFINITY, "lane_" + v + "_" + q);
-            lanes.setCoefficient(z, 1);
-            for (int i = 0; i < fixed.size(); i++) {
-                if (patterns.get(q)[i] > 0) {
-                    covers[i].setCoefficient(z, -patterns.get(q)[i]);
-                }
-            }
-        }
+        MPVariable[] onV = fixed.stream().map(c -> x[c.index()][v]).toArray(MPVariable[]::new);
+        FloorLanes.add(solver, fixed, onV, t, k, y, "v" + v + "_");
     }
 
     /**

@@ -36,7 +36,7 @@ class PayloadCutsReferenceTest {
                 mass[i] = 100 + random.nextInt(PAYLOAD - 99);
                 crates.add(new CrateClass(i, 1000, 1000, 1000, mass[i], false, 0, 1));
             }
-            int optimum = binPacking(mass);
+            int optimum = binPacking(mass, PAYLOAD);
             double bound = WholeVehicleBound.compute(crates, List.of(truck), new double[] {1});
             assertThat(bound).as("masses %s", java.util.Arrays.toString(mass)).isLessThanOrEqualTo(optimum + 1e-6);
             if (bound >= optimum - 1e-6) {
@@ -47,15 +47,15 @@ class PayloadCutsReferenceTest {
         assertThat(met).as("sets where the bound is the optimum").isGreaterThanOrEqualTo(190);
     }
 
-    /** Fewest bins of PAYLOAD for the masses, by Choco (binPacking constraint, minimising the bins used). */
-    private static int binPacking(int[] mass) {
+    /** Fewest bins of the capacity for the masses, by Choco (binPacking constraint, minimising the bins used). */
+    static int binPacking(int[] mass, int capacity) {
         int n = mass.length;
         Model model = new Model("bins");
         IntVar[] bin = new IntVar[n];
         for (int i = 0; i < n; i++) {
             bin[i] = model.intVar("bin" + i, 0, i); // symmetry: crate i goes into one of the first i + 1 bins
         }
-        IntVar[] load = model.intVarArray("load", n, 0, PAYLOAD);
+        IntVar[] load = model.intVarArray("load", n, 0, capacity);
         model.binPacking(bin, mass, load, 0).post();
         IntVar used = model.intVar("used", 1, n);
         model.nValues(bin, used).post();
